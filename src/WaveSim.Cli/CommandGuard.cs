@@ -1,0 +1,37 @@
+using WaveSim.Core;
+using WaveSim.Core.Units;
+
+namespace WaveSim.Cli;
+
+/// <summary>
+/// Runs a command's body and turns every expected failure into one "error: ..." line on stderr
+/// and the matching exit code, so that no stack trace ever reaches the user.
+/// </summary>
+public static class CommandGuard
+{
+    /// <summary>Runs <paramref name="body"/>, mapping exceptions to exit codes.</summary>
+    public static int Run(TextWriter error, Func<int> body)
+    {
+        try
+        {
+            return body();
+        }
+        catch (OperationCanceledException)
+        {
+            error.WriteLine("error: cancelled");
+            return ExitCodes.Cancelled;
+        }
+        catch (NumericalException ex)
+        {
+            error.WriteLine("error: " + ex.Message);
+            return ExitCodes.NumericalFailure;
+        }
+        catch (Exception ex) when (ex is InputException or UnitException or IOException or UnauthorizedAccessException)
+        {
+            error.WriteLine("error: " + OneLine(ex.Message));
+            return ExitCodes.BadInput;
+        }
+    }
+
+    static string OneLine(string s) => s.ReplaceLineEndings(" ");
+}

@@ -1,0 +1,16 @@
+namespace WaveSim.Cli;
+
+/// <summary>The process exit codes, documented in the README.</summary>
+public static class ExitCodes
+{
+    /// <summary>Success.</summary>
+    public const int Ok = 0;
+    /// <summary>The command line itself was wrong (unknown option, missing argument).</summary>
+    public const int Usage = 1;
+    /// <summary>An input file (scenario, capture) or an option value was wrong.</summary>
+    public const int BadInput = 2;
+    /// <summary>The computation failed (NaN, infinity, no convergence).</summary>
+    public const int NumericalFailure = 3;
+    /// <summary>Stopped by Ctrl+C.</summary>
+    public const int Cancelled = 130;
+}
