@@ -1,0 +1,324 @@
+using System.Globalization;
+using WaveSim.Core.Model;
+using WaveSim.Core.Units;
+using YamlDotNet.Core;
+using YamlDotNet.RepresentationModel;
+
+namespace WaveSim.Core.Scenarios;
+
+/// <summary>
+/// Reads a scenario YAML file into a validated <see cref="Scenario"/>. Every problem is reported as a
+/// <see cref="ScenarioException"/> naming the file, line, column and key.
+/// </summary>
+public static class ScenarioLoader
+{
+    /// <summary>The top-level keys accepted.</summary>
+    public static readonly string[] TopKeys = ["title", "source", "line", "load", "probes", "simulation"];
+    /// <summary>The keys accepted under <c>source</c>.</summary>
+    public static readonly string[] SourceKeys = ["waveform", "low", "high", "rise", "fall", "delay", "width", "period", "frequency", "bit_time", "pattern", "prbs", "file", "resistance"];
+    /// <summary>The keys accepted under <c>segment</c>.</summary>
+    public static readonly string[] SegmentKeys = ["length", "z0", "delay", "velocity", "eps_eff", "r", "l", "g", "c"];
+    /// <summary>The keys accepted under <c>shunt</c> and <c>series</c>.</summary>
+    public static readonly string[] LumpedKeys = ["r", "l", "c"];
+    /// <summary>The keys accepted under <c>branch</c>.</summary>
+    public static readonly string[] BranchKeys = ["name", "line", "load"];
+    /// <summary>The keys accepted under <c>load</c>.</summary>
+    public static readonly string[] LoadKeys = ["r", "to", "c", "l", "receiver"];
+    /// <summary>The keys accepted under <c>load.receiver</c>.</summary>
+    public static readonly string[] ReceiverKeys = ["vih", "vil"];
+    /// <summary>The keys accepted in each probe.</summary>
+    public static readonly string[] ProbeKeys = ["name", "at"];
+    /// <summary>The keys accepted under <c>simulation</c>.</summary>
+    public static readonly string[] SimulationKeys = ["duration", "output_step", "resolution"];
+
+    /// <summary>Reads and validates the scenario file at <paramref name="path"/>.</summary>
+    /// <exception cref="ScenarioException">The file cannot be read or is not a valid scenario.</exception>
+    public static Scenario Load(string path)
+    {
+        string text;
+        try { text = System.IO.File.ReadAllText(path); }
+        catch (Exception ex) when (ex is IOException or UnauthorizedAccessException)
+        { throw new ScenarioException($"{path}: cannot read the scenario ({ex.Message})"); }
+        return Parse(text, path);
+    }
+
+    /// <summary>Reads and validates a scenario from YAML text; <paramref name="file"/> names it in messages and anchors relative paths.</summary>
+    public static Scenario Parse(string yaml, string file)
+    {
+        var stream = new YamlStream();
+        try { stream.Load(new StringReader(yaml)); }
+        catch (YamlException ex)
+        { throw new ScenarioException($"{file}:{ex.Start.Line}:{ex.Start.Column}: not valid YAML: {FirstLine(ex.InnerException?.Message ?? ex.Message)}"); }
+        if (stream.Documents.Count == 0 || stream.Documents[0].RootNode is not YamlMappingNode root)
+            throw new ScenarioException($"{file}:1:1: a scenario is a mapping of keys (title, source, line, load, probes, simulation)");
+
+        var top = new YamlMap(file, "", root, TopKeys);
+        var source = ReadSource(top, file);
+        var line = ReadLine(top, "line", top.Sequence("line") ?? throw top.Error("missing required key 'line'"), file, new HashSet<string>());
+        var load = ReadLoad(top, "load");
+        var sim = ReadSimulation(top);
+        var scenario = new Scenario
+        {
+            Title = top.Text("title") ?? System.IO.Path.GetFileNameWithoutExtension(file),
+            Source = source,
+            Line = line,
+            Load = load,
+            Probes = [],
+            Simulation = sim,
+            FilePath = file,
+        };
+        return scenario with { Probes = ReadProbes(top, scenario) };
+    }
+
+    static string FirstLine(string s) => s.ReplaceLineEndings(" ");
+
+    static SourceSpec ReadSource(YamlMap top, string file)
+    {
+        var s = top.Map("source", SourceKeys) ?? throw top.Error("missing required key 'source'");
+        string wf = s.Text("waveform") ?? throw s.Error("missing required key 'source.waveform'");
+        if (!Enum.TryParse<WaveformKind>(wf, ignoreCase: true, out var kind) || int.TryParse(wf, out _))
+            throw s.Error(s.Node("waveform")!, "source.waveform", $"'{wf}' is not a waveform; expected one of: step, pulse, trapezoid, gaussian, sine, bits, table");
+        double high = s.Quantity("high", Dimension.Voltage) ?? throw s.Error("missing required key 'source.high'");
+        double low = s.Quantity("low", Dimension.Voltage) ?? 0;
+        double rise = s.NonNegative("rise", Dimension.Time) ?? 0;
+        double fall = s.NonNegative("fall", Dimension.Time) ?? rise;
+        double delay = s.NonNegative("delay", Dimension.Time) ?? 0;
+        double resistance = s.NonNegative("resistance", Dimension.Resistance) ?? 0;
+        double width = 0, period = 0, bitTime = 0;
+        IReadOnlyList<bool> bits = [];
+        double[] tt = [], tv = [];
+
+        void Need(string key) { if (!s.Has(key)) throw s.Error($"missing required key 'source.{key}' for waveform '{wf}'"); }
+        switch (kind)
+        {
+            case WaveformKind.Pulse:
+                Need("width"); width = s.NonNegative("width", Dimension.Time)!.Value; break;
+            case WaveformKind.Gaussian:
+                Need("width"); width = s.Positive("width", Dimension.Time)!.Value; break;
+            case WaveformKind.Trapezoid:
+                Need("width"); width = s.NonNegative("width", Dimension.Time)!.Value;
+                Need("period"); period = s.Positive("period", Dimension.Time)!.Value;
+                if (1.25 * rise + width + 1.25 * fall > period * (1 + 1e-12))
+                    throw s.Error(s.Node("period")!, "source.period", $"the rise ramp, width and fall ramp ({Quantity.Format(1.25 * rise + width + 1.25 * fall, "s")}) do not fit in the period");
+                break;
+            case WaveformKind.Sine:
+                if (s.Has("period")) period = s.Positive("period", Dimension.Time)!.Value;
+                else if (s.Has("frequency")) period = 1 / s.Positive("frequency", Dimension.Frequency)!.Value;
+                else throw s.Error("missing required key 'source.period' (or 'source.frequency') for waveform 'sine'");
+                break;
+            case WaveformKind.Bits:
+                Need("bit_time"); bitTime = s.Positive("bit_time", Dimension.Time)!.Value;
+                bits = ReadBits(s);
+                if (1.25 * Math.Max(rise, fall) > bitTime)
+                    throw s.Error(s.Node("bit_time")!, "source.bit_time", "the edge ramp (1.25 x rise or fall) is longer than a bit");
+                break;
+            case WaveformKind.Table:
+                Need("file"); (tt, tv) = ReadTable(s, file); break;
+        }
+        return new SourceSpec
+        {
+            Waveform = kind, Low = low, High = high, Rise = rise, Fall = fall, Delay = delay, Width = width,
+            Period = period, BitTime = bitTime, Bits = bits, TableTime = tt, TableVolts = tv, Resistance = resistance,
+        };
+    }
+
+    static IReadOnlyList<bool> ReadBits(YamlMap s)
+    {
+        if (s.Has("pattern") == s.Has("prbs"))
+            throw s.Error("waveform 'bits' needs exactly one of 'source.pattern' (e.g. \"1011001\") or 'source.prbs' (7, 9, 15, 23 or 31)");
+        if (s.Text("pattern") is { } p)
+        {
+            if (p.Length == 0 || p.Any(ch => ch != '0' && ch != '1'))
+                throw s.Error(s.Node("pattern")!, "source.pattern", $"'{p}' is not a pattern of 0 and 1");
+            return p.Select(ch => ch == '1').ToArray();
+        }
+        string order = s.Text("prbs")!;
+        if (!int.TryParse(order, NumberStyles.None, CultureInfo.InvariantCulture, out int k) || !Prbs.Taps.ContainsKey(k))
+            throw s.Error(s.Node("prbs")!, "source.prbs", $"'{order}' is not a PRBS order; expected 7, 9, 15, 23 or 31");
+        return Prbs.Generate(k);
+    }
+
+    static (double[], double[]) ReadTable(YamlMap s, string file)
+    {
+        string rel = s.Text("file")!;
+        string dir = System.IO.Path.GetDirectoryName(System.IO.Path.GetFullPath(file)) ?? ".";
+        string path = System.IO.Path.Combine(dir, rel);
+        string[] lines;
+        try { lines = System.IO.File.ReadAllLines(path); }
+        catch (Exception ex) when (ex is IOException or UnauthorizedAccessException)
+        { throw s.Error(s.Node("file")!, "source.file", $"cannot read '{rel}' ({ex.Message})"); }
+        var t = new List<double>(); var v = new List<double>();
+        for (int i = 0; i < lines.Length; i++)
+        {
+            string l = lines[i].Trim();
+            if (l.Length == 0) continue;
+            var f = l.Split(',');
+            bool ok = f.Length >= 2 && double.TryParse(f[0], NumberStyles.Float, CultureInfo.InvariantCulture, out double ti)
+                      & double.TryParse(f[1], NumberStyles.Float, CultureInfo.InvariantCulture, out double vi);
+            if (!ok)
+            {
+                if (t.Count == 0 && i == 0) continue; // header row
+                throw new ScenarioException($"{path}:{i + 1}: expected 'time_s,volts_V' numbers, found '{l}'");
+            }
+            double.TryParse(f[0], NumberStyles.Float, CultureInfo.InvariantCulture, out ti);
+            double.TryParse(f[1], NumberStyles.Float, CultureInfo.InvariantCulture, out vi);
+            if (!double.IsFinite(ti) || !double.IsFinite(vi))
+                throw new ScenarioException($"{path}:{i + 1}: time and voltage must be finite numbers, found '{l}'");
+            if (t.Count > 0 && ti <= t[^1])
+                throw new ScenarioException($"{path}:{i + 1}: time must increase from row to row ({ti} after {t[^1]})");
+            t.Add(ti); v.Add(vi);
+        }
+        if (t.Count < 2) throw s.Error(s.Node("file")!, "source.file", $"'{rel}' holds fewer than two samples");
+        return (t.ToArray(), v.ToArray());
+    }
+
+    static List<LineElement> ReadLine(YamlMap parent, string key, YamlSequenceNode seq, string file, HashSet<string> branchNames)
+    {
+        var items = new List<LineElement>();
+        int i = 0;
+        foreach (var node in seq.Children)
+        {
+            string path = $"{parent.Join(key)}[{i}]";
+            if (node is not YamlMappingNode m || m.Children.Count != 1)
+                throw new ScenarioException($"{file}:{node.Start.Line}:{node.Start.Column}: {path}: each line item is one of 'segment', 'shunt', 'series' or 'branch' with its keys");
+            var wrapper = new YamlMap(file, path, m, "segment", "shunt", "series", "branch");
+            string kind = ((YamlScalarNode)m.Children.Keys.First()).Value!;
+            items.Add(kind switch
+            {
+                "segment" => ReadSegment(wrapper.Map("segment", SegmentKeys)!),
+                "shunt" => new Shunt(ReadParts(wrapper.Map("shunt", LumpedKeys)!)),
+                "series" => new Model.Series(ReadParts(wrapper.Map("series", LumpedKeys)!)),
+                _ => ReadBranch(wrapper.Map("branch", BranchKeys)!, file, branchNames),
+            });
+            i++;
+        }
+        if (!items.OfType<Segment>().Any())
+            throw new ScenarioException($"{file}:{seq.Start.Line}:{seq.Start.Column}: {parent.Join(key)}: needs at least one segment");
+        return items;
+    }
+
+    static Segment ReadSegment(YamlMap m)
+    {
+        double length = m.Positive("length", Dimension.Length) ?? throw m.Error($"missing required key '{m.Join("length")}'");
+        double r = m.NonNegative("r", Dimension.ResistancePerLength) ?? 0;
+        double g = m.NonNegative("g", Dimension.ConductancePerLength) ?? 0;
+        if (m.Has("z0"))
+        {
+            if (m.Has("l") || m.Has("c"))
+                throw m.Error("give either z0 with a delay, velocity or eps_eff, or l and c per length, not both");
+            double z0 = m.Positive("z0", Dimension.Resistance)!.Value;
+            int given = new[] { "delay", "velocity", "eps_eff" }.Count(m.Has);
+            if (given != 1)
+                throw m.Error($"with z0, give exactly one of '{m.Join("delay")}' (e.g. 6.5 ns/m or 1.2 ns), '{m.Join("velocity")}' (e.g. 0.66 c) or '{m.Join("eps_eff")}' (e.g. 3.3)");
+            double perLength;
+            if (m.Has("delay"))
+            {
+                var (d, dim) = m.QuantityWithDim("delay", Dimension.DelayPerLength, Dimension.Time)!.Value;
+                if (!(d > 0)) throw m.Error(m.Node("delay")!, m.Join("delay"), "must be greater than zero");
+                perLength = dim.PerLength ? d : d / length;
+            }
+            else if (m.Has("velocity"))
+            {
+                double v = m.Positive("velocity", Dimension.Velocity)!.Value;
+                if (v > Quantity.SpeedOfLight * (1 + 1e-9))
+                    throw m.Error(m.Node("velocity")!, m.Join("velocity"), $"'{m.Text("velocity")}' is faster than light");
+                perLength = 1 / v;
+            }
+            else
+            {
+                double ee = m.Positive("eps_eff", Dimension.Number)!.Value;
+                if (ee < 1) throw m.Error(m.Node("eps_eff")!, m.Join("eps_eff"), $"must be at least 1 (got {ee})");
+                perLength = Math.Sqrt(ee) / Quantity.SpeedOfLight;
+            }
+            return Segment.FromZ0(length, z0, perLength, r, g);
+        }
+        if (m.Has("l") && m.Has("c"))
+        {
+            if (m.Has("delay") || m.Has("velocity") || m.Has("eps_eff"))
+                throw m.Error("with l and c per length, do not also give delay, velocity or eps_eff");
+            double l = m.Positive("l", Dimension.InductancePerLength)!.Value;
+            double c = m.Positive("c", Dimension.CapacitancePerLength)!.Value;
+            if (1 / Math.Sqrt(l * c) > Quantity.SpeedOfLight * (1 + 1e-6))
+                throw m.Error(m.Node("c")!, m.Join("c"), "l and c give a velocity faster than light");
+            return new Segment(length, r, l, g, c);
+        }
+        throw m.Error($"a segment needs z0 with one of delay, velocity or eps_eff, or l and c per length");
+    }
+
+    static LumpedParts ReadParts(YamlMap m)
+    {
+        var parts = new LumpedParts(m.NonNegative("r", Dimension.Resistance), m.Positive("l", Dimension.Inductance), m.Positive("c", Dimension.Capacitance));
+        if (parts.R is null && parts.L is null && parts.C is null)
+            throw m.Error("give at least one of r, l, c");
+        return parts;
+    }
+
+    static Branch ReadBranch(YamlMap m, string file, HashSet<string> names)
+    {
+        string name = m.Identifier("name");
+        if (!names.Add(name)) throw m.Error(m.Node("name")!, m.Join("name"), $"branch name '{name}' is used twice");
+        var seq = m.Sequence("line") ?? throw m.Error($"missing required key '{m.Join("line")}'");
+        var line = ReadLine(m, "line", seq, file, names);
+        return new Branch(name, line, ReadLoad(m, "load"));
+    }
+
+    static LoadSpec ReadLoad(YamlMap parent, string key)
+    {
+        var node = parent.Node(key);
+        if (node is null) return LoadSpec.Open;
+        if (node is YamlScalarNode s)
+        {
+            return s.Value switch
+            {
+                "open" or "" or null => LoadSpec.Open,
+                "short" => new LoadSpec(Short: true),
+                _ => throw parent.Error(node, parent.Join(key), $"'{s.Value}' is not a load; expected 'open', 'short' or a mapping of r, to, c, l, receiver"),
+            };
+        }
+        var m = parent.Map(key, LoadKeys)!;
+        double? r = m.NonNegative("r", Dimension.Resistance);
+        double to = m.Quantity("to", Dimension.Voltage) ?? 0;
+        if (m.Has("to") && r is null) throw m.Error(m.Node("to")!, m.Join("to"), "'to' is the voltage the load resistor returns to: give 'r' too");
+        ReceiverThresholds? rx = null;
+        if (m.Map("receiver", ReceiverKeys) is { } rm)
+        {
+            double vih = rm.Quantity("vih", Dimension.Voltage) ?? throw rm.Error($"missing required key '{rm.Join("vih")}'");
+            double vil = rm.Quantity("vil", Dimension.Voltage) ?? throw rm.Error($"missing required key '{rm.Join("vil")}'");
+            if (vil >= vih) throw rm.Error(rm.Node("vil")!, rm.Join("vil"), $"vil ({Quantity.Format(vil, "V")}) must be below vih ({Quantity.Format(vih, "V")})");
+            rx = new ReceiverThresholds(vih, vil);
+        }
+        return new LoadSpec(r, to, m.Positive("c", Dimension.Capacitance), m.Positive("l", Dimension.Inductance), false, rx);
+    }
+
+    static SimulationSpec ReadSimulation(YamlMap top)
+    {
+        var m = top.Map("simulation", SimulationKeys) ?? throw top.Error("missing required key 'simulation' (with 'duration')");
+        double duration = m.Positive("duration", Dimension.Time) ?? throw m.Error("missing required key 'simulation.duration'");
+        double? step = m.Positive("output_step", Dimension.Time);
+        double res = m.Positive("resolution", Dimension.Number) ?? 20;
+        if (res < 1) throw m.Error(m.Node("resolution")!, "simulation.resolution", $"must be at least 1 (got {res})");
+        return new SimulationSpec(duration, step, res);
+    }
+
+    static IReadOnlyList<ProbeSpec> ReadProbes(YamlMap top, Scenario scenario)
+    {
+        var seq = top.Sequence("probes");
+        if (seq is null)
+            return [new ProbeSpec("source", [], ProbeAnchor.Source), new ProbeSpec("load", [], ProbeAnchor.Load)];
+        var probes = new List<ProbeSpec>();
+        int i = 0;
+        foreach (var node in seq.Children)
+        {
+            string path = $"probes[{i++}]";
+            if (node is not YamlMappingNode pm)
+                throw top.Error(node, path, "each probe is a mapping { name: ..., at: ... }");
+            var m = new YamlMap(top.File, path, pm, ProbeKeys);
+            string name = m.Identifier("name");
+            if (probes.Any(p => p.Name == name)) throw m.Error(m.Node("name")!, m.Join("name"), $"probe name '{name}' is used twice");
+            string at = m.Text("at") ?? throw m.Error($"missing required key '{m.Join("at")}'");
+            probes.Add(ProbeLocation.Resolve(name, at, scenario, msg => m.Error(m.Node("at")!, m.Join("at"), msg)));
+        }
+        if (probes.Count == 0) throw top.Error(seq, "probes", "the list is empty; leave 'probes' out for the default source and load probes");
+        return probes;
+    }
+}

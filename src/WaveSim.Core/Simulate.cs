@@ -1,0 +1,33 @@
+using WaveSim.Core.Model;
+using WaveSim.Core.Solver;
+using WaveSim.Core.Units;
+
+namespace WaveSim.Core;
+
+/// <summary>The front door of the library: plan and run a scenario.</summary>
+public static class Simulate
+{
+    /// <summary>Plans the grid for a scenario without running it.</summary>
+    public static GridPlan Plan(Scenario scenario) => GridPlan.For(scenario);
+
+    /// <summary>Runs <paramref name="scenario"/> and returns the probe waveforms.</summary>
+    /// <exception cref="InputException">The plan exceeds the memory or cell-update limits (unless forced), or the network is singular.</exception>
+    /// <exception cref="NumericalException">The solution became NaN or infinite.</exception>
+    /// <exception cref="OperationCanceledException">The token was cancelled.</exception>
+    public static SimulationResult Run(Scenario scenario, SimulationOptions? options = null, CancellationToken ct = default)
+    {
+        options ??= new SimulationOptions();
+        var plan = GridPlan.For(scenario);
+        if (!options.Force) CheckLimits(plan);
+        return new LeapfrogSolver(scenario, plan).Run(options, ct);
+    }
+
+    /// <summary>Throws when the plan is beyond the limits a run accepts without --force.</summary>
+    public static void CheckLimits(GridPlan plan)
+    {
+        if (plan.MemoryBytes > GridPlan.MemoryLimitBytes)
+            throw new InputException($"the run needs about {Quantity.Format(plan.MemoryBytes, "B", 3)} of memory (limit 2 GB); lower simulation.resolution or output_step, or pass --force");
+        if (plan.CellUpdates > GridPlan.CellUpdateLimit)
+            throw new InputException($"the run needs {plan.CellUpdates:G3} cell updates (limit 1e11); shorten the duration or lower simulation.resolution, or pass --force");
+    }
+}

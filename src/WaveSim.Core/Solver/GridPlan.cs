@@ -1,0 +1,122 @@
+using WaveSim.Core.Model;
+
+namespace WaveSim.Core.Solver;
+
+/// <summary>How one segment is cut into cells.</summary>
+/// <param name="Where">The segment's place, e.g. "line[0]" or "stub.line[1]".</param>
+/// <param name="Segment">The segment.</param>
+/// <param name="Cells">Whole number of cells.</param>
+/// <param name="Courant">T / (cells · dt), at most 1; exactly 1 means no numerical dispersion on a lossless line.</param>
+public sealed record SegmentPlan(string Where, Segment Segment, int Cells, double Courant);
+
+/// <summary>
+/// The solver's grid: the time step, the cells of every segment, the number of steps and the cost.
+/// </summary>
+/// <remarks>
+/// Every segment gets n = ceil(T/dt) cells for its delay T, so its delay and Z0 are exact and its Courant number
+/// T/(n·dt) is at most 1 (the Courant-Friedrichs-Lewy bound of the 1-D leapfrog, Courant, Friedrichs and Lewy 1928).
+/// dt is picked, within the resolution's bound, to bring every Courant number as close to 1 as it can: at exactly 1
+/// the lossless leapfrog is free of numerical dispersion (the "magic time step", Taflove and Hagness,
+/// Computational Electrodynamics, 3rd ed. 2005, ch. 2).
+/// </remarks>
+public sealed record GridPlan
+{
+    /// <summary>The solver's time step, s.</summary>
+    public required double Dt { get; init; }
+    /// <summary>The upper bound on dt set by the resolution, s.</summary>
+    public required double DtLimit { get; init; }
+    /// <summary>Number of time steps to cover the duration.</summary>
+    public required long Steps { get; init; }
+    /// <summary>Every segment's cells and Courant number, main line first, then branches in order.</summary>
+    public required IReadOnlyList<SegmentPlan> Segments { get; init; }
+    /// <summary>Total cells.</summary>
+    public long TotalCells => Segments.Sum(s => (long)s.Cells);
+    /// <summary>Cell updates for the whole run (cells × steps).</summary>
+    public double CellUpdates => (double)TotalCells * Steps;
+    /// <summary>Number of output rows.</summary>
+    public required long OutputRows { get; init; }
+    /// <summary>Estimated memory, bytes: the grid arrays plus the probe outputs.</summary>
+    public required long MemoryBytes { get; init; }
+
+    /// <summary>Relative tolerance when rounding a delay to whole steps, so 80 mm at 7.5 ns/m over 20 ps is 30 cells, not 31.</summary>
+    public const double RoundingTolerance = 1e-9;
+
+    /// <summary>Runs above this memory estimate are refused unless forced.</summary>
+    public const long MemoryLimitBytes = 2L << 30;
+    /// <summary>Runs above this many cell updates are refused unless forced.</summary>
+    public const double CellUpdateLimit = 1e11;
+
+    /// <summary>Plans the grid for <paramref name="scenario"/>.</summary>
+    public static GridPlan For(Scenario scenario)
+    {
+        var segs = AllSegments(scenario.Line, "line").ToList();
+        double tMin = segs.Min(s => s.Seg.Delay);
+        double limit = Math.Min(tMin, scenario.Source.ShortestFeature) / scenario.Simulation.Resolution;
+        double dt = ChooseDt(segs.Select(s => s.Seg.Delay).ToArray(), limit);
+        var plans = segs.Select(s =>
+        {
+            int n = CellsFor(s.Seg.Delay, dt);
+            return new SegmentPlan(s.Where, s.Seg, n, s.Seg.Delay / (n * dt));
+        }).ToList();
+        long steps = (long)Math.Ceiling(scenario.Simulation.Duration / dt * (1 - RoundingTolerance));
+        double h = scenario.Simulation.OutputStep ?? dt;
+        long rows = (long)Math.Floor(scenario.Simulation.Duration / h * (1 + RoundingTolerance)) + 1;
+        if ((rows - 1) * h < scenario.Simulation.Duration * (1 - RoundingTolerance)) rows++;
+        long cells = plans.Sum(p => (long)p.Cells);
+        long memory = cells * 2 * sizeof(double) + rows * (1 + 2L * scenario.Probes.Count) * sizeof(double);
+        return new GridPlan { Dt = dt, DtLimit = limit, Steps = steps, Segments = plans, OutputRows = rows, MemoryBytes = memory };
+    }
+
+    /// <summary>The whole number of cells for a delay: ceil(T/dt) with a relative tolerance.</summary>
+    public static int CellsFor(double delay, double dt)
+    {
+        double ratio = delay / dt;
+        double n = Math.Ceiling(ratio * (1 - RoundingTolerance));
+        if (n > int.MaxValue) throw new InputException($"a segment needs {n:G3} cells, more than one segment can hold; lower simulation.resolution");
+        return Math.Max(1, (int)n);
+    }
+
+    /// <summary>Picks dt ≤ <paramref name="limit"/> that makes every delay as close to a whole number of steps as practical.</summary>
+    internal static double ChooseDt(double[] delays, double limit)
+    {
+        double best = limit, bestCost = Cost(delays, limit);
+        if (bestCost < RoundingTolerance) return limit;
+        // Candidates dt = T_i / m: they make segment i exact; keep the one whose worst segment is closest to S = 1.
+        // Among exact candidates the largest dt wins (fewest steps); otherwise stay within 2x of the limit.
+        double exactBest = 0;
+        foreach (double t in delays.Distinct())
+        {
+            double mMin = Math.Ceiling(t / limit * (1 - RoundingTolerance));
+            double mMax = Math.Min(2 * mMin, mMin + 2000);
+            for (double m = mMin; m <= mMax; m++)
+            {
+                double dt = t / m;
+                double cost = Cost(delays, dt);
+                if (cost < RoundingTolerance) { exactBest = Math.Max(exactBest, dt); break; }
+                if (cost < bestCost - 1e-12 || (Math.Abs(cost - bestCost) <= 1e-12 && dt > best)) { best = dt; bestCost = cost; }
+            }
+        }
+        return exactBest > 0 ? exactBest : best;
+    }
+
+    static double Cost(double[] delays, double dt)
+    {
+        double worst = 0;
+        foreach (double t in delays)
+        {
+            int n = CellsFor(t, dt);
+            worst = Math.Max(worst, 1 - t / (n * dt));
+        }
+        return worst;
+    }
+
+    internal static IEnumerable<(string Where, Segment Seg)> AllSegments(IReadOnlyList<LineElement> line, string prefix)
+    {
+        for (int i = 0; i < line.Count; i++)
+        {
+            if (line[i] is Segment s) yield return ($"{prefix}[{i}]", s);
+            else if (line[i] is Branch b)
+                foreach (var x in AllSegments(b.Line, $"{b.Name}.line")) yield return x;
+        }
+    }
+}

@@ -1,0 +1,115 @@
+using System.Diagnostics;
+using WaveSim.Core.Model;
+
+namespace WaveSim.Core.Solver;
+
+/// <summary>Runs the leapfrog time loop over a built network and records probes and snapshots.</summary>
+internal sealed class LeapfrogSolver
+{
+    readonly Scenario _scenario;
+    readonly GridPlan _plan;
+    readonly Network _net;
+    readonly SegmentKernel[] _kernels;
+    readonly JunctionSystem _junctions;
+    readonly double[] _jv;
+
+    public LeapfrogSolver(Scenario scenario, GridPlan plan)
+    {
+        _scenario = scenario; _plan = plan;
+        _net = NetworkBuilder.Build(scenario, plan);
+        foreach (var s in _net.Segments) { s.V = new double[s.Cells + 1]; s.I = new double[s.Cells]; }
+        DcOperatingPoint.Apply(_net, scenario.Source.InitialLevel);
+        _jv = new double[_net.Junctions.Count];
+        foreach (var s in _net.Segments) { _jv[s.Start] = s.V[0]; _jv[s.End] = s.V[^1]; }
+        _kernels = _net.Segments.Select(s => new SegmentKernel(s, plan.Dt)).ToArray();
+        _junctions = new JunctionSystem(_net, plan.Dt);
+        _junctions.Bind(_jv);
+    }
+
+    public SimulationResult Run(SimulationOptions options, CancellationToken ct)
+    {
+        var sampler = new ProbeSampler(_net, _scenario, _plan, _jv, out double[] positions);
+        var profiles = Profiles();
+        var snapTimes = options.SnapshotTimes.OrderBy(t => t).ToArray();
+        var snapshots = new List<ProfileSnapshot>(snapTimes.Length);
+        int nextSnap = 0;
+        double dt = _plan.Dt;
+        var src = _scenario.Source;
+        long steps = _plan.Steps;
+        double[]? energy = options.TrackEnergy ? new double[steps + 1] : null;
+        long progressEvery = Math.Max(1, steps / 200), checkEvery = Math.Max(1, Math.Min(4096, 1_000_000 / Math.Max(1, _plan.TotalCells)));
+        var clock = Stopwatch.StartNew();
+
+        // Step n → n+1 for n = 0..steps (one step beyond the end, so the last instant's current has its half step after it).
+        for (long n = 0; n <= steps; n++)
+        {
+            double t = n * dt;
+            while (nextSnap < snapTimes.Length && snapTimes[nextSnap] <= t + 0.5 * dt)
+                snapshots.Add(Snapshot(profiles, snapTimes[nextSnap++]));
+
+            double product = 0;
+            for (int s = 0; s < _kernels.Length; s++)
+            {
+                var seg = _net.Segments[s];
+                if (energy is null) _kernels[s].UpdateCurrents(seg.V, seg.I);
+                else product += seg.Plan.Segment.L * seg.Dz * _kernels[s].UpdateCurrentsTrackingProduct(seg.V, seg.I);
+            }
+            if (energy is not null) energy[n] = 0.5 * product + ElectricEnergy();
+            for (int s = 0; s < _kernels.Length; s++) _kernels[s].UpdateVoltages(_net.Segments[s].V, _net.Segments[s].I);
+            _junctions.Solve(src.Value(t), src.Value(t + dt));
+            var x = _junctions.Voltages;
+            for (int j = 0; j < _jv.Length; j++)
+            {
+                if (!double.IsFinite(x[j]))
+                    throw new NumericalException($"the solution is not finite at step {n + 1} (t = {Units.Quantity.Format((n + 1) * dt, "s")}) at node '{_net.Junctions[j].Label}'");
+                _jv[j] = x[j];
+            }
+            foreach (var seg in _net.Segments) { seg.V[0] = _jv[seg.Start]; seg.V[^1] = _jv[seg.End]; }
+            sampler.AfterStep(n);
+            if (n % checkEvery == 0)
+            {
+                ct.ThrowIfCancellationRequested();
+                CheckFinite(n + 1);
+            }
+            if (n % progressEvery == 0) options.Progress?.Report((double)n / steps);
+        }
+        options.Progress?.Report(1);
+        CheckFinite(steps + 1);
+        var probes = _scenario.Probes.Select((p, k) => new ProbeTrace(p.Name, p.Describe(), positions[k], sampler.Volts[k], sampler.Amps[k])).ToList();
+        return new SimulationResult
+        {
+            Scenario = _scenario, Plan = _plan, Time = sampler.Times, Probes = probes,
+            Lines = profiles.Select(p => p.Profile).ToList(), Snapshots = snapshots, Elapsed = clock.Elapsed, Energy = energy,
+        };
+    }
+
+    double ElectricEnergy()
+    {
+        double e = 0;
+        for (int j = 0; j < _jv.Length; j++) e += 0.5 * _net.Junctions[j].C * _jv[j] * _jv[j];
+        foreach (var seg in _net.Segments)
+        {
+            double cdz = seg.Plan.Segment.C * seg.Dz;
+            var v = seg.V;
+            for (int k = 1; k < seg.Cells; k++) e += 0.5 * cdz * v[k] * v[k];
+        }
+        return e;
+    }
+
+    void CheckFinite(long step)
+    {
+        foreach (var seg in _net.Segments)
+        {
+            for (int k = 0; k < seg.V.Length; k++)
+                if (!double.IsFinite(seg.V[k]))
+                    throw new NumericalException($"the solution is not finite at step {step} in segment {seg.Plan.Where}, node {k} of {seg.Cells}");
+        }
+    }
+
+    List<(LineProfile Profile, NodeRef[] Nodes)> Profiles() =>
+        _net.Lines.Select(kv => (new LineProfile(kv.Key, kv.Value.Nodes.Select(n => n.Position).ToArray()),
+                                  kv.Value.Nodes.Select(n => n.Node).ToArray())).ToList();
+
+    ProfileSnapshot Snapshot(List<(LineProfile Profile, NodeRef[] Nodes)> profiles, double t) =>
+        new(t, profiles.Select(p => p.Nodes.Select(r => r.Junction >= 0 ? _jv[r.Junction] : _net.Segments[r.Segment].V[r.Index]).ToArray()).ToArray());
+}

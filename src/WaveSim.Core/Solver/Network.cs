@@ -1,0 +1,85 @@
+using WaveSim.Core.Model;
+
+namespace WaveSim.Core.Solver;
+
+/// <summary>A node where segments end and lumped parts attach; solved implicitly each step.</summary>
+internal sealed class Junction
+{
+    public required string Label { get; init; }
+    /// <summary>Half-cell capacitance gathered from the attached segment ends, F.</summary>
+    public double C;
+    /// <summary>Half-cell conductance gathered from the attached segment ends, S.</summary>
+    public double G;
+    /// <summary>Position along its line, m, and the line's path (for pictures).</summary>
+    public double Position;
+}
+
+/// <summary>A segment on the grid: its own arrays of node voltages (both ends included) and half-cell currents.</summary>
+internal sealed class GridSegment
+{
+    public required SegmentPlan Plan { get; init; }
+    public required int Start { get; init; }
+    public required int End { get; init; }
+    public required double StartPosition { get; init; }
+    public required string LinePath { get; init; }
+    public int Cells => Plan.Cells;
+    public double Dz => Plan.Segment.Length / Plan.Cells;
+    /// <summary>V[0..n]: node voltages; V[0] and V[n] mirror the junctions.</summary>
+    public double[] V = [];
+    /// <summary>I[0..n-1]: half-cell currents, positive from start to end, at the latest half step.</summary>
+    public double[] I = [];
+    public double CurrentA, CurrentB, VoltA, VoltB;
+}
+
+/// <summary>What a lumped branch stands for, so probes can find the driver's and the load's currents.</summary>
+internal enum BranchRole { Source, Shunt, Series, Load }
+
+/// <summary>
+/// A lumped branch of R, L and C in series, from node A to node B (−1 = a fixed voltage: ground, the driver, or a load's return).
+/// Integrated with the trapezoidal rule: A-stable, so any part value is stable.
+/// </summary>
+internal sealed class LumpedBranch
+{
+    public required BranchRole Role { get; init; }
+    public required string Label { get; init; }
+    public required int A { get; init; }
+    public required int B { get; init; }
+    public double R, L;
+    public double? C;
+    /// <summary>The fixed voltage at the B end when B = −1 (a load's return voltage); the driver sits at the A end.</summary>
+    public double FixedB;
+    /// <summary>True when the A end is the driver's open-circuit voltage.</summary>
+    public bool DrivenA;
+    /// <summary>State: current at the latest whole step, capacitor voltage, and the step-average current.</summary>
+    public double Current, CapVoltage, Average;
+}
+
+/// <summary>A node of the grid as seen by a probe: which voltage to read and which currents to average.</summary>
+internal readonly record struct NodeRef(int Segment, int Index, int Junction)
+{
+    public static NodeRef OnJunction(int j) => new(-1, -1, j);
+}
+
+/// <summary>An edge current: a segment's half-cell or a lumped branch.</summary>
+internal readonly record struct EdgeRef(int Segment, int Index, int Branch);
+
+/// <summary>The whole discretised network: junctions, segments, lumped branches, and where every line's nodes lie.</summary>
+internal sealed class Network
+{
+    public List<Junction> Junctions { get; } = [];
+    public List<GridSegment> Segments { get; } = [];
+    public List<LumpedBranch> Branches { get; } = [];
+    /// <summary>For each line path ("" for the main line, "stub", "stub/sub"), its nodes in order with position and edges.</summary>
+    public Dictionary<string, LineNodes> Lines { get; } = [];
+    public int SourceBranch { get; set; }
+}
+
+/// <summary>The nodes of one line in order from its start, with the edges on either side of each node.</summary>
+internal sealed class LineNodes
+{
+    public List<(double Position, NodeRef Node, EdgeRef[] Upstream, EdgeRef[] Downstream)> Nodes { get; } = [];
+    public int StartJunction;
+    public int EndJunction;
+    public List<int> LoadBranches { get; } = [];
+    public double Length;
+}

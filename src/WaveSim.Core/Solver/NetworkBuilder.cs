@@ -1,0 +1,107 @@
+using WaveSim.Core.Model;
+
+namespace WaveSim.Core.Solver;
+
+/// <summary>Turns a scenario and its grid plan into a <see cref="Network"/>: segments between junctions, lumped branches on them.</summary>
+internal static class NetworkBuilder
+{
+    public static Network Build(Scenario scenario, GridPlan plan)
+    {
+        var net = new Network();
+        int planIndex = 0;
+        int source = AddJunction(net, "source", 0);
+        net.SourceBranch = AddBranch(net, new LumpedBranch
+        {
+            Role = BranchRole.Source, Label = "driver", A = -1, B = source, R = scenario.Source.Resistance, DrivenA = true,
+        });
+        BuildLine(net, plan, ref planIndex, scenario.Line, scenario.Load, source, "", "");
+        return net;
+    }
+
+    static int AddJunction(Network net, string label, double position)
+    {
+        net.Junctions.Add(new Junction { Label = label, Position = position });
+        return net.Junctions.Count - 1;
+    }
+
+    static int AddBranch(Network net, LumpedBranch b)
+    {
+        net.Branches.Add(b);
+        return net.Branches.Count - 1;
+    }
+
+    static void BuildLine(Network net, GridPlan plan, ref int planIndex, IReadOnlyList<LineElement> line, LoadSpec load,
+        int start, string path, string where)
+    {
+        var nodes = new LineNodes { StartJunction = start };
+        net.Lines[path] = nodes;
+        int node = start;
+        double pos = 0;
+        var pendingUp = new List<EdgeRef>();
+        if (path.Length == 0) pendingUp.Add(new EdgeRef(-1, -1, net.SourceBranch));
+        string prefix = path.Length == 0 ? "line" : path.Replace('/', '.') + ".line";
+
+        for (int i = 0; i < line.Count; i++)
+        {
+            string at = $"{prefix}[{i}]";
+            switch (line[i])
+            {
+                case Segment s:
+                {
+                    var sp = plan.Segments[planIndex++];
+                    int end = AddJunction(net, at + " end", pos + s.Length);
+                    int si = net.Segments.Count;
+                    var gs = new GridSegment { Plan = sp, Start = node, End = end, StartPosition = pos, LinePath = path };
+                    net.Segments.Add(gs);
+                    double dz = gs.Dz;
+                    net.Junctions[node].C += s.C * dz / 2; net.Junctions[node].G += s.G * dz / 2;
+                    net.Junctions[end].C += s.C * dz / 2; net.Junctions[end].G += s.G * dz / 2;
+                    // The start junction node: its downstream edge is this segment's first half cell.
+                    nodes.Nodes.Add((pos, NodeRef.OnJunction(node), pendingUp.ToArray(), [new EdgeRef(si, 0, -1)]));
+                    for (int k = 1; k < sp.Cells; k++)
+                        nodes.Nodes.Add((pos + k * dz, new NodeRef(si, k, -1), [new EdgeRef(si, k - 1, -1)], [new EdgeRef(si, k, -1)]));
+                    pendingUp = [new EdgeRef(si, sp.Cells - 1, -1)];
+                    node = end;
+                    pos += s.Length;
+                    break;
+                }
+                case Shunt sh:
+                    AddLumped(net, BranchRole.Shunt, at + " shunt", node, -1, sh.Parts);
+                    break;
+                case Model.Series se:
+                {
+                    int next = AddJunction(net, at + " after series", pos);
+                    int b = AddLumped(net, BranchRole.Series, at + " series", node, next, se.Parts);
+                    nodes.Nodes.Add((pos, NodeRef.OnJunction(node), pendingUp.ToArray(), [new EdgeRef(-1, -1, b)]));
+                    pendingUp = [new EdgeRef(-1, -1, b)];
+                    node = next;
+                    break;
+                }
+                case Branch br:
+                {
+                    string sub = path.Length == 0 ? br.Name : path + "/" + br.Name;
+                    BuildLine(net, plan, ref planIndex, br.Line, br.Load, node, sub, at);
+                    break;
+                }
+            }
+        }
+        nodes.EndJunction = node;
+        nodes.Length = pos;
+        AddLoad(net, nodes, load, node, prefix);
+        var loadEdges = nodes.LoadBranches.Select(b => new EdgeRef(-1, -1, b)).ToArray();
+        nodes.Nodes.Add((pos, NodeRef.OnJunction(node), pendingUp.ToArray(), loadEdges));
+    }
+
+    static int AddLumped(Network net, BranchRole role, string label, int a, int b, LumpedParts p) =>
+        AddBranch(net, new LumpedBranch { Role = role, Label = label, A = a, B = b, R = p.R ?? 0, L = p.L ?? 0, C = p.C });
+
+    static void AddLoad(Network net, LineNodes nodes, LoadSpec load, int node, string prefix)
+    {
+        string label = prefix.Replace(".line", "").Replace("line", "") is { Length: > 0 } b ? b + " load" : "load";
+        void Add(LumpedBranch br) => nodes.LoadBranches.Add(AddBranch(net, br));
+        if (load.Short) { Add(new LumpedBranch { Role = BranchRole.Load, Label = label + " short", A = node, B = -1 }); return; }
+        if (load.R is { } r) Add(new LumpedBranch { Role = BranchRole.Load, Label = label + " R", A = node, B = -1, R = r, FixedB = load.To });
+        if (load.C is { } c) Add(new LumpedBranch { Role = BranchRole.Load, Label = label + " C", A = node, B = -1, C = c });
+        if (load.L is { } l) Add(new LumpedBranch { Role = BranchRole.Load, Label = label + " L", A = node, B = -1, L = l });
+    }
+}
