@@ -145,7 +145,7 @@ public static class LineChart
         canvas.Restore();
     }
 
-    static void DrawReferenceLines(SKCanvas canvas, ChartGeometry g, IReadOnlyList<ReferenceLine> lines, SKFont font)
+    internal static void DrawReferenceLines(SKCanvas canvas, ChartGeometry g, IReadOnlyList<ReferenceLine> lines, SKFont font)
     {
         if (lines.Count == 0) return;
         using SKPaint line = Ink.Stroke(Palette.Muted, 1f, [5f, 4f]);
