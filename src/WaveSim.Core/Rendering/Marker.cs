@@ -1,0 +1,7 @@
+namespace WaveSim.Core.Rendering;
+
+/// <summary>A labelled point annotation, e.g. the overshoot peak.</summary>
+/// <param name="X">X position, SI.</param>
+/// <param name="Y">Y position, SI.</param>
+/// <param name="Label">Text drawn beside the point.</param>
+public sealed record Marker(double X, double Y, string Label);
