@@ -62,8 +62,9 @@ public sealed record SignalFigures
     public double? NoiseMarginLowV { get; init; }
 
     /// <summary>
-    /// Worst-case margin after the first crossing of the receiving threshold [V] (rising: min v − Vih;
-    /// falling: Vil − max v, over the post-transition region). Negative: the ringback re-enters the threshold band.
+    /// Worst-case margin after the first crossing of the receiving threshold [V]: rising, the lowest value
+    /// after the overshoot peak minus Vih; falling, Vil minus the highest value after the (negative) peak;
+    /// over the post-transition region. Negative: the ringback re-enters the threshold band. Needs the threshold.
     /// Not one of <see cref="FigureNames"/>.
     /// </summary>
     public double? MarginAfterCrossingV { get; init; }

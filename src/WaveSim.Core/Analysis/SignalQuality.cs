@@ -38,8 +38,8 @@ public static class SignalQuality
     /// record comes back to its initial level (tail mean within 25 % of the peak-to-peak range of the initial
     /// level, or nearer the given initial than the given final level) it is a pulse: the final level is then
     /// the plateau (mean of the most populated of 100 histogram bins between the midpoint and the extreme, on
-    /// the side the first edge goes), and the post-transition region ends at the last sample at or beyond 90 %
-    /// before the waveform returns to its 10 % level. Figures are normalised u = (v − initial)/(final − initial),
+    /// the side the first edge goes), and the post-transition region ends where the second edge starts (the last
+    /// local extreme before the waveform returns to its 10 % level). Figures are normalised u = (v − initial)/(final − initial),
     /// so a falling edge is handled like a rising one. Crossing instants are interpolated linearly.
     /// </remarks>
     /// <exception cref="InputException">Arrays missing, of different lengths, shorter than 2, not finite,
@@ -126,13 +126,13 @@ public static class SignalQuality
             ringback = WaveformMath.LargestReversal(u, ic, wEnd, rising: true) * swing;
             if (receiving is not null)
             {
-                double minAfter = u[ic];
-                for (int i = ic; i <= wEnd; i++) minAfter = Math.Min(minAfter, u[i]);
+                // From the peak on: right at the crossing the value is the threshold itself.
+                double minAfter = minAfterPeak;
                 marginAfter = (minAfter - uTh) * swing;
             }
         }
 
-        double? settledAt = SettledInstant(time, u, wEnd, pulse, options.SettleBand);
+        double? settledAt = SettledInstant(time, u, wEnd, options.SettleBand);
         double reference = options.SourceEdgeTimeS ?? time[0];
 
         return figures with
@@ -214,7 +214,10 @@ public static class SignalQuality
         return -1;
     }
 
-    /// <summary>Last index of the post-transition region: the record end, or for a pulse the last sample at or above 90 % before the return to 10 %.</summary>
+    /// <summary>
+    /// Last index of the post-transition region: the record end, or for a pulse the start of the second edge,
+    /// found by walking back from the return to the 10 % level while the waveform rises going back.
+    /// </summary>
     static int PostTransitionEnd(double[] u, int i50, bool pulse)
     {
         int n = u.Length;
@@ -222,8 +225,9 @@ public static class SignalQuality
         int back = -1;
         for (int i = i50 + 1; i < n; i++) if (u[i] <= Low) { back = i; break; }
         if (back < 0) return n - 1;
-        for (int i = back - 1; i >= i50; i--) if (u[i] >= High) return i;
-        return back - 1;
+        int start = back;
+        while (start - 1 >= i50 && u[start - 1] > u[start]) start--;
+        return start;
     }
 
     /// <summary>First 90 % crossing minus the last 10 % crossing before it (normalised waveform), or null.</summary>
@@ -238,18 +242,15 @@ public static class SignalQuality
     }
 
     /// <summary>
-    /// Instant the waveform enters ±band around the final level for good: for a step it must stay there to
-    /// the record end; for a pulse, to the end of its last in-band run before the second edge. Null if never.
+    /// Instant the waveform enters ±band around the final level for good, i.e. stays there to the end of the
+    /// post-transition region (record end, or the start of a pulse's second edge). Null if it ends outside.
     /// </summary>
-    static double? SettledInstant(double[] t, double[] u, int wEnd, bool pulse, double band)
+    static double? SettledInstant(double[] t, double[] u, int wEnd, double band)
     {
         bool In(int i) => Math.Abs(u[i] - 1) <= band;
-        int lastIn = -1;
-        if (!pulse) lastIn = In(wEnd) ? wEnd : -1;
-        else for (int i = wEnd; i >= 0; i--) if (In(i)) { lastIn = i; break; }
-        if (lastIn < 0) return null;
+        if (!In(wEnd)) return null;
         int lastOut = -1;
-        for (int i = lastIn; i >= 0; i--) if (!In(i)) { lastOut = i; break; }
+        for (int i = wEnd; i >= 0; i--) if (!In(i)) { lastOut = i; break; }
         if (lastOut < 0) return t[0];
         double edge = u[lastOut] > 1 ? 1 + band : 1 - band;
         return WaveformMath.CrossingTime(t, u, lastOut, edge);
