@@ -217,6 +217,25 @@ public class SignalQualityTests
     }
 
     [Fact]
+    public void Negative_going_pulse_uses_its_low_plateau()
+    {
+        // By construction: 3.3 V idle, 33 V/ns down to 0 V at 1.1 ns, low until 4 ns, back to 3.3 V at 4.1 ns.
+        var (t, v) = PiecewiseLinear(1 * Ps, (0, 3.3), (1 * Ns, 3.3), (1.1 * Ns, 0), (4 * Ns, 0), (4.1 * Ns, 3.3), (8 * Ns, 3.3));
+        var f = SignalQuality.Compute(t, v, new SignalQualityOptions { VihV = 2.0, VilV = 0.8 });
+
+        Assert.True(f.IsPulse);
+        Assert.False(f.Rising);
+        Near(0.0, f.LowV, absoluteFloor: 1e-9);
+        Near(3.3, f.HighV);
+        Near(80 * Ps, f.Fall9010S);                     // 90 % to 10 % of a 100 ps linear fall
+        Near(0.8, f.NoiseMarginLowV);                   // 0.8 - 0
+        Near(1.3, f.NoiseMarginHighV);                  // 3.3 - 2.0
+        Near(0.8, f.MarginAfterCrossingV);              // Vil - highest value after the trough (0 V)
+        Assert.Equal(2, f.ThresholdCrossings);
+        Assert.Contains("\"low_V\"", f.ToJsonObject().ToJsonString());
+    }
+
+    [Fact]
     public void Flat_waveform_gives_no_edge_figures_and_no_exception()
     {
         var (t, v) = Sample(1 * Ps, 1 * Ns, _ => 0.8);
