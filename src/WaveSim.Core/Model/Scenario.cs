@@ -15,6 +15,12 @@ public sealed record Scenario
     public required IReadOnlyList<ProbeSpec> Probes { get; init; }
     /// <summary>Run length and resolution.</summary>
     public required SimulationSpec Simulation { get; init; }
+    /// <summary>The length unit the scenario's author used (e.g. "mm"), for pictures.</summary>
+    public string LengthUnit { get; init; } = "m";
+    /// <summary>Metres per <see cref="LengthUnit"/>.</summary>
+    public double LengthFactor { get; init; } = 1;
+    /// <summary>The scenario's YAML text, so variants (sweeps, fits) can be made by editing one value and reading it again.</summary>
+    public string? SourceText { get; init; }
     /// <summary>The file the scenario was read from, if any (used to name outputs and resolve relative paths).</summary>
     public string? FilePath { get; init; }
 }

@@ -66,8 +66,27 @@ public static class ScenarioLoader
             Probes = [],
             Simulation = sim,
             FilePath = file,
+            SourceText = yaml,
         };
+        (scenario, _) = (WithLengthUnit(scenario, root, file), 0);
         return scenario with { Probes = ReadProbes(top, scenario) };
+    }
+
+    /// <summary>Takes the display length unit from the first segment's length as written ("150 mm" → mm).</summary>
+    static Scenario WithLengthUnit(Scenario s, YamlMappingNode root, string file)
+    {
+        foreach (var item in ((YamlSequenceNode)root.Children[new YamlScalarNode("line")]).Children.OfType<YamlMappingNode>())
+        {
+            if (item.Children.TryGetValue(new YamlScalarNode("segment"), out var seg) && seg is YamlMappingNode m
+                && m.Children.TryGetValue(new YamlScalarNode("length"), out var len) && len is YamlScalarNode text)
+            {
+                string unit = new string((text.Value ?? "").Reverse().TakeWhile(ch => char.IsLetter(ch) || ch == '\u00b5' || ch == '\u03bc').Reverse().ToArray());
+                if (unit.Length > 0 && Quantity.TryParse("1 " + unit, Dimension.Length, out double f))
+                    return s with { LengthUnit = unit, LengthFactor = f };
+                break;
+            }
+        }
+        return s;
     }
 
     static string FirstLine(string s) => s.ReplaceLineEndings(" ");

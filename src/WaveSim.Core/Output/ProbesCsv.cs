@@ -1,0 +1,29 @@
+using System.Globalization;
+using CsvHelper;
+using WaveSim.Core.Solver;
+
+namespace WaveSim.Core.Output;
+
+/// <summary>Writes probes.csv: time_s, then &lt;probe&gt;_V and &lt;probe&gt;_A for every probe, invariant culture, round-trip doubles.</summary>
+public static class ProbesCsv
+{
+    /// <summary>Writes the result's probe waveforms to <paramref name="path"/>.</summary>
+    public static void Write(SimulationResult result, string path)
+    {
+        using var writer = new StreamWriter(path);
+        using var csv = new CsvWriter(writer, CultureInfo.InvariantCulture);
+        csv.WriteField("time_s");
+        foreach (var p in result.Probes) { csv.WriteField(p.Name + "_V"); csv.WriteField(p.Name + "_A"); }
+        csv.NextRecord();
+        for (int k = 0; k < result.Time.Length; k++)
+        {
+            csv.WriteField(result.Time[k].ToString("R", CultureInfo.InvariantCulture));
+            foreach (var p in result.Probes)
+            {
+                csv.WriteField(p.Volts[k].ToString("R", CultureInfo.InvariantCulture));
+                csv.WriteField(p.Amps[k].ToString("R", CultureInfo.InvariantCulture));
+            }
+            csv.NextRecord();
+        }
+    }
+}
