@@ -29,7 +29,7 @@ public static partial class CrossSection
     /// <summary>Reads the values of one kind written as text (without a "kind" key).</summary>
     /// <param name="kind">The line kind name.</param>
     /// <param name="rawTextValues">Key to value text: lengths with units ("8 mil"), er and tand plain, at a frequency,
-    /// resistivity a plain number in ohm m (an "ohm m" suffix is accepted).</param>
+    /// resistivity a plain number in ohm m (an "ohm m" suffix is accepted); a bare 0 needs no unit.</param>
     /// <param name="context">Leads every error message.</param>
     /// <param name="keyPrefix">Put before keys in messages, "--" for command-line options. Default "".</param>
     /// <param name="freeDimension">A required key that may be missing because it will be solved for; null for none.</param>
@@ -58,6 +58,8 @@ public static partial class CrossSection
     {
         string t = raw ?? "";
         if (dim.Name == "resistivity") t = OhmMetreSuffix().Replace(t, "");
+        // A bare zero needs no unit ("thickness: 0", "offset: 0").
+        if (double.TryParse(t, NumberStyles.Float, CultureInfo.InvariantCulture, out double z) && z == 0) return 0;
         try
         {
             return Quantity.Parse(t, dim.Dimension);
