@@ -22,7 +22,20 @@ public static partial class CrossSection
     /// <param name="frequencyHz">Frequency for R_ac and G, Hz; null uses the spec's "at" value, or DC only without it.</param>
     /// <returns>The per-length parameters and any range warnings.</returns>
     /// <exception cref="InputException">Unknown kind or key, a missing key, or an impossible value (named in the message).</exception>
+    /// <exception cref="NumericalException">The formula broke down for extreme (but valid) values.</exception>
     public static LineParameters Compute(CrossSectionSpec spec, double? frequencyHz = null)
+    {
+        try
+        {
+            return ComputeChecked(spec, frequencyHz);
+        }
+        catch (ArgumentOutOfRangeException ex)
+        {
+            throw new NumericalException($"{spec.Context}: the {spec.Kind} formula broke down for these dimensions ({ex.Message.ReplaceLineEndings(" ")})");
+        }
+    }
+
+    static LineParameters ComputeChecked(CrossSectionSpec spec, double? frequencyHz)
     {
         var r = new SpecReader(spec);
         double rho = r.Optional("resistivity", LineConstants.AnnealedCopperResistivity);

@@ -31,9 +31,18 @@ public static class Stripline
     public static double ExactZeroThickness(double width, double spacing, double er)
     {
         double x = Math.PI * width / (2 * spacing);
-        double k = 1 / Math.Cosh(x), kp = Math.Tanh(x);
-        // K(k)/K(k') = AGM(1, k)/AGM(1, k'), since K(k) = pi/(2 AGM(1, k')).
-        double ratio = EllipticIntegral.KFromComplement(kp) / EllipticIntegral.KFromComplement(k);
+        double ratio;
+        if (x > 20)
+        {
+            // Wide strip: k = sech x ~ 2 e^-x, K(k) -> pi/2 and K(k') -> ln(4/k) = x + ln 2 (Abramowitz and Stegun 17.3.26, from memory), error ~ k^2 < 1e-16.
+            ratio = Math.PI / 2 / (x + Math.Log(2));
+        }
+        else
+        {
+            double k = 1 / Math.Cosh(x), kp = Math.Tanh(x);
+            // K(k)/K(k') with each K computed from its own complementary modulus, so neither loses precision.
+            ratio = EllipticIntegral.KFromComplement(kp) / EllipticIntegral.KFromComplement(k);
+        }
         return LineConstants.Eta0 / (4 * Math.Sqrt(er)) * ratio;
     }
 

@@ -118,4 +118,14 @@ public class StriplineTests
         Close.Rel(1.854074677, EllipticIntegral.K(Math.Sqrt(0.5)), 1e-9);
         Close.Rel(1.685750355, EllipticIntegral.K(0.5), 1e-9);
     }
+
+    [Fact]
+    public void Wide_strip_limit_is_continuous_and_tends_to_the_parallel_plate_value()
+    {
+        // Switch to the asymptote K(k') -> ln(4/k) at pi w/(2b) = 20 (Abramowitz and Stegun 17.3.26, from memory).
+        double b = 1, wSwitch = 40 / Math.PI;
+        Close.Rel(Stripline.ExactZeroThickness(wSwitch * (1 - 1e-9), b, 1), Stripline.ExactZeroThickness(wSwitch * (1 + 1e-9), b, 1), 1e-8);
+        // Very wide: two parallel-plate lines of gap b/2 in parallel, Z0 -> eta0 (b/2)/(2w) (Pozar Table 2.1, parallel plate).
+        Close.Rel(LineConstants.Eta0 * b / (4 * 1e4), Stripline.ExactZeroThickness(1e4, b, 1), 1e-4);
+    }
 }
