@@ -31,6 +31,12 @@ public static class CommandGuard
             error.WriteLine("error: " + OneLine(ex.Message));
             return ExitCodes.BadInput;
         }
+        catch (Exception ex) when (ex is ArgumentException or InvalidOperationException or ArithmeticException)
+        {
+            // A check deeper in the library caught something the input checks missed: still one line, no stack trace.
+            error.WriteLine("error: " + OneLine(ex.Message));
+            return ExitCodes.NumericalFailure;
+        }
     }
 
     static string OneLine(string s) => s.ReplaceLineEndings(" ");

@@ -9,6 +9,8 @@ public static class Program
     /// <summary>Builds the root command with every subcommand.</summary>
     public static RootCommand BuildRoot() => new("wavesim - transmission-line wave simulator")
     {
+        RunCommand.Create(),
+        CheckCommand.Create(),
         VersionInfoCommand.Create(),
         XSectionCommand.Create(),
     };

@@ -1,0 +1,50 @@
+using System.CommandLine;
+using WaveSim.Core;
+using WaveSim.Core.Output;
+using WaveSim.Core.Solver;
+using WaveSim.Core.Units;
+
+namespace WaveSim.Cli.Commands;
+
+/// <summary>`wavesim check SCENARIO`: reads the scenario and prints the grid plan and the problems found, without running.</summary>
+public static class CheckCommand
+{
+    /// <summary>Creates the command.</summary>
+    public static Command Create()
+    {
+        var scenario = CommonOptions.Scenario();
+        var json = CommonOptions.Json();
+        var cmd = new Command("check", "Read a scenario and print the plan (cells, Courant numbers, step, memory) without running") { scenario, json };
+        cmd.SetAction(pr => CommandGuard.Run(pr.InvocationConfiguration.Error, () =>
+        {
+            var s = CommonOptions.Load(pr.GetValue(scenario)!);
+            var plan = Simulate.Plan(s);
+            var problems = PlanAdvisor.Problems(s, plan);
+            var o = pr.InvocationConfiguration.Output;
+            if (pr.GetValue(json))
+            {
+                var j = RunSummary.PlanJson(plan);
+                j["problems"] = new System.Text.Json.Nodes.JsonArray(problems.Select(p => (System.Text.Json.Nodes.JsonNode)p).ToArray());
+                o.WriteLine(RunSummary.Text(j));
+            }
+            else
+            {
+                o.WriteLine($"{s.Title}");
+                PrintPlan(o, plan);
+                foreach (var p in problems) o.WriteLine("problem: " + p);
+                if (problems.Count == 0) o.WriteLine("no problems found");
+            }
+            return ExitCodes.Ok;
+        }));
+        return cmd;
+    }
+
+    /// <summary>Prints the plan as an aligned table.</summary>
+    public static void PrintPlan(TextWriter o, GridPlan plan)
+    {
+        o.WriteLine($"time step {Quantity.Format(plan.Dt, "s")} (limit {Quantity.Format(plan.DtLimit, "s")}), {plan.Steps} steps, {plan.TotalCells} cells, {plan.CellUpdates:G3} cell updates, memory about {Quantity.Format(plan.MemoryBytes, "B", 3)}");
+        o.WriteLine($"  {"segment",-22} {"length",10} {"Z0",10} {"delay",10} {"cells",8} {"Courant",9}");
+        foreach (var sp in plan.Segments)
+            o.WriteLine($"  {sp.Where,-22} {Quantity.Format(sp.Segment.Length, "m"),10} {Quantity.Format(sp.Segment.Z0, "Ω", 3),10} {Quantity.Format(sp.Segment.Delay, "s"),10} {sp.Cells,8} {sp.Courant,9:F6}");
+    }
+}

@@ -1,0 +1,99 @@
+using System.CommandLine;
+using System.Globalization;
+using WaveSim.Core;
+using WaveSim.Core.Analysis;
+using WaveSim.Core.Output;
+using WaveSim.Core.Rendering;
+using WaveSim.Core.Solver;
+using WaveSim.Core.Units;
+
+namespace WaveSim.Cli.Commands;
+
+/// <summary>`wavesim run SCENARIO`: simulates and writes probes.csv, summary.json and the pictures.</summary>
+public static class RunCommand
+{
+    /// <summary>Creates the command.</summary>
+    public static Command Create()
+    {
+        var scenario = CommonOptions.Scenario();
+        var outDir = CommonOptions.Out();
+        var json = CommonOptions.Json();
+        var force = CommonOptions.Force();
+        var svg = new Option<bool>("--svg") { Description = "Also write waveforms.svg" };
+        var currents = new Option<bool>("--currents") { Description = "Add a panel of probe currents to the waveform plot" };
+        var frames = new Option<int>("--frames") { Description = "Write N frames of the voltage along the line to frames/", DefaultValueFactory = _ => 0 };
+        var frameSize = new Option<string>("--frame-size") { Description = "Frame size WIDTHxHEIGHT in pixels", DefaultValueFactory = _ => "1280x720" };
+        var settle = new Option<string>("--settle-band") { Description = "Settling band as a fraction or percentage of the swing", DefaultValueFactory = _ => "5 %" };
+        var cmd = new Command("run", "Simulate a scenario and write probes.csv, summary.json and pictures")
+        { scenario, outDir, json, force, svg, currents, frames, frameSize, settle };
+        cmd.SetAction((pr, ct) => Task.FromResult(CommandGuard.Run(pr.InvocationConfiguration.Error, () =>
+        {
+            string path = pr.GetValue(scenario)!;
+            int nFrames = pr.GetValue(frames);
+            if (nFrames < 0 || nFrames > 100_000) throw new InputException($"--frames: expected 0 to 100000, got {nFrames}");
+            var (fw, fh) = ParseSize(pr.GetValue(frameSize)!);
+            double band = ParseBand(pr.GetValue(settle)!);
+            var s = CommonOptions.Load(path);
+            var options = new SimulationOptions { Force = pr.GetValue(force), SnapshotTimes = RunPictures.SnapshotTimes(s, nFrames) };
+            SimulationResult result;
+            using (var bar = new ProgressBar(pr.InvocationConfiguration.Error, "simulating"))
+                result = Simulate.Run(s, options with { Progress = bar }, ct);
+            var figures = RunSummary.Figures(result, band);
+            var summary = RunSummary.Json(result, figures);
+            string dir = CommonOptions.OutputDir(pr.GetValue(outDir), path);
+            using (var output = new OutputFolder(dir))
+            {
+                ProbesCsv.Write(result, output.File("probes.csv"));
+                File.WriteAllText(output.File("summary.json"), RunSummary.Text(summary));
+                var chart = RunPictures.Waveforms(result, pr.GetValue(currents));
+                File.WriteAllBytes(output.File("waveforms.png"), LineChart.RenderPng(chart, 1200, pr.GetValue(currents) ? 900 : 600));
+                if (pr.GetValue(svg)) File.WriteAllText(output.File("waveforms.svg"), LineChart.RenderSvg(chart, 1200, pr.GetValue(currents) ? 900 : 600));
+                File.WriteAllBytes(output.File("spacetime.png"), RunPictures.SpaceTime(result, 1000, 800));
+                if (nFrames > 0)
+                {
+                    var (lo, hi) = RunPictures.VoltageRange(result);
+                    string framesDir = Path.GetDirectoryName(output.File("frames/frame_00001.png"))!;
+                    using var bar = new ProgressBar(pr.InvocationConfiguration.Error, "frames");
+                    FrameSequence.WriteAll(framesDir, RunPictures.Layout(result), RunPictures.Frames(result, nFrames), lo, hi, fw, fh, ct);
+                }
+                output.Commit();
+            }
+            var o = pr.InvocationConfiguration.Output;
+            if (pr.GetValue(json)) o.WriteLine(RunSummary.Text(summary));
+            else PrintSummary(o, result, figures, dir);
+            return ExitCodes.Ok;
+        })));
+        return cmd;
+    }
+
+    /// <summary>Reads "1280x720".</summary>
+    public static (int W, int H) ParseSize(string text)
+    {
+        var parts = text.Split('x', 'X');
+        if (parts.Length == 2 && int.TryParse(parts[0], NumberStyles.None, CultureInfo.InvariantCulture, out int w)
+            && int.TryParse(parts[1], NumberStyles.None, CultureInfo.InvariantCulture, out int h) && w >= 160 && h >= 120 && w <= 8192 && h <= 8192)
+            return (w, h);
+        throw new InputException($"--frame-size: expected WIDTHxHEIGHT between 160x120 and 8192x8192, e.g. 1280x720, got '{text}'");
+    }
+
+    /// <summary>Reads a settling band: "5 %" or "0.05".</summary>
+    public static double ParseBand(string text)
+    {
+        var (v, dim) = Quantity.ParseAny(text, Dimension.Percent, Dimension.Number);
+        if (!(v > 0 && v < 0.5)) throw new InputException($"--settle-band: expected a band between 0 and 50 % of the swing, got '{text}'");
+        return v;
+    }
+
+    static void PrintSummary(TextWriter o, SimulationResult r, IReadOnlyList<(ProbeTrace Probe, SignalFigures Figures)> figures, string dir)
+    {
+        o.WriteLine($"{r.Scenario.Title}: {r.Plan.Steps} steps of {Quantity.Format(r.Plan.Dt, "s")} on {r.Plan.TotalCells} cells in {r.Elapsed.TotalSeconds:F2} s");
+        o.WriteLine($"  {"probe",-12} {"final",10} {"min",10} {"max",10} {"overshoot",10} {"delay",10} {"rise",10} {"settling",10}");
+        foreach (var (p, f) in figures)
+            o.WriteLine($"  {p.Name,-12} {V(p.Volts[^1]),10} {V(p.Volts.Min()),10} {V(p.Volts.Max()),10} {Pct(f.OvershootPct),10} {T(f.Delay50S),10} {T(f.Rise1090S ?? f.Fall9010S),10} {T(f.SettlingS),10}");
+        o.WriteLine($"wrote {Path.Combine(dir, "probes.csv")}, summary.json, waveforms.png, spacetime.png");
+    }
+
+    static string V(double v) => Quantity.Format(v, "V", 3);
+    static string T(double? t) => t is { } x ? Quantity.Format(x, "s", 3) : "-";
+    static string Pct(double? p) => p is { } x ? x.ToString("F1", CultureInfo.InvariantCulture) + " %" : "-";
+}

@@ -1,0 +1,33 @@
+using System.CommandLine;
+using WaveSim.Core;
+using WaveSim.Core.Model;
+using WaveSim.Core.Scenarios;
+
+namespace WaveSim.Cli;
+
+/// <summary>Options and arguments shared by several commands.</summary>
+public static class CommonOptions
+{
+    /// <summary>The scenario file argument.</summary>
+    public static Argument<string> Scenario() => new("scenario") { Description = "Scenario file (YAML)" };
+
+    /// <summary>--out DIR.</summary>
+    public static Option<string?> Out() => new("--out", "-o") { Description = "Output folder (default: out/<scenario name>)" };
+
+    /// <summary>--json: print the summary as one JSON object instead of text.</summary>
+    public static Option<bool> Json() => new("--json") { Description = "Print the summary as JSON on stdout" };
+
+    /// <summary>--force: run beyond the memory and cell-update limits.</summary>
+    public static Option<bool> Force() => new("--force") { Description = "Run even when the plan exceeds 2 GB or 1e11 cell updates" };
+
+    /// <summary>Loads a scenario, turning a missing file into a one-line error.</summary>
+    public static Scenario Load(string path)
+    {
+        if (!File.Exists(path)) throw new InputException($"{path}: no such scenario file");
+        return ScenarioLoader.Load(path);
+    }
+
+    /// <summary>The output folder: the option's value, or out/&lt;scenario file name without extension&gt;.</summary>
+    public static string OutputDir(string? option, string scenarioPath) =>
+        option ?? Path.Combine("out", Path.GetFileNameWithoutExtension(scenarioPath));
+}

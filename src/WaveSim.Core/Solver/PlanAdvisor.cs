@@ -1,0 +1,25 @@
+using WaveSim.Core.Model;
+using WaveSim.Core.Units;
+
+namespace WaveSim.Core.Solver;
+
+/// <summary>Finds the things in a plan a user should know before running: dispersion, limits, coarse sampling.</summary>
+public static class PlanAdvisor
+{
+    /// <summary>One line per problem; empty when the plan is clean.</summary>
+    public static IReadOnlyList<string> Problems(Scenario s, GridPlan plan)
+    {
+        var list = new List<string>();
+        foreach (var sp in plan.Segments.Where(p => p.Courant < 0.98))
+            list.Add($"{sp.Where}: Courant number {sp.Courant:F3} < 1: the grid adds some numerical dispersion there (a delay that is a whole number of steps avoids it)");
+        if (plan.MemoryBytes > GridPlan.MemoryLimitBytes)
+            list.Add($"the run needs about {Quantity.Format(plan.MemoryBytes, "B", 3)} of memory, over the 2 GB limit: run with --force, or lower resolution or output_step");
+        if (plan.CellUpdates > GridPlan.CellUpdateLimit)
+            list.Add($"the run needs {plan.CellUpdates:G3} cell updates, over the 1e11 limit: run with --force, or shorten the duration");
+        if (s.Simulation.OutputStep is { } h && h < plan.Dt)
+            list.Add($"simulation.output_step {Quantity.Format(h, "s")} is finer than the solver's step {Quantity.Format(plan.Dt, "s")}: rows between steps are interpolated");
+        if (double.IsPositiveInfinity(s.Source.ShortestFeature))
+            list.Add("the source has an ideal (zero-time) edge: the step is limited by the shortest segment; give 'rise' for a band-limited edge");
+        return list;
+    }
+}
