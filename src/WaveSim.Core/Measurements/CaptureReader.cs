@@ -16,7 +16,7 @@ namespace WaveSim.Core.Measurements;
 /// <item>Numbers use a decimal point (invariant culture). A decimal comma is rejected with a one-line error,
 /// because "1,5" cannot be told apart from two fields in a comma-separated file.</item>
 /// <item>Data block: the first row from which the next three rows (or all remaining rows, if fewer) are numeric
-/// rows with the same field count. A numeric row has at least two fields, each a number, blank or NaN.
+/// rows with the same field count. A numeric row has at least two fields, each a number, blank or NaN, and at least one number.
 /// Everything before it is metadata; the row just before it is the header when it has the same field count
 /// and is not numeric. Every row after the start must be a data row: a stray text cell is an error naming
 /// its line, not a silent restart of the block. <see cref="CaptureOptions.Skip"/> overrides the search.</item>
@@ -212,12 +212,12 @@ public static partial class CaptureReader
         {
             if (IsMissing(f))
                 continue;
-            if (TryNumber(f, out _) || DecimalCommaNumber().IsMatch(f))
+            if (LooksNumeric(f))
                 numbers++;
             else
                 return false;
         }
-        return numbers >= 2;
+        return numbers >= 1;
     }
 
     static int ResolveColumn(string? spec, string[]? header, (int Line, string[] Fields) firstRow, int exclude, string role, string name)
@@ -226,7 +226,7 @@ public static partial class CaptureReader
         if (string.IsNullOrWhiteSpace(spec))
         {
             for (int c = exclude + 1; c < count; c++)
-                if (TryNumber(firstRow.Fields[c], out _))
+                if (LooksNumeric(firstRow.Fields[c]))
                     return c;
             throw new InputException($"{name} line {firstRow.Line}: no numeric {role} column found; give the column by name or 1-based number");
         }
@@ -265,6 +265,9 @@ public static partial class CaptureReader
             throw new InputException($"{where}: '{field}' is not a finite number");
         return value;
     }
+
+    /// <summary>A number, or a decimal-comma number (accepted here so that <see cref="Cell"/> can name it).</summary>
+    static bool LooksNumeric(string field) => TryNumber(field, out _) || DecimalCommaNumber().IsMatch(field);
 
     static bool IsMissing(string field) =>
         field.Length == 0 || field.Equals("nan", StringComparison.OrdinalIgnoreCase);
