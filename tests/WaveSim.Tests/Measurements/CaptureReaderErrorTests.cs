@@ -113,7 +113,7 @@ public class CaptureReaderErrorTests
     [Fact]
     public void Skip_overrides_detection_and_the_next_line_is_the_header()
     {
-        // The first data line would be taken as metadata by nobody here, but Skip says where the table begins.
+        // Without Skip the numeric block would start at line 2 ("1,2,3"); Skip = 2 puts the table at line 3.
         Capture c = Reads("a,b,c\n1,2,3\nt,v\n0,5\n1,6\n", new CaptureOptions { Skip = 2, VoltColumn = "v" });
         Assert.Equal([5.0, 6], c.Volts);
     }
