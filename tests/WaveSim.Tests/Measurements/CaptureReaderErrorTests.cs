@@ -113,8 +113,12 @@ public class CaptureReaderErrorTests
     [Fact]
     public void Skip_overrides_detection_and_the_next_line_is_the_header()
     {
-        // Without Skip the numeric block would start at line 2 ("1,2,3"); Skip = 2 puts the table at line 3.
-        Capture c = Reads("a,b,c\n1,2,3\nt,v\n0,5\n1,6\n", new CaptureOptions { Skip = 2, VoltColumn = "v" });
+        // Three numeric metadata lines (channel number, scale, offset) look like a table to the search ...
+        const string content = "1,0.5,0\n2,0.2,0.1\n3,1,0\nt,v\n0,5\n1,6\n";
+        var ex = Fails(content);
+        Assert.StartsWith("capture.csv line 4 column 1: 't' is not a number", ex.Message);
+        // ... so Skip = 3 says where the table begins.
+        Capture c = Reads(content, new CaptureOptions { Skip = 3, VoltColumn = "v" });
         Assert.Equal([5.0, 6], c.Volts);
     }
 
