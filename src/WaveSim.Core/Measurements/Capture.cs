@@ -1,0 +1,14 @@
+namespace WaveSim.Core.Measurements;
+
+/// <summary>A measured waveform read from a file: samples in SI units, time strictly increasing.</summary>
+/// <param name="Time">Sample times, s (after <see cref="CaptureOptions.TimeScale"/>); strictly increasing, need not start at zero or be evenly spaced.</param>
+/// <param name="Volts">Sample values, V (after <see cref="CaptureOptions.VoltScale"/>), one per time.</param>
+/// <param name="Source">The path the capture was read from.</param>
+public sealed record Capture(double[] Time, double[] Volts, string Source)
+{
+    /// <summary>Rows left out because a selected cell was blank or NaN.</summary>
+    public int DroppedRows { get; init; }
+
+    /// <summary>One-line warnings for the user (dropped rows, with their line numbers). Empty when the file was clean.</summary>
+    public IReadOnlyList<string> Warnings { get; init; } = [];
+}
