@@ -64,7 +64,7 @@ public static class LineChart
 
         float plotWidth = right - left;
         if (plotWidth < 20 || heights.Any(h => h < 10))
-            throw new ArgumentException($"A {width}×{height} px image is too small for {n} panel(s) with these labels.");
+            throw new ArgumentException($"A {width}×{height} px image is too small for {n} panel(s) with these labels (plot {plotWidth:F0} px wide, left {left:F0}, heights {string.Join(",", heights.Select(h => h.ToString("F0")))}, y {string.Join(";", yRanges.Select(r => r.ToString()))}).");
         var xAxis = AxisScale.Exact(spec.XLabel, spec.XUnit, xMin, xMax, Math.Clamp((int)(plotWidth / (fs * 6.5f)), 2, 12));
         // The X prefix must agree across panels, so every panel uses this one axis.
         var panels = new List<PanelLayout>(n);

@@ -6,15 +6,16 @@ namespace WaveSim.Core.Solver;
 /// <param name="Where">The segment's place, e.g. "line[0]" or "stub.line[1]".</param>
 /// <param name="Segment">The segment.</param>
 /// <param name="Cells">Whole number of cells.</param>
-/// <param name="Courant">T / (cells · dt), at most 1; exactly 1 means no numerical dispersion on a lossless line.</param>
+/// <param name="Courant">v·dt/dz = cells · dt / T, at most 1; exactly 1 means no numerical dispersion on a lossless line.</param>
 public sealed record SegmentPlan(string Where, Segment Segment, int Cells, double Courant);
 
 /// <summary>
 /// The solver's grid: the time step, the cells of every segment, the number of steps and the cost.
 /// </summary>
 /// <remarks>
-/// Every segment gets n = ceil(T/dt) cells for its delay T, so its delay and Z0 are exact and its Courant number
-/// T/(n·dt) is at most 1 (the Courant-Friedrichs-Lewy bound of the 1-D leapfrog, Courant, Friedrichs and Lewy 1928).
+/// Every segment gets n = floor(T/dt) cells for its delay T (a whole number, so its delay and Z0 are exact), which keeps each
+/// cell's delay T/n at least dt: the Courant number v·dt/dz = n·dt/T is then at most 1, the Courant-Friedrichs-Lewy bound of the
+/// 1-D leapfrog (Courant, Friedrichs and Lewy 1928). Rounding up instead would put the number above 1 and the grid would blow up.
 /// dt is picked, within the resolution's bound, to bring every Courant number as close to 1 as it can: at exactly 1
 /// the lossless leapfrog is free of numerical dispersion (the "magic time step", Taflove and Hagness,
 /// Computational Electrodynamics, 3rd ed. 2005, ch. 2).
@@ -56,7 +57,7 @@ public sealed record GridPlan
         var plans = segs.Select(s =>
         {
             int n = CellsFor(s.Seg.Delay, dt);
-            return new SegmentPlan(s.Where, s.Seg, n, s.Seg.Delay / (n * dt));
+            return new SegmentPlan(s.Where, s.Seg, n, n * dt / s.Seg.Delay);
         }).ToList();
         long steps = (long)Math.Ceiling(scenario.Simulation.Duration / dt * (1 - RoundingTolerance));
         double h = scenario.Simulation.OutputStep ?? dt;
@@ -67,11 +68,11 @@ public sealed record GridPlan
         return new GridPlan { Dt = dt, DtLimit = limit, Steps = steps, Segments = plans, OutputRows = rows, MemoryBytes = memory };
     }
 
-    /// <summary>The whole number of cells for a delay: ceil(T/dt) with a relative tolerance.</summary>
+    /// <summary>The whole number of cells for a delay: floor(T/dt) with a relative tolerance, at least 1.</summary>
     public static int CellsFor(double delay, double dt)
     {
         double ratio = delay / dt;
-        double n = Math.Ceiling(ratio * (1 - RoundingTolerance));
+        double n = Math.Floor(ratio * (1 + RoundingTolerance));
         if (n > int.MaxValue) throw new InputException($"a segment needs {n:G3} cells, more than one segment can hold; lower simulation.resolution");
         return Math.Max(1, (int)n);
     }
@@ -105,7 +106,7 @@ public sealed record GridPlan
         foreach (double t in delays)
         {
             int n = CellsFor(t, dt);
-            worst = Math.Max(worst, 1 - t / (n * dt));
+            worst = Math.Max(worst, 1 - Math.Min(1, n * dt / t));
         }
         return worst;
     }
