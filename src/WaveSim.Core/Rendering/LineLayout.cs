@@ -30,7 +30,7 @@ public sealed record LineLayout(IReadOnlyList<LinePiece> Pieces, string LengthUn
         {
             if (p.X is null || p.X.Length < 2) throw new ArgumentException($"Piece '{p.Name}' needs at least two node positions.");
             for (int i = 1; i < p.X.Length; i++)
-                if (!(p.X[i] > p.X[i - 1])) throw new ArgumentException($"Piece '{p.Name}' node positions must be finite and ascending (node {i}).");
+                if (!(p.X[i] >= p.X[i - 1]) || !double.IsFinite(p.X[i])) throw new ArgumentException($"Piece '{p.Name}' node positions must be finite and ascending (node {i})."); // a series part repeats a position
         }
     }
 

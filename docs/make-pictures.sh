@@ -1,0 +1,8 @@
+#!/usr/bin/env bash
+# Regenerates the README's pictures from the demo scenario.
+set -euo pipefail
+cd "$(dirname "$0")/.."
+dotnet run --project src/WaveSim.Cli -- run scenarios/clock-on-board.yaml --out out/demo --frames 40
+cp out/demo/waveforms.png docs/waveforms.png
+cp out/demo/spacetime.png docs/spacetime.png
+cp out/demo/frames/frame_00006.png docs/frame.png
