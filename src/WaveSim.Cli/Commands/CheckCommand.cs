@@ -45,6 +45,11 @@ public static class CheckCommand
         o.WriteLine($"time step {Quantity.Format(plan.Dt, "s")} (limit {Quantity.Format(plan.DtLimit, "s")}), {plan.Steps} steps, {plan.TotalCells} cells, {plan.CellUpdates:G3} cell updates, memory about {Quantity.Format(plan.MemoryBytes, "B", 3)}");
         o.WriteLine($"  {"segment",-22} {"length",10} {"Z0",10} {"delay",10} {"cells",8} {"Courant",9}");
         foreach (var sp in plan.Segments)
+        {
             o.WriteLine($"  {sp.Where,-22} {Quantity.Format(sp.Segment.Length, "m"),10} {Quantity.Format(sp.Segment.Z0, "Ω", 3),10} {Quantity.Format(sp.Segment.Delay, "s"),10} {sp.Cells,8} {sp.Courant,9:F6}");
+            var s = sp.Segment;
+            if (s.Derived is { } d)
+                o.WriteLine($"    from {d.Kind} geometry: Z0 {Quantity.Format(d.Z0, "Ω")}, eps_eff {d.EpsEff:G4}, {Quantity.Format(d.DelayPerLength, "s")}/m, L {Quantity.Format(s.L, "H")}/m, C {Quantity.Format(s.C, "F")}/m, R {Quantity.Format(s.R, "Ω")}/m, G {Quantity.Format(s.G, "S")}/m");
+        }
     }
 }

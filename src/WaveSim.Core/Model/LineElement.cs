@@ -11,6 +11,9 @@ public abstract record LineElement;
 /// <param name="C">Shunt capacitance per length, F/m (&gt; 0).</param>
 public sealed record Segment(double Length, double R, double L, double G, double C) : LineElement
 {
+    /// <summary>The cross-section figures this segment was derived from, when it was given by geometry.</summary>
+    public Lines.LineParameters? Derived { get; init; }
+
     /// <summary>Characteristic impedance of the lossless part, √(L/C), ohm.</summary>
     public double Z0 => Math.Sqrt(L / C);
     /// <summary>Propagation velocity 1/√(LC), m/s.</summary>

@@ -17,7 +17,7 @@ public static class ScenarioLoader
     /// <summary>The keys accepted under <c>source</c>.</summary>
     public static readonly string[] SourceKeys = ["waveform", "low", "high", "rise", "fall", "delay", "width", "period", "frequency", "bit_time", "pattern", "prbs", "file", "resistance"];
     /// <summary>The keys accepted under <c>segment</c>.</summary>
-    public static readonly string[] SegmentKeys = ["length", "z0", "delay", "velocity", "eps_eff", "r", "l", "g", "c"];
+    public static readonly string[] SegmentKeys = ["length", "z0", "delay", "velocity", "eps_eff", "r", "l", "g", "c", "geometry"];
     /// <summary>The keys accepted under <c>shunt</c> and <c>series</c>.</summary>
     public static readonly string[] LumpedKeys = ["r", "l", "c"];
     /// <summary>The keys accepted under <c>branch</c>.</summary>
@@ -54,7 +54,7 @@ public static class ScenarioLoader
 
         var top = new YamlMap(file, "", root, TopKeys);
         var source = ReadSource(top, file);
-        var line = ReadLine(top, "line", top.Sequence("line") ?? throw top.Error("missing required key 'line'"), file, new HashSet<string>());
+        var line = ReadLine(top, "line", top.Sequence("line") ?? throw top.Error("missing required key 'line'"), file, new HashSet<string>(), source.Rise);
         var load = ReadLoad(top, "load");
         var sim = ReadSimulation(top);
         var scenario = new Scenario
@@ -191,7 +191,7 @@ public static class ScenarioLoader
         return (t.ToArray(), v.ToArray());
     }
 
-    static List<LineElement> ReadLine(YamlMap parent, string key, YamlSequenceNode seq, string file, HashSet<string> branchNames)
+    static List<LineElement> ReadLine(YamlMap parent, string key, YamlSequenceNode seq, string file, HashSet<string> branchNames, double scenarioRise)
     {
         var items = new List<LineElement>();
         int i = 0;
@@ -204,10 +204,10 @@ public static class ScenarioLoader
             string kind = ((YamlScalarNode)m.Children.Keys.First()).Value!;
             items.Add(kind switch
             {
-                "segment" => ReadSegment(wrapper.Map("segment", SegmentKeys)!),
+                "segment" => ReadSegment(wrapper.Map("segment", SegmentKeys)!, scenarioRise),
                 "shunt" => new Shunt(ReadParts(wrapper.Map("shunt", LumpedKeys)!)),
                 "series" => new Model.Series(ReadParts(wrapper.Map("series", LumpedKeys)!)),
-                _ => ReadBranch(wrapper.Map("branch", BranchKeys)!, file, branchNames),
+                _ => ReadBranch(wrapper.Map("branch", BranchKeys)!, file, branchNames, scenarioRise),
             });
             i++;
         }
@@ -216,11 +216,14 @@ public static class ScenarioLoader
         return items;
     }
 
-    static Segment ReadSegment(YamlMap m)
+    static Segment ReadSegment(YamlMap m, double rise)
     {
         double length = m.Positive("length", Dimension.Length) ?? throw m.Error($"missing required key '{m.Join("length")}'");
-        double r = m.NonNegative("r", Dimension.ResistancePerLength) ?? 0;
-        double g = m.NonNegative("g", Dimension.ConductancePerLength) ?? 0;
+        double? rGiven = m.NonNegative("r", Dimension.ResistancePerLength);
+        double? gGiven = m.NonNegative("g", Dimension.ConductancePerLength);
+        if (m.Has("geometry")) return SegmentGeometry.Read(m, length, rGiven, gGiven, rise);
+        double r = rGiven ?? 0;
+        double g = gGiven ?? 0;
         if (m.Has("z0"))
         {
             if (m.Has("l") || m.Has("c"))
@@ -272,12 +275,12 @@ public static class ScenarioLoader
         return parts;
     }
 
-    static Branch ReadBranch(YamlMap m, string file, HashSet<string> names)
+    static Branch ReadBranch(YamlMap m, string file, HashSet<string> names, double scenarioRise)
     {
         string name = m.Identifier("name");
         if (!names.Add(name)) throw m.Error(m.Node("name")!, m.Join("name"), $"branch name '{name}' is used twice");
         var seq = m.Sequence("line") ?? throw m.Error($"missing required key '{m.Join("line")}'");
-        var line = ReadLine(m, "line", seq, file, names);
+        var line = ReadLine(m, "line", seq, file, names, scenarioRise);
         return new Branch(name, line, ReadLoad(m, "load"));
     }
 

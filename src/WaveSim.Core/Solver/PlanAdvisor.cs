@@ -12,6 +12,9 @@ public static class PlanAdvisor
         var list = new List<string>();
         foreach (var sp in plan.Segments.Where(p => p.Courant < 0.98))
             list.Add($"{sp.Where}: Courant number {sp.Courant:F3} < 1: the grid adds some numerical dispersion there (a delay that is a whole number of steps avoids it)");
+        foreach (var sp in plan.Segments)
+            if (sp.Segment.Derived is { } d)
+                foreach (var w in d.Warnings) list.Add($"{sp.Where}.geometry: {w}");
         if (plan.MemoryBytes > GridPlan.MemoryLimitBytes)
             list.Add($"the run needs about {Quantity.Format(plan.MemoryBytes, "B", 3)} of memory, over the 2 GB limit: run with --force, or lower resolution or output_step");
         if (plan.CellUpdates > GridPlan.CellUpdateLimit)

@@ -1,0 +1,39 @@
+using WaveSim.Core.Lines;
+using WaveSim.Core.Model;
+using YamlDotNet.RepresentationModel;
+
+namespace WaveSim.Core.Scenarios;
+
+/// <summary>
+/// A segment given by its cross-section (<c>geometry: { kind: microstrip, width: 8 mil, … }</c>): L and C from the
+/// closed-form formulas of <see cref="CrossSection"/>, R and G as constants.
+/// </summary>
+/// <remarks>
+/// R is the DC resistance of the copper unless <c>at</c> is given, in which case it is the skin-effect resistance at that
+/// frequency (a constant-R model must choose one; DC keeps the settled levels right). G = ωC·tan δ at <c>at</c>, or at the
+/// source edge's bandwidth 0.35/t_r (exact for one pole, ln 9/2π; common practice) when <c>at</c> is not given.
+/// An explicit <c>r</c> or <c>g</c> beside the geometry overrides the derived value.
+/// </remarks>
+internal static class SegmentGeometry
+{
+    public static Segment Read(YamlMap m, double length, double? r, double? g, double rise)
+    {
+        foreach (string k in new[] { "z0", "delay", "velocity", "eps_eff", "l", "c" })
+            if (m.Has(k)) throw m.Error(m.Node(k)!, m.Join(k), "a segment given by geometry takes its impedance and delay from it: remove this key");
+        var node = m.Node("geometry")!;
+        if (node is not YamlMappingNode map) throw m.Error(node, m.Join("geometry"), "expected a mapping such as { kind: microstrip, width: 8 mil, height: 5 mil, er: 4.2 }");
+        var raw = new Dictionary<string, string>();
+        foreach (var (k, v) in map.Children)
+        {
+            string key = ((YamlScalarNode)k).Value ?? "";
+            if (v is not YamlScalarNode sv) throw m.Error(v, m.Join("geometry." + key), "expected a single value");
+            raw[key] = sv.Value ?? "";
+        }
+        string context = $"{m.File}:{node.Start.Line}:{node.Start.Column}: {m.Join("geometry")}";
+        var spec = CrossSection.FromDictionary(raw, context);
+        var p = CrossSection.Compute(spec);
+        double at = p.FrequencyHz ?? (rise > 0 ? 0.35 / rise : 0);
+        double rDerived = p.FrequencyHz is { } f ? p.ResistanceAt(f) : p.RDc;
+        return new Segment(length, r ?? rDerived, p.L, g ?? p.ConductanceAt(at), p.C) { Derived = p };
+    }
+}
