@@ -1,0 +1,111 @@
+using System.Numerics;
+using MathNet.Numerics.IntegralTransforms;
+using WaveSim.Core.Model;
+
+namespace WaveSim.Core.FrequencyDomain;
+
+/// <summary>
+/// The time response by the numerical Laplace transform (Wilcox, "Numerical Laplace transformation and inversion",
+/// Int. J. Electr. Eng. Educ. 15, 1978; Wedepohl's damped-FFT form; both from memory): the driver's change from its initial
+/// level, u(t) = Vs(t) − Vs(0⁻), is sampled on [0, W), multiplied by e^(−σt), transformed with the FFT, multiplied by each
+/// probe's transfer evaluated at s = σ + jω, transformed back and multiplied by e^(σt).
+/// </summary>
+/// <remarks>
+/// Why it works: the inverse DFT returns the damped response summed over its periodic repeats,
+/// y(t)e^(−σt) + y(t+W)e^(−σ(t+W)) + …, so after undoing the damping the wrap-around error is about e^(−σW)·|y|, whatever
+/// the network does after W (lossless lines, whose poles sit on the jω axis, ring for ever and are handled the same way).
+/// Here W = <see cref="WindowFactor"/> × the last instant asked for and σ = ln(1/<see cref="Aliasing"/>)/W, so the
+/// wrap-around is 1e-6 of the response, and the rounding error is amplified at most by e^(σ·W/4) = 1e6^(1/4) ≈ 32.
+/// The sample step is a twentieth of the driver's shortest feature (its 10-90 % edge, width or period), so the edge is
+/// band-limited well inside the transform's band; an ideal edge (no rise time) is not band-limited and shows ringing
+/// (the Gibbs effect) of the size of one sample step.
+/// </remarks>
+internal sealed class TransientTransform
+{
+    /// <summary>The transform window over the last instant asked for.</summary>
+    public const double WindowFactor = 4;
+    /// <summary>Wrap-around allowed, as a fraction of the response.</summary>
+    public const double Aliasing = 1e-6;
+    /// <summary>Samples per shortest feature of the driver's waveform.</summary>
+    public const double SamplesPerFeature = 20;
+    /// <summary>Bounds on the number of transform samples (powers of two); above the upper bound the step is widened.</summary>
+    public const int MinPoints = 1 << 10, MaxPoints = 1 << 19;
+
+    public required double Step { get; init; }
+    public required int Points { get; init; }
+    public required double Damping { get; init; }
+
+    public static TransientTransform For(Scenario scenario, double lastTime)
+    {
+        double feature = scenario.Source.ShortestFeature;
+        if (!double.IsFinite(feature) || feature <= 0)
+            feature = AllSegments(scenario.Line).Min(s => s.Delay);
+        double window = WindowFactor * Math.Max(lastTime, 1e-15);
+        double wanted = Math.Min(feature / SamplesPerFeature, lastTime / 256);
+        double points = Math.Ceiling(window / Math.Max(wanted, window / MaxPoints));
+        int n = MinPoints;
+        while (n < points && n < MaxPoints) n <<= 1;
+        return new TransientTransform { Step = window / n, Points = n, Damping = Math.Log(1 / Aliasing) / window };
+    }
+
+    /// <summary>Each probe's change from the DC operating point at <paramref name="times"/>: volts then amps, [probe][instant].</summary>
+    public (double[][] Volts, double[][] Amps) Run(SourceSpec source, Circuit circuit, double[] times)
+    {
+        int n = Points, half = n / 2, probes = circuit.Probes.Count;
+        double dt = Step, sigma = Damping;
+        var spectrum = new Complex[n];
+        for (int k = 0; k < n; k++)
+            spectrum[k] = (source.Value(k * dt) - source.InitialLevel) * Math.Exp(-sigma * k * dt);
+        Fourier.Forward(spectrum, FourierOptions.Matlab);
+
+        // Transfers at s = σ + jω for ω ≥ 0; the negative frequencies are their conjugates (real responses).
+        var hv = new Complex[probes][];
+        var hi = new Complex[probes][];
+        for (int p = 0; p < probes; p++) { hv[p] = new Complex[half + 1]; hi[p] = new Complex[half + 1]; }
+        var v = new Complex[probes];
+        var i = new Complex[probes];
+        for (int k = 0; k <= half; k++)
+        {
+            var s = new Complex(sigma, 2 * Math.PI * k / (n * dt));
+            FrequencyDomainSolver.Transfer(circuit, s, v, i);
+            for (int p = 0; p < probes; p++) { hv[p][k] = v[p]; hi[p][k] = i[p]; }
+        }
+
+        var volts = new double[probes][];
+        var amps = new double[probes][];
+        var work = new Complex[n];
+        for (int p = 0; p < probes; p++)
+        {
+            volts[p] = Invert(spectrum, hv[p], work, times);
+            amps[p] = Invert(spectrum, hi[p], work, times);
+        }
+        return (volts, amps);
+    }
+
+    double[] Invert(Complex[] input, Complex[] h, Complex[] work, double[] times)
+    {
+        int n = Points, half = n / 2;
+        for (int k = 0; k <= half; k++) work[k] = h[k] * input[k];
+        for (int k = 1; k < half; k++) work[n - k] = Complex.Conjugate(h[k]) * input[n - k];
+        Fourier.Inverse(work, FourierOptions.Matlab);
+        var result = new double[times.Length];
+        for (int r = 0; r < times.Length; r++)
+        {
+            double x = times[r] / Step;
+            int k = Math.Min((int)Math.Floor(x), n - 2);
+            double f = x - k;
+            double y0 = work[k].Real * Math.Exp(Damping * k * Step);
+            double y1 = work[k + 1].Real * Math.Exp(Damping * (k + 1) * Step);
+            result[r] = y0 + f * (y1 - y0);
+        }
+        return result;
+    }
+
+    static IEnumerable<Segment> AllSegments(IReadOnlyList<LineElement> line) =>
+        line.SelectMany(e => e switch
+        {
+            Segment s => [s],
+            Branch b => AllSegments(b.Line),
+            _ => Enumerable.Empty<Segment>(),
+        });
+}
