@@ -64,7 +64,7 @@ public static class FrequencyDomainSolver
             throw new InputException("time-response instants must be finite and 0 s or later");
         var circuit = CircuitBuilder.Build(scenario, probes);
         var dc = DcOperatingPoint(scenario, circuit);
-        var transform = TransientTransform.For(scenario, times.DefaultIfEmpty(0).Max());
+        var transform = TransientTransform.For(scenario, times);
         var (volts, amps) = transform.Run(scenario.Source, circuit, times);
         var traces = new ProbeResponse[probes.Count];
         for (int p = 0; p < traces.Length; p++)

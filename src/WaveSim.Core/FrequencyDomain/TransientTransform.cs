@@ -16,9 +16,10 @@ namespace WaveSim.Core.FrequencyDomain;
 /// the network does after W (lossless lines, whose poles sit on the jω axis, ring for ever and are handled the same way).
 /// Here W = <see cref="WindowFactor"/> × the last instant asked for and σ = ln(1/<see cref="Aliasing"/>)/W, so the
 /// wrap-around is 1e-6 of the response, and the rounding error is amplified at most by e^(σ·W/4) = 1e6^(1/4) ≈ 32.
-/// The sample step is a twentieth of the driver's shortest feature (its 10-90 % edge, width or period), so the edge is
-/// band-limited well inside the transform's band; an ideal edge (no rise time) is not band-limited and shows ringing
-/// (the Gibbs effect) of the size of one sample step.
+/// The sample step is at most a twentieth of the driver's shortest feature (its 10-90 % edge, width or period), so the edge
+/// is band-limited well inside the transform's band; an ideal edge (no rise time) is not band-limited and shows ringing
+/// (the Gibbs effect) of the size of one sample step. When the instants asked for are evenly spaced from 0 the step divides
+/// their spacing, so they are read straight off the transform samples.
 /// </remarks>
 internal sealed class TransientTransform
 {
@@ -35,17 +36,33 @@ internal sealed class TransientTransform
     public required int Points { get; init; }
     public required double Damping { get; init; }
 
-    public static TransientTransform For(Scenario scenario, double lastTime)
+    public static TransientTransform For(Scenario scenario, double[] times)
     {
+        double lastTime = times.DefaultIfEmpty(0).Max();
         double feature = scenario.Source.ShortestFeature;
         if (!double.IsFinite(feature) || feature <= 0)
             feature = AllSegments(scenario.Line).Min(s => s.Delay);
-        double window = WindowFactor * Math.Max(lastTime, 1e-15);
-        double wanted = Math.Min(feature / SamplesPerFeature, lastTime / 256);
-        double points = Math.Ceiling(window / Math.Max(wanted, window / MaxPoints));
+        double span = Math.Max(lastTime, 1e-15);
+        double wanted = Math.Min(feature / SamplesPerFeature, span / 256);
+        // Instants on a uniform grid from 0 (the leapfrog's outputs) are made transform samples, so no interpolation
+        // error enters at the corners of the driver's edges; other instants are interpolated linearly.
+        if (UniformStep(times) is { } h) wanted = h / Math.Ceiling(h / wanted * (1 - 1e-9));
+        double dt = Math.Max(wanted, WindowFactor * span / MaxPoints);
         int n = MinPoints;
-        while (n < points && n < MaxPoints) n <<= 1;
-        return new TransientTransform { Step = window / n, Points = n, Damping = Math.Log(1 / Aliasing) / window };
+        while (n * dt < WindowFactor * span * (1 - 1e-12) && n < MaxPoints) n <<= 1;
+        double window = n * dt;
+        return new TransientTransform { Step = dt, Points = n, Damping = Math.Log(1 / Aliasing) / window };
+    }
+
+    /// <summary>The spacing h when times[k] = k·h from 0 (the last instant may fall short, as a run's duration does); else null.</summary>
+    static double? UniformStep(double[] times)
+    {
+        if (times.Length < 3 || times[0] != 0) return null;
+        double h = times[1];
+        if (!(h > 0)) return null;
+        for (int k = 2; k < times.Length - 1; k++)
+            if (Math.Abs(times[k] - k * h) > 1e-9 * h) return null;
+        return h;
     }
 
     /// <summary>Each probe's change from the DC operating point at <paramref name="times"/>: volts then amps, [probe][instant].</summary>
@@ -92,6 +109,8 @@ internal sealed class TransientTransform
         for (int r = 0; r < times.Length; r++)
         {
             double x = times[r] / Step;
+            double nearest = Math.Round(x);
+            if (Math.Abs(x - nearest) < 1e-6) x = nearest;
             int k = Math.Min((int)Math.Floor(x), n - 2);
             double f = x - k;
             double y0 = work[k].Real * Math.Exp(Damping * k * Step);
