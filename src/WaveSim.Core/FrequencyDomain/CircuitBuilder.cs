@@ -62,7 +62,7 @@ internal sealed class CircuitBuilder
                     double at = pos;
                     foreach (double cut in inside.Append(end))
                     {
-                        double piece = cut == end ? end - at : cut - at;
+                        double piece = cut - at;
                         int next = _junctions++;
                         int k = _segments.Count;
                         _segments.Add(new SegmentEdge(node, next, s with { Length = piece }));

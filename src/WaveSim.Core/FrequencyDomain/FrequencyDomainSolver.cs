@@ -22,7 +22,7 @@ public static class FrequencyDomainSolver
 
     internal static FrequencyPoint At(Circuit c, Complex s, double frequency)
     {
-        var x = NodalSolver.Solve(c, s, 1, dc: false)
+        var x = new NodalSolver(c).Solve(s, 1, dc: false)
             ?? throw new NumericalException($"the network has no solution at {Units.Quantity.Format(frequency, "Hz")} (an ideal loop with no impedance?)");
         var v = new Complex[c.Probes.Count];
         var i = new Complex[c.Probes.Count];
@@ -37,7 +37,7 @@ public static class FrequencyDomainSolver
 
     internal static DcLevels DcOperatingPoint(Scenario scenario, Circuit c)
     {
-        var x = NodalSolver.Solve(c, Complex.Zero, scenario.Source.InitialLevel, dc: true);
+        var x = new NodalSolver(c).Solve(Complex.Zero, scenario.Source.InitialLevel, dc: true);
         // An ideal loop (0 ohm driver, lossless line, short) is singular or, after rounding, gives absurd currents.
         if (x is null || x.Skip(c.Junctions).Any(v => v.Magnitude > 1e6))
             throw new InputException("the driver's initial level drives an unlimited DC current through a loop with no resistance (0 ohm driver, lossless line, shorted load?): give the driver or the load a resistance");
@@ -83,9 +83,9 @@ public static class FrequencyDomainSolver
     }
 
     /// <summary>Every probe's voltage and current transfer at s, written into the given slots (for the transform's loop).</summary>
-    internal static void Transfer(Circuit c, Complex s, Complex[] volts, Complex[] amps)
+    internal static void Transfer(NodalSolver solver, Circuit c, Complex s, Complex[] volts, Complex[] amps)
     {
-        var x = NodalSolver.Solve(c, s, 1, dc: false)
+        var x = solver.Solve(s, 1, dc: false)
             ?? throw new NumericalException($"the network has no solution at s = {s} (an ideal loop with no impedance?)");
         for (int p = 0; p < c.Probes.Count; p++) (volts[p], amps[p]) = Read(c, c.Probes[p], x);
     }

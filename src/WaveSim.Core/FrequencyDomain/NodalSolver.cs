@@ -10,28 +10,33 @@ namespace WaveSim.Core.FrequencyDomain;
 /// is lossy and long (Re γl above <see cref="ChainLimit"/>) cosh and sinh grow like e^(Re γl), so it enters instead through its
 /// admittance parameters coth(γl)/Zc and csch(γl)/Zc, computed from e^(−γl), which stay bounded however long the line.
 /// </summary>
-internal static class NodalSolver
+internal sealed class NodalSolver(Circuit c)
 {
     /// <summary>Re γl above which the admittance form is used; cosh(5) ≈ 74 keeps the chain form well conditioned below it.</summary>
     const double ChainLimit = 5;
 
-    /// <summary>Leak to ground at every junction in the DC solve, S, so that a section cut off by series capacitors rests at 0 V.</summary>
+    /// <summary>Leak to ground at every junction at s = 0, S, so that a section cut off by series capacitors rests at 0 V.</summary>
     const double Gmin = 1e-15;
+
+    readonly Complex[,] _a = new Complex[c.Size, c.Size];
+    readonly Complex[] _b = new Complex[c.Size], _x = new Complex[c.Size];
 
     /// <summary>
     /// The unknown vector for the driver's open-circuit voltage <paramref name="drive"/>. With <paramref name="dc"/> the solve is the
     /// ω = 0 operating point (s must be 0) and load resistors return to their 'to' voltages; otherwise those are 0 (small signal).
-    /// Returns null when the system is singular.
+    /// Returns null when the system is singular. The array is reused by the next call.
     /// </summary>
-    public static Complex[]? Solve(Circuit c, Complex s, double drive, bool dc)
+    public Complex[]? Solve(Complex s, double drive, bool dc)
     {
-        int n = c.Size;
-        var a = new Complex[n, n];
-        var b = new Complex[n];
+        var a = _a;
+        var b = _b;
+        Array.Clear(a);
+        Array.Clear(b);
         int row = 0;
         // KCL at every junction: the currents leaving sum to zero.
+        bool zero = s == Complex.Zero;
         for (int j = 0; j < c.Junctions; j++, row++)
-            if (dc) a[j, j] = Gmin;
+            if (zero) a[j, j] = Gmin;
         int id = c.DriverCurrent;
         a[0, id] -= 1;
         a[row, 0] = 1; a[row, id] = c.DriverResistance; b[row] = drive; row++;
@@ -85,31 +90,35 @@ internal static class NodalSolver
                 a[row, i1] = 1; a[row, seg.Start] = -yCsch; a[row, seg.End] = yCoth; row++;
             }
         }
-        return DenseSolve(a, b);
+        return DenseSolve(a, b, _x) ? _x : null;
     }
 
-    /// <summary>Gaussian elimination with row equilibration and partial pivoting; null when singular or not finite.</summary>
-    static Complex[]? DenseSolve(Complex[,] a, Complex[] b)
+    /// <summary>|re| + |im|: a norm within √2 of the modulus, cheap enough for pivoting.</summary>
+    static double Norm1(Complex z) => Math.Abs(z.Real) + Math.Abs(z.Imaginary);
+
+    /// <summary>Gaussian elimination with row equilibration and partial pivoting into x; false when singular or not finite.</summary>
+    static bool DenseSolve(Complex[,] a, Complex[] b, Complex[] x)
     {
         int n = b.Length;
         for (int i = 0; i < n; i++)
         {
             double m = 0;
-            for (int j = 0; j < n; j++) m = Math.Max(m, a[i, j].Magnitude);
-            if (m == 0 || !double.IsFinite(m)) return null;
-            for (int j = 0; j < n; j++) a[i, j] /= m;
-            b[i] /= m;
+            for (int j = 0; j < n; j++) m = Math.Max(m, Norm1(a[i, j]));
+            if (m == 0 || !double.IsFinite(m)) return false;
+            double inv = 1 / m;
+            for (int j = 0; j < n; j++) a[i, j] *= inv;
+            b[i] *= inv;
         }
         for (int k = 0; k < n; k++)
         {
             int p = k;
-            double best = a[k, k].Magnitude;
+            double best = Norm1(a[k, k]);
             for (int i = k + 1; i < n; i++)
             {
-                double v = a[i, k].Magnitude;
+                double v = Norm1(a[i, k]);
                 if (v > best) { best = v; p = i; }
             }
-            if (best < 1e-300) return null;
+            if (best < 1e-300) return false;
             if (p != k)
             {
                 for (int j = k; j < n; j++) (a[k, j], a[p, j]) = (a[p, j], a[k, j]);
@@ -124,14 +133,13 @@ internal static class NodalSolver
                 b[i] -= f * b[k];
             }
         }
-        var x = new Complex[n];
         for (int i = n - 1; i >= 0; i--)
         {
             Complex sum = b[i];
             for (int j = i + 1; j < n; j++) sum -= a[i, j] * x[j];
             x[i] = sum / a[i, i];
-            if (!double.IsFinite(x[i].Real) || !double.IsFinite(x[i].Imaginary)) return null;
+            if (!double.IsFinite(x[i].Real) || !double.IsFinite(x[i].Imaginary)) return false;
         }
-        return x;
+        return true;
     }
 }

@@ -15,7 +15,9 @@ namespace WaveSim.Core.FrequencyDomain;
 /// y(t)e^(−σt) + y(t+W)e^(−σ(t+W)) + …, so after undoing the damping the wrap-around error is about e^(−σW)·|y|, whatever
 /// the network does after W (lossless lines, whose poles sit on the jω axis, ring for ever and are handled the same way).
 /// Here W = <see cref="WindowFactor"/> × the last instant asked for and σ = ln(1/<see cref="Aliasing"/>)/W, so the
-/// wrap-around is 1e-6 of the response, and the rounding error is amplified at most by e^(σ·W/4) = 1e6^(1/4) ≈ 32.
+/// wrap-around is 1e-6 of the response; the rounding error of the damped samples is amplified by at most
+/// e^(σ·W/2) = 1e6^(1/2) = 1e3, which leaves it near 1e-13 (errors local in time, such as at the corners of the driver's
+/// edges, are damped and restored together and keep their size).
 /// The sample step is at most a twentieth of the driver's shortest feature (its 10-90 % edge, width or period), so the edge
 /// is band-limited well inside the transform's band; an ideal edge (no rise time) is not band-limited and shows ringing
 /// (the Gibbs effect) of the size of one sample step. When the instants asked for are evenly spaced from 0 the step divides
@@ -24,7 +26,7 @@ namespace WaveSim.Core.FrequencyDomain;
 internal sealed class TransientTransform
 {
     /// <summary>The transform window over the last instant asked for.</summary>
-    public const double WindowFactor = 4;
+    public const double WindowFactor = 2;
     /// <summary>Wrap-around allowed, as a fraction of the response.</summary>
     public const double Aliasing = 1e-6;
     /// <summary>Samples per shortest feature of the driver's waveform.</summary>
@@ -81,10 +83,11 @@ internal sealed class TransientTransform
         for (int p = 0; p < probes; p++) { hv[p] = new Complex[half + 1]; hi[p] = new Complex[half + 1]; }
         var v = new Complex[probes];
         var i = new Complex[probes];
+        var solver = new NodalSolver(circuit);
         for (int k = 0; k <= half; k++)
         {
             var s = new Complex(sigma, 2 * Math.PI * k / (n * dt));
-            FrequencyDomainSolver.Transfer(circuit, s, v, i);
+            FrequencyDomainSolver.Transfer(solver, circuit, s, v, i);
             for (int p = 0; p < probes; p++) { hv[p][k] = v[p]; hi[p][k] = i[p]; }
         }
 
@@ -92,20 +95,24 @@ internal sealed class TransientTransform
         var amps = new double[probes][];
         var work = new Complex[n];
         for (int p = 0; p < probes; p++)
-        {
-            volts[p] = Invert(spectrum, hv[p], work, times);
-            amps[p] = Invert(spectrum, hi[p], work, times);
-        }
+            (volts[p], amps[p]) = Invert(spectrum, hv[p], hi[p], work, times);
         return (volts, amps);
     }
 
-    double[] Invert(Complex[] input, Complex[] h, Complex[] work, double[] times)
+    /// <summary>
+    /// Both real responses from one inverse FFT: with A and B the spectra of real signals a and b, the inverse of A + jB is a + jb.
+    /// </summary>
+    (double[] A, double[] B) Invert(Complex[] input, Complex[] ha, Complex[] hb, Complex[] work, double[] times)
     {
         int n = Points, half = n / 2;
-        for (int k = 0; k <= half; k++) work[k] = h[k] * input[k];
-        for (int k = 1; k < half; k++) work[n - k] = Complex.Conjugate(h[k]) * input[n - k];
+        var j = Complex.ImaginaryOne;
+        for (int k = 0; k <= half; k++) work[k] = (ha[k] + j * hb[k]) * input[k];
+        for (int k = 1; k < half; k++) work[n - k] = (Complex.Conjugate(ha[k]) + j * Complex.Conjugate(hb[k])) * input[n - k];
+        // The Nyquist bin pairs with itself: keep only its real-signal part (Re of each transfer) so nothing leaks between a and b.
+        work[half] = (ha[half].Real + j * hb[half].Real) * input[half];
         Fourier.Inverse(work, FourierOptions.Matlab);
-        var result = new double[times.Length];
+        var a = new double[times.Length];
+        var b = new double[times.Length];
         for (int r = 0; r < times.Length; r++)
         {
             double x = times[r] / Step;
@@ -113,11 +120,11 @@ internal sealed class TransientTransform
             if (Math.Abs(x - nearest) < 1e-6) x = nearest;
             int k = Math.Min((int)Math.Floor(x), n - 2);
             double f = x - k;
-            double y0 = work[k].Real * Math.Exp(Damping * k * Step);
-            double y1 = work[k + 1].Real * Math.Exp(Damping * (k + 1) * Step);
-            result[r] = y0 + f * (y1 - y0);
+            double g0 = Math.Exp(Damping * k * Step), g1 = Math.Exp(Damping * (k + 1) * Step);
+            a[r] = work[k].Real * g0 + f * (work[k + 1].Real * g1 - work[k].Real * g0);
+            b[r] = work[k].Imaginary * g0 + f * (work[k + 1].Imaginary * g1 - work[k].Imaginary * g0);
         }
-        return result;
+        return (a, b);
     }
 
     static IEnumerable<Segment> AllSegments(IReadOnlyList<LineElement> line) =>

@@ -38,6 +38,33 @@ simulation: { duration: 20 ns }
         Assert.True((lin.Zin[1] - new Complex(25, 0)).Magnitude < 1e-9);
     }
 
+    [Fact]
+    public void Zero_hertz_is_the_dc_limit()
+    {
+        // Ohm's law: at 0 Hz a shorted line of 20 ohm/m over 0.5 m is 10 ohm; a section behind a series capacitor is cut off
+        // (capacitor open) and must not make the solve singular.
+        var shorted = TestScenarios.Parse(@"
+source: { waveform: step, high: 1 V, rise: 100 ps, resistance: 50 ohm }
+line:
+  - segment: { length: 0.5 m, z0: 50 ohm, delay: 5 ns/m, r: 20 ohm/m }
+load: short
+simulation: { duration: 5 ns }
+");
+        Assert.True((FrequencyDomainSolver.At(shorted, 0).Zin - new Complex(10, 0)).Magnitude < 1e-9);
+        var blocked = TestScenarios.Parse(@"
+source: { waveform: step, high: 1 V, rise: 100 ps, resistance: 50 ohm }
+line:
+  - segment: { length: 0.5 m, z0: 50 ohm, delay: 5 ns/m }
+  - series: { c: 1 nF }
+  - segment: { length: 0.1 m, z0: 50 ohm, delay: 5 ns/m }
+load: open
+simulation: { duration: 5 ns }
+");
+        var pt = FrequencyDomainSolver.At(blocked, 0);
+        Assert.Equal(0, pt.Load.Magnitude, 12);
+        Assert.Equal(1, pt.Volts[0].Real, 12); // no current flows, so the driver's resistance drops nothing
+    }
+
     [Theory]
     [InlineData(0, 1e9, 10, true)]
     [InlineData(1e9, 1e6, 10, false)]
