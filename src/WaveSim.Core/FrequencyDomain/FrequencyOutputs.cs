@@ -1,0 +1,76 @@
+using System.Globalization;
+using CsvHelper;
+using WaveSim.Core.Rendering;
+
+namespace WaveSim.Core.FrequencyDomain;
+
+/// <summary>Writes a <see cref="FrequencyResponse"/> as frequency.csv and frequency.png, each whole or not at all.</summary>
+public static class FrequencyOutputs
+{
+    /// <summary>The table's file name.</summary>
+    public const string CsvName = "frequency.csv";
+    /// <summary>The chart's file name.</summary>
+    public const string PngName = "frequency.png";
+
+    /// <summary>Writes <see cref="CsvName"/> and <see cref="PngName"/> into <paramref name="dir"/> (created if missing).</summary>
+    /// <param name="dir">Output folder.</param>
+    /// <param name="response">The sweep.</param>
+    /// <param name="title">Chart title.</param>
+    public static void Write(string dir, FrequencyResponse response, string title)
+    {
+        Directory.CreateDirectory(dir);
+        WriteCsv(Path.Combine(dir, CsvName), response);
+        WriteAtomic(Path.Combine(dir, PngName), path => File.WriteAllBytes(path, LineChart.RenderPng(Chart(response, title), 1200, 800)));
+    }
+
+    /// <summary>
+    /// Writes the table: f_Hz, zin_re_ohm, zin_im_ohm, zin_mag_ohm, then for each probe &lt;probe&gt;_gain_dB and &lt;probe&gt;_phase_deg
+    /// (invariant culture; a field is left empty where the value is not finite, e.g. the gain of a shorted node).
+    /// </summary>
+    public static void WriteCsv(string path, FrequencyResponse r) => WriteAtomic(path, temp =>
+    {
+        using var writer = new StreamWriter(temp);
+        using var csv = new CsvWriter(writer, CultureInfo.InvariantCulture);
+        foreach (string h in new[] { "f_Hz", "zin_re_ohm", "zin_im_ohm", "zin_mag_ohm" }) csv.WriteField(h);
+        foreach (var p in r.Probes) { csv.WriteField(p.Name + "_gain_dB"); csv.WriteField(p.Name + "_phase_deg"); }
+        csv.NextRecord();
+        void Field(double x) { if (double.IsFinite(x)) csv.WriteField(x); else csv.WriteField(""); }
+        for (int k = 0; k < r.F.Length; k++)
+        {
+            Field(r.F[k]); Field(r.Zin[k].Real); Field(r.Zin[k].Imaginary); Field(r.Zin[k].Magnitude);
+            foreach (var p in r.Probes) { Field(p.GainDb(k)); Field(p.PhaseDeg(k)); }
+            csv.NextRecord();
+        }
+    });
+
+    /// <summary>
+    /// The chart: probe gains (dB) above |Zin| (ohm). The chart library's X axis is linear, so a logarithmic sweep is drawn
+    /// against log10(f / 1 Hz), and the axis title says so.
+    /// </summary>
+    public static ChartSpec Chart(FrequencyResponse r, string title)
+    {
+        double[] x = r.Logarithmic ? r.F.Select(Math.Log10).ToArray() : r.F;
+        var gains = r.Probes.Select(p => new Series(p.Name, x, Enumerable.Range(0, x.Length).Select(p.GainDb).ToArray())).ToArray();
+        var zin = new Series("|Zin|", x, r.Zin.Select(z => z.Magnitude).ToArray());
+        var panels = new List<ChartPanel>();
+        if (gains.Length > 0) panels.Add(new ChartPanel("Gain", "dB", gains));
+        panels.Add(new ChartPanel("Input impedance", "\u03a9", [zin]));
+        return r.Logarithmic
+            ? new ChartSpec(title, "Frequency, log10(f / 1 Hz)", "", panels)
+            : new ChartSpec(title, "Frequency", "Hz", panels);
+    }
+
+    static void WriteAtomic(string path, Action<string> write)
+    {
+        string temp = path + ".tmp-" + Environment.ProcessId;
+        try
+        {
+            write(temp);
+            File.Move(temp, path, overwrite: true);
+        }
+        finally
+        {
+            if (File.Exists(temp)) File.Delete(temp);
+        }
+    }
+}
