@@ -2,6 +2,7 @@ using System.CommandLine;
 using System.Globalization;
 using WaveSim.Core;
 using WaveSim.Core.Analysis;
+using WaveSim.Core.FrequencyDomain;
 using WaveSim.Core.Output;
 using WaveSim.Core.Rendering;
 using WaveSim.Core.Solver;
@@ -24,8 +25,9 @@ public static class RunCommand
         var frames = new Option<int>("--frames") { Description = "Write N frames of the voltage along the line to frames/", DefaultValueFactory = _ => 0 };
         var frameSize = new Option<string>("--frame-size") { Description = "Frame size WIDTHxHEIGHT in pixels", DefaultValueFactory = _ => "1280x720" };
         var settle = new Option<string>("--settle-band") { Description = "Settling band as a fraction or percentage of the swing", DefaultValueFactory = _ => "5 %" };
+        var fdCheck = new Option<bool>("--check-frequency-domain") { Description = "Cross-check against the frequency-domain solver; also write frequency.csv and frequency.png" };
         var cmd = new Command("run", "Simulate a scenario and write probes.csv, summary.json and pictures")
-        { scenario, outDir, json, force, svg, currents, frames, frameSize, settle };
+        { scenario, outDir, json, force, svg, currents, frames, frameSize, settle, fdCheck };
         cmd.SetAction((pr, ct) => Task.FromResult(CommandGuard.Run(pr.InvocationConfiguration.Error, () =>
         {
             string path = pr.GetValue(scenario)!;
@@ -40,6 +42,16 @@ public static class RunCommand
                 result = Simulate.Run(s, options with { Progress = bar }, ct);
             var figures = RunSummary.Figures(result, band);
             var summary = RunSummary.Json(result, figures);
+            IReadOnlyList<ProbeDifference>? fd = null;
+            FrequencyResponse? response = null;
+            if (pr.GetValue(fdCheck))
+            {
+                fd = FrequencyDomainCheck.Compare(result);
+                summary["frequency_domain_check"] = new System.Text.Json.Nodes.JsonObject(fd.Select(d =>
+                    KeyValuePair.Create(d.Probe, (System.Text.Json.Nodes.JsonNode?)new System.Text.Json.Nodes.JsonObject { ["max_diff_V"] = d.MaxDiffV, ["max_diff_pct"] = d.MaxDiffPct })));
+                var (f0, f1) = FrequencyBand(s);
+                response = FrequencySweep.Compute(s, f0, f1, 200, log: true);
+            }
             string dir = CommonOptions.OutputDir(pr.GetValue(outDir), path);
             using (var output = new OutputFolder(dir))
             {
@@ -56,14 +68,30 @@ public static class RunCommand
                     using var bar = new ProgressBar(pr.InvocationConfiguration.Error, "frames");
                     FrameSequence.WriteAll(framesDir, RunPictures.Layout(result), RunPictures.Frames(result, nFrames), lo, hi, fw, fh, ct);
                 }
+                if (response is not null) FrequencyOutputs.Write(Path.GetDirectoryName(output.File("frequency.csv"))!, response, s.Title);
                 output.Commit();
             }
             var o = pr.InvocationConfiguration.Output;
             if (pr.GetValue(json)) o.WriteLine(RunSummary.Text(summary));
-            else PrintSummary(o, result, figures, dir);
+            else
+            {
+                PrintSummary(o, result, figures, dir);
+                if (fd is not null)
+                    foreach (var d in fd)
+                        o.WriteLine($"  frequency-domain check {d.Probe}: largest difference {Quantity.Format(d.MaxDiffV, "V", 3)} ({d.MaxDiffPct:F3} % of the swing)");
+            }
             return ExitCodes.Ok;
         })));
         return cmd;
+    }
+
+    /// <summary>The band of the frequency plots: from 1/duration up to 3/(shortest source feature), at most 100 GHz.</summary>
+    public static (double Start, double Stop) FrequencyBand(WaveSim.Core.Model.Scenario s)
+    {
+        double f0 = 1 / s.Simulation.Duration;
+        double feature = s.Source.ShortestFeature;
+        double f1 = double.IsFinite(feature) ? 3 / feature : 1 / Simulate.Plan(s).Dt / 4;
+        return (f0, Math.Clamp(f1, f0 * 10, 100e9));
     }
 
     /// <summary>Reads "1280x720".</summary>

@@ -37,6 +37,21 @@ simulation: { duration: 3 ns, output_step: 10 ps }
     }
 
     [Fact]
+    public void Frequency_domain_check_agrees_within_one_percent_and_writes_the_frequency_outputs()
+    {
+        // Independent cross-check: frequency-domain ABCD cascade vs time-domain leapfrog (two methods, one scenario).
+        string dir = CliRunner.TempDir();
+        string outDir = Path.Combine(dir, "out");
+        var (code, _, err) = CliRunner.Run("run", CliRunner.Write(dir, "s.yaml", Good.Replace("{ r: 50 ohm }", "{ r: 75 ohm, c: 1 pF }")), "--out", outDir, "--check-frequency-domain");
+        Assert.True(code == 0, err);
+        var summary = JsonNode.Parse(File.ReadAllText(Path.Combine(outDir, "summary.json")))!;
+        foreach (var p in new[] { "near", "far" })
+            Assert.True(summary["frequency_domain_check"]![p]!["max_diff_pct"]!.GetValue<double>() < 1.0, p);
+        Assert.True(File.Exists(Path.Combine(outDir, "frequency.csv")));
+        Assert.True(File.Exists(Path.Combine(outDir, "frequency.png")));
+    }
+
+    [Fact]
     public void Check_prints_cells_and_Courant_numbers_without_running()
     {
         string dir = CliRunner.TempDir();
