@@ -20,6 +20,9 @@ public static class Reflectometer
     /// <summary>Open-circuit step of the simulated instrument, V: 1 V incident into a matched line.</summary>
     public const double OpenCircuitVolts = 2.0;
 
+    /// <summary>Rise times of flat baseline before the simulated instrument's edge starts: 10.</summary>
+    public const double LeadRises = 10;
+
     /// <summary>Name of the port probe of the simulated instrument.</summary>
     public const string PortProbe = "port";
 
@@ -27,13 +30,13 @@ public static class Reflectometer
     /// <param name="scenario">The device under test.</param>
     /// <param name="riseS">10-90 % rise time of the step, s. Must be positive.</param>
     /// <param name="sourceOhms">Instrument resistance, Ω. Must be positive.</param>
-    /// <returns>The instrument scenario: the edge starts at 2 rise times; the run lasts past one round trip of every segment.</returns>
+    /// <returns>The instrument scenario: the edge starts after <see cref="LeadRises"/> rise times; the run lasts past one round trip of every segment.</returns>
     public static Scenario Instrument(Scenario scenario, double riseS, double sourceOhms)
     {
         ArgumentNullException.ThrowIfNull(scenario);
         RequirePositive(riseS, "rise time", "s");
         RequirePositive(sourceOhms, "instrument resistance", "ohm");
-        double start = 2 * riseS;
+        double start = LeadRises * riseS;
         double roundTrip = 2 * GridPlan.AllSegments(scenario.Line, "line").Sum(s => s.Seg.Delay);
         double duration = start + 1.25 * riseS + 1.1 * roundTrip + 20 * riseS;
         return scenario with
@@ -84,13 +87,22 @@ public static class Reflectometer
         int head = Math.Max(3, n / 50);
         if (n < 2 * head + 2)
             throw new InputException($"{Path.GetFileName(capture.Source)}: {n} samples are too few for a reflectometer trace (need the baseline, the edge and what follows)");
-        double baseline = 0, sq = 0;
-        for (int i = 0; i < head; i++) baseline += v[i] / head;
-        for (int i = 0; i < head; i++) sq += (v[i] - baseline) * (v[i] - baseline) / head;
-        double sigma = Math.Sqrt(sq);
-        double range = v.Max(x => Math.Abs(x - baseline));
-        double threshold = Math.Max(8 * sigma, 0.02 * range);
-        int first = Array.FindIndex(v, x => Math.Abs(x - baseline) > threshold);
+        double baseline = 0, threshold = 0;
+        int first = -1;
+        for (int attempt = 0; attempt < 4; attempt++)
+        {
+            // The baseline is the mean of the first samples; if the edge starts among them, take fewer.
+            baseline = 0;
+            double sq = 0;
+            for (int i = 0; i < head; i++) baseline += v[i] / head;
+            for (int i = 0; i < head; i++) sq += (v[i] - baseline) * (v[i] - baseline) / head;
+            double range = v.Max(x => Math.Abs(x - baseline));
+            threshold = Math.Max(8 * Math.Sqrt(sq), 0.02 * range);
+            first = Array.FindIndex(v, x => Math.Abs(x - baseline) > threshold);
+            if (first > head || head <= 3)
+                break;
+            head = Math.Max(3, first / 2);
+        }
         if (first <= 0 || !(v[first] > baseline))
             throw new InputException($"{Path.GetFileName(capture.Source)}: no rising incident edge after a flat baseline; a reflectometer trace starts before the edge");
         if (incidentVolts is { } given && !(given > 0 && double.IsFinite(given)))
@@ -100,7 +112,7 @@ public static class Reflectometer
         for (int pass = 0; pass < 6; pass++)
         {
             if (incidentVolts is null)
-                inc = Plateau(t, v, t[first] + 1.5 * ramp, t[first] + 2.5 * ramp) - baseline;
+                inc = Plateau(t, v, t[first] + 1.5 * ramp, t[first] + 3 * ramp) - baseline;
             if (!(inc > threshold))
                 throw new InputException($"{Path.GetFileName(capture.Source)}: the incident step is lost in the noise; give --incident");
             double t10 = Crossing(t, v, baseline + 0.1 * inc), t90 = Crossing(t, v, baseline + 0.9 * inc);

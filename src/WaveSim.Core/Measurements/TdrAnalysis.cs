@@ -22,7 +22,11 @@ namespace WaveSim.Core.Measurements;
 /// <para>Segments: <see cref="ImpedanceSegments.Group"/> with a tolerance of 2.5 % of Z0ref; then layers inside lumped
 /// excursions and pieces shorter than v·rise (the edge's spatial extent, out and back) are given to their neighbours, the
 /// neighbours joined when they agree, and each segment's impedance is the median of its layers (robust to the few
-/// transition layers an edge leaves at each end).</para>
+/// transition layers an edge leaves at each end). A stretch shorter than the lumped window between two stretches that
+/// agree is absorbed into them: it is either a lumped element (reported as such) or ringing left by one.</para>
+/// <para>Delays of lumped elements: a step passing a shunt C or series L is delayed by about its τ each way, which layer
+/// peeling cannot undo, so everything beyond reads v·τ too far; the reported positions of later segments and elements are
+/// moved back by that much (the per-layer arrays keep the plain distance v·t/2).</para>
 /// </remarks>
 public static class TdrAnalysis
 {
@@ -98,7 +102,8 @@ public static class TdrAnalysis
         var excursions = LumpedDiscontinuities.Find(rho[..stop], dt, z0, velocityMps, threshold, maxWidth);
         var lumped = excursions.Select(e => Lumped(e, rho, dt, z0, velocityMps)).ToList();
 
-        var segments = Segments(layers, stop, excursions, dt, velocityMps, trace.RiseS, SegmentTolerance * z0);
+        var segments = Segments(layers, stop, excursions, dt, velocityMps, trace.RiseS, SegmentTolerance * z0, maxWidth);
+        (segments, lumped) = UndoLumpedDelays(segments, lumped, velocityMps);
         return new TdrResult(z0, velocityMps, dt, trace.IncidentVolts, trace.RiseS, time, distance, port, rho, naive, layers,
             segments, lumped, end, endM, warnings);
     }
@@ -172,11 +177,25 @@ public static class TdrAnalysis
         double zLocal = StepReflectometry.ImpedanceOf(baseline, z0);
         double tau = e.Kind == LumpedKind.ShuntCapacitance ? zLocal * e.Value / 2 : e.Value / (2 * zLocal);
         double at = Math.Max(0, velocity * (centroid - tau) / 2);
-        return new TdrLumped(e.Kind, at, e.Value, e.AreaS);
+        return new TdrLumped(e.Kind, at, e.Value, e.AreaS, tau);
+    }
+
+    /// <summary>
+    /// Moves everything beyond each lumped element back by v·τ: the element delays the step by about τ on the way out and
+    /// again on the way back, which would otherwise read as v·τ of extra line.
+    /// </summary>
+    static (IReadOnlyList<ImpedanceSegment>, List<TdrLumped>) UndoLumpedDelays(IReadOnlyList<ImpedanceSegment> segments,
+        List<TdrLumped> lumped, double velocity)
+    {
+        var ordered = lumped.OrderBy(l => l.AtM).ToList();
+        double Shift(double x) => ordered.Where(l => l.AtM < x - 1e-12).Sum(l => velocity * l.TauS);
+        var movedSegments = segments.Select(s => new ImpedanceSegment(s.StartM - Shift(s.StartM), s.EndM - Shift(s.EndM), s.Z0Ohm)).ToList();
+        var movedLumped = ordered.Select(l => l with { AtM = l.AtM - Shift(l.AtM) }).ToList();
+        return (movedSegments, movedLumped);
     }
 
     static IReadOnlyList<ImpedanceSegment> Segments(double[] ohms, int stop, IReadOnlyList<LumpedDiscontinuity> excursions,
-        double dt, double velocity, double rise, double tolerance)
+        double dt, double velocity, double rise, double tolerance, int lumpedLayers)
     {
         double[] z = ohms[..stop];
         // Layers inside a lumped excursion belong to the line around it: give them the level before it.
@@ -212,6 +231,22 @@ public static class TdrAnalysis
             MergeAgreeing(pieces, z, tolerance);
         }
         MergeAgreeing(pieces, z, tolerance);
+
+        // A short stretch between two of the same impedance is ringing (or a lumped element, found separately): absorb it.
+        for (int i = 1; i + 1 < pieces.Count;)
+        {
+            bool brief = pieces[i].End - pieces[i].Start < lumpedLayers;
+            if (brief && Math.Abs(Median(z, pieces[i - 1].Start, pieces[i - 1].End) - Median(z, pieces[i + 1].Start, pieces[i + 1].End)) <= tolerance)
+            {
+                int mid = (pieces[i].Start + pieces[i].End) / 2;
+                pieces[i - 1] = (pieces[i - 1].Start, mid);
+                pieces[i + 1] = (mid, pieces[i + 1].End);
+                pieces.RemoveAt(i);
+                MergeAgreeing(pieces, z, tolerance);
+                i = 1;
+            }
+            else i++;
+        }
         return pieces.Select(p => new ImpedanceSegment(p.Start * layerM, p.End * layerM, Median(z, p.Start, p.End))).ToList();
     }
 

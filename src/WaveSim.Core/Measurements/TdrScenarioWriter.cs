@@ -54,7 +54,7 @@ public static class TdrScenarioWriter
             _ => $"{{ r: {Num(result.Segments[^1].Z0Ohm)} ohm }}",
         };
         double window = result.TimeS[^1] + 2 * result.RiseS;
-        double delay = 2 * result.RiseS;
+        double delay = Reflectometer.LeadRises * result.RiseS;
         var sb = new StringBuilder();
         sb.Append("# Line found by wavesim tdr (layer peeling): segments of one impedance and lumped elements.\n");
         sb.Append("# Distances assume a velocity of ").Append(Quantity.Format(v, "m/s")).Append("; the source is the reflectometer.\n");
