@@ -77,12 +77,12 @@ public static class FitCommand
         foreach (var p in r.Parameters)
         {
             string unit = Symbol(p.Parameter.Unit);
-            string sigma = double.IsFinite(p.Uncertainty) ? Quantity.Format(p.Uncertainty, unit, 2) : "undetermined";
+            string sigma = double.IsFinite(p.Uncertainty) ? Quantity.Format(p.Uncertainty, unit, 3) : "undetermined";
             o.WriteLine($"  {p.Parameter.KeyPath.PadRight(width)} {Quantity.Format(p.Value, unit),12} ± {sigma,-12} (start {Quantity.Format(p.Parameter.Start, unit)})");
         }
         if (r.OffsetFitted)
         {
-            string sigma = double.IsFinite(r.OffsetUncertaintySeconds) ? Quantity.Format(r.OffsetUncertaintySeconds, "s", 2) : "undetermined";
+            string sigma = double.IsFinite(r.OffsetUncertaintySeconds) ? Quantity.Format(r.OffsetUncertaintySeconds, "s", 3) : "undetermined";
             o.WriteLine($"  {"capture time offset".PadRight(width)} {Quantity.Format(r.OffsetSeconds, "s"),12} ± {sigma}");
         }
         o.WriteLine($"RMS error {Quantity.Format(r.RmsV, "V", 3)} (start {Quantity.Format(r.StartRmsV, "V", 3)})");

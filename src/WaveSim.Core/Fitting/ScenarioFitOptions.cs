@@ -21,6 +21,13 @@ public sealed record ScenarioFitOptions
     /// <summary>Budget of simulations, including those for the Jacobians and the uncertainties. Default 200; at least 2n + 2.</summary>
     public int MaxSimulations { get; init; } = DefaultMaxSimulations;
 
+    /// <summary>
+    /// Relative reduction of the sum of squares below which the fit stops: 1e-6. Far below what the noise of a capture lets one
+    /// resolve (the sum of squares of m noisy samples scatters by about √(2/m) of itself), and it stops the fitter from spending
+    /// simulations on the grid's rounding.
+    /// </summary>
+    public double ReductionTolerance { get; init; } = 1e-6;
+
     /// <summary>Receives the fraction of the budget used, 0..1, after each simulation.</summary>
     public IProgress<double>? Progress { get; init; }
 
