@@ -13,6 +13,9 @@ public static class Program
         CheckCommand.Create(),
         VersionInfoCommand.Create(),
         XSectionCommand.Create(),
+        CompareCommand.Create(),
+        FitCommand.Create(),
+        TdrCommand.Create(),
     };
 
     /// <summary>Runs the command line and returns the exit code.</summary>

@@ -23,7 +23,8 @@ namespace WaveSim.Core.Measurements;
 public static class BoundedLeastSquares
 {
     static readonly double Sqrt2Eps = Math.Sqrt(2.220446049250313e-16);
-    const double ReductionTolerance = 1e-14;
+    /// <summary>Default relative reduction of the sum of squares below which a successful step counts as converged: 1e-14.</summary>
+    public const double DefaultReductionTolerance = 1e-14;
     const double StepTolerance = 1e-12;
 
     /// <summary>Minimises the sum of squares of <paramref name="residuals"/> within the bounds.</summary>
@@ -33,14 +34,19 @@ public static class BoundedLeastSquares
     /// <param name="upper">Upper bounds; double.PositiveInfinity for none. Each must exceed its lower bound.</param>
     /// <param name="maxEvaluations">Budget of residual evaluations. Must be at least 2n + 2.</param>
     /// <param name="ct">Checked before every evaluation.</param>
+    /// <param name="reductionTolerance">The fit has converged when a successful step lowers the sum of squares by no more than
+    /// this fraction of it. Default <see cref="DefaultReductionTolerance"/>; a noisy or slightly discontinuous residual (a
+    /// simulation on a grid) wants a looser one. Must be in [0, 1).</param>
     /// <returns>Best parameters, their standard deviations, the RMS residual and the evaluation count.</returns>
     /// <exception cref="InputException">Inconsistent sizes, bounds or start.</exception>
     /// <exception cref="NumericalException">The residuals at the start are not finite or change length.</exception>
     /// <exception cref="OperationCanceledException"><paramref name="ct"/> was cancelled.</exception>
     public static FitResult Fit(Func<double[], double[]> residuals, double[] start, double[] lower, double[] upper,
-        int maxEvaluations, CancellationToken ct = default)
+        int maxEvaluations, CancellationToken ct = default, double reductionTolerance = DefaultReductionTolerance)
     {
         ArgumentNullException.ThrowIfNull(residuals);
+        if (!(reductionTolerance >= 0 && reductionTolerance < 1))
+            throw new ArgumentOutOfRangeException(nameof(reductionTolerance), reductionTolerance, "Must be in [0, 1).");
         int n = start.Length;
         Validate(start, lower, upper, maxEvaluations);
         var transforms = new ParameterTransform[n];
@@ -121,7 +127,7 @@ public static class BoundedLeastSquares
                 double ssrNew = resNew.DotProduct(resNew);
                 if (double.IsFinite(ssrNew) && ssrNew < ssr)
                 {
-                    converged = ssr - ssrNew <= ReductionTolerance * ssr;
+                    converged = ssr - ssrNew <= reductionTolerance * ssr;
                     u = uNew;
                     res = resNew;
                     ssr = ssrNew;

@@ -1,0 +1,101 @@
+using System.CommandLine;
+using System.Globalization;
+using WaveSim.Core;
+using WaveSim.Core.Measurements;
+using WaveSim.Core.Output;
+using WaveSim.Core.Rendering;
+using WaveSim.Core.Solver;
+using WaveSim.Core.Units;
+
+namespace WaveSim.Cli.Commands;
+
+/// <summary>`wavesim compare SCENARIO --capture FILE --probe NAME`: simulate, align the capture, report the differences.</summary>
+public static class CompareCommand
+{
+    /// <summary>Creates the command.</summary>
+    public static Command Create()
+    {
+        var scenario = CommonOptions.Scenario();
+        var capture = new CaptureArguments(required: true);
+        var probe = new Option<string>("--probe") { Description = "The scenario probe the capture was taken at", Required = true, HelpName = "NAME" };
+        var align = AlignOption("edge", "edge", "xcorr", "none");
+        var outDir = new Option<string?>("--out", "-o") { Description = "Output folder (default: out/<scenario>-compare)" };
+        var json = CommonOptions.Json();
+        var force = CommonOptions.Force();
+        var cmd = new Command("compare", "Compare a simulated probe with a measured capture: RMS and peak difference, figure differences, overlay")
+        { scenario, probe, align, outDir, json, force };
+        capture.AddTo(cmd);
+        cmd.SetAction((pr, ct) => Task.FromResult(CommandGuard.Run(pr.InvocationConfiguration.Error, () =>
+        {
+            string path = pr.GetValue(scenario)!;
+            var s = CommonOptions.Load(path);
+            string probeName = pr.GetValue(probe)!;
+            CaptureComparison.RequireProbe(s, probeName);
+            Capture cap = capture.Read(pr)!;
+            CaptureArguments.Warn(cap, pr.InvocationConfiguration.Error);
+            CaptureComparisonResult result;
+            using (var bar = new ProgressBar(pr.InvocationConfiguration.Error, "simulating"))
+                result = CaptureComparison.Run(s, cap, probeName, ParseAlign(pr.GetValue(align)!),
+                    new SimulationOptions { Force = pr.GetValue(force), Progress = bar }, ct);
+
+            string dir = pr.GetValue(outDir) ?? Path.Combine("out", Path.GetFileNameWithoutExtension(path) + "-compare");
+            var summary = CompareOutputs.Json(result);
+            using (var output = new OutputFolder(dir))
+            {
+                File.WriteAllText(output.File("compare.json"), RunSummary.Text(summary));
+                CompareOutputs.WriteCsv(result, output.File("compare.csv"));
+                File.WriteAllBytes(output.File("compare.png"),
+                    LineChart.RenderPng(CompareOutputs.Chart(result, $"{s.Title}: {probeName} against {Path.GetFileName(cap.Source)}"), 1200, 800));
+                output.Commit();
+            }
+            var o = pr.InvocationConfiguration.Output;
+            if (pr.GetValue(json)) o.WriteLine(RunSummary.Text(summary));
+            else Print(o, result, dir);
+            return ExitCodes.Ok;
+        })));
+        return cmd;
+    }
+
+    /// <summary>--align with the given choices and default.</summary>
+    internal static Option<string> AlignOption(string defaultValue, params string[] choices)
+    {
+        var o = new Option<string>("--align")
+        {
+            Description = "Time alignment of the capture: edge (first 50 % crossings), xcorr (cross-correlation) or none",
+            DefaultValueFactory = _ => defaultValue,
+        };
+        o.AcceptOnlyFromAmong(choices);
+        return o;
+    }
+
+    /// <summary>Maps an --align choice to the library's mode.</summary>
+    internal static AlignMode ParseAlign(string text) => text switch
+    {
+        "none" => AlignMode.None,
+        "xcorr" => AlignMode.CrossCorrelation,
+        _ => AlignMode.Edge50,
+    };
+
+    static void Print(TextWriter o, CaptureComparisonResult r, string dir)
+    {
+        var c = r.Comparison;
+        o.WriteLine($"{r.Probe}: capture shifted by {Quantity.Format(c.OffsetSeconds, "s")}, {c.Time.Length} points compared");
+        o.WriteLine($"  RMS difference  {Quantity.Format(c.RmsV, "V", 3)} ({Pct(c.RmsPct)} of swing)");
+        o.WriteLine($"  peak difference {Quantity.Format(c.PeakV, "V", 3)} ({Pct(c.PeakPct)} of swing)");
+        o.WriteLine($"  {"figure",-20} {"simulated",12} {"captured",12} {"difference",12}");
+        foreach (var f in r.Figures)
+            o.WriteLine($"  {f.Name,-20} {Show(f.Name, f.Simulated),12} {Show(f.Name, f.Captured),12} {Show(f.Name, f.Difference),12}");
+        o.WriteLine($"wrote {Path.Combine(dir, "compare.json")}, compare.csv, compare.png");
+    }
+
+    static string Pct(double p) => double.IsFinite(p) ? p.ToString("F2", CultureInfo.InvariantCulture) + " %" : "-";
+
+    static string Show(string name, double? x)
+    {
+        if (x is not { } v) return "-";
+        if (name.EndsWith("_s", StringComparison.Ordinal)) return Quantity.Format(v, "s", 3);
+        if (name.EndsWith("_V", StringComparison.Ordinal)) return Quantity.Format(v, "V", 3);
+        if (name.EndsWith("_pct", StringComparison.Ordinal)) return v.ToString("F1", CultureInfo.InvariantCulture) + " %";
+        return v.ToString("G4", CultureInfo.InvariantCulture);
+    }
+}

@@ -1,0 +1,93 @@
+using System.CommandLine;
+using WaveSim.Core;
+using WaveSim.Core.Fitting;
+using WaveSim.Core.Measurements;
+using WaveSim.Core.Output;
+using WaveSim.Core.Rendering;
+using WaveSim.Core.Units;
+
+namespace WaveSim.Cli.Commands;
+
+/// <summary>`wavesim fit SCENARIO --capture FILE --probe NAME --free KEY[=MIN..MAX] ...`: least-squares values for chosen keys.</summary>
+public static class FitCommand
+{
+    /// <summary>Creates the command.</summary>
+    public static Command Create()
+    {
+        var scenario = CommonOptions.Scenario();
+        var capture = new CaptureArguments(required: true);
+        var probe = new Option<string>("--probe") { Description = "The scenario probe the capture was taken at", Required = true, HelpName = "NAME" };
+        var free = new Option<string[]>("--free")
+        {
+            Description = "A key path to fit, with optional bounds: line[0].segment.z0, load.c=0.5pF..5pF (repeat for each)",
+            Required = true, HelpName = "KEY[=MIN..MAX]", AllowMultipleArgumentsPerToken = false,
+        };
+        var align = CompareCommand.AlignOption("edge", "edge", "xcorr", "none");
+        align.Description = "Capture time axis: edge or xcorr (aligned once with the start, then the offset is fitted too) or none (taken as it is)";
+        var maxSims = new Option<int>("--max-sims") { Description = "Budget of simulations", DefaultValueFactory = _ => ScenarioFitOptions.DefaultMaxSimulations, HelpName = "N" };
+        var outDir = new Option<string?>("--out", "-o") { Description = "Output folder (default: out/<scenario>-fit)" };
+        var json = CommonOptions.Json();
+        var force = CommonOptions.Force();
+        var cmd = new Command("fit", "Fit scenario values so a simulated probe matches a capture in least squares")
+        { scenario, probe, free, align, maxSims, outDir, json, force };
+        capture.AddTo(cmd);
+        cmd.SetAction((pr, ct) => Task.FromResult(CommandGuard.Run(pr.InvocationConfiguration.Error, () =>
+        {
+            string path = pr.GetValue(scenario)!;
+            var s = CommonOptions.Load(path);
+            string probeName = pr.GetValue(probe)!;
+            CaptureComparison.RequireProbe(s, probeName);
+            var parameters = pr.GetValue(free)!.Select(f => FreeParameter.Parse(s, f)).ToList();
+            Capture cap = capture.Read(pr)!;
+            CaptureArguments.Warn(cap, pr.InvocationConfiguration.Error);
+            ScenarioFitResult result;
+            using (var bar = new ProgressBar(pr.InvocationConfiguration.Error, "fitting"))
+                result = ScenarioFit.Run(s, cap, probeName, parameters, new ScenarioFitOptions
+                {
+                    Align = CompareCommand.ParseAlign(pr.GetValue(align)!),
+                    MaxSimulations = pr.GetValue(maxSims),
+                    Progress = bar,
+                    Force = pr.GetValue(force),
+                }, ct);
+
+            string dir = pr.GetValue(outDir) ?? Path.Combine("out", Path.GetFileNameWithoutExtension(path) + "-fit");
+            var summary = FitOutputs.Json(result);
+            using (var output = new OutputFolder(dir))
+            {
+                File.WriteAllText(output.File("fitted.yaml"), result.FittedText);
+                File.WriteAllText(output.File("fit.json"), RunSummary.Text(summary));
+                File.WriteAllBytes(output.File("fit.png"),
+                    LineChart.RenderPng(FitOutputs.Chart(result, $"{s.Title}: fit of {probeName} to {Path.GetFileName(cap.Source)}"), 1200, 800));
+                output.Commit();
+            }
+            var o = pr.InvocationConfiguration.Output;
+            if (pr.GetValue(json)) o.WriteLine(RunSummary.Text(summary));
+            else Print(o, result, dir);
+            if (!result.Converged)
+                pr.InvocationConfiguration.Error.WriteLine($"warning: the fit used its budget of {pr.GetValue(maxSims)} simulations before it stopped improving; raise --max-sims");
+            return ExitCodes.Ok;
+        })));
+        return cmd;
+    }
+
+    static void Print(TextWriter o, ScenarioFitResult r, string dir)
+    {
+        o.WriteLine($"fitted {r.Parameters.Count} value(s) in {r.Simulations} simulations{(r.Converged ? "" : " (budget used up)")}");
+        int width = Math.Max(24, r.Parameters.Max(p => p.Parameter.KeyPath.Length) + 2);
+        foreach (var p in r.Parameters)
+        {
+            string unit = Symbol(p.Parameter.Unit);
+            string sigma = double.IsFinite(p.Uncertainty) ? Quantity.Format(p.Uncertainty, unit, 3) : "undetermined";
+            o.WriteLine($"  {p.Parameter.KeyPath.PadRight(width)} {Quantity.Format(p.Value, unit),12} ± {sigma,-12} (start {Quantity.Format(p.Parameter.Start, unit)})");
+        }
+        if (r.OffsetFitted)
+        {
+            string sigma = double.IsFinite(r.OffsetUncertaintySeconds) ? Quantity.Format(r.OffsetUncertaintySeconds, "s", 3) : "undetermined";
+            o.WriteLine($"  {"capture time offset".PadRight(width)} {Quantity.Format(r.OffsetSeconds, "s"),12} ± {sigma}");
+        }
+        o.WriteLine($"RMS error {Quantity.Format(r.RmsV, "V", 3)} (start {Quantity.Format(r.StartRmsV, "V", 3)})");
+        o.WriteLine($"wrote {Path.Combine(dir, "fitted.yaml")}, fit.json, fit.png");
+    }
+
+    static string Symbol(string unit) => unit.Replace("ohm", "Ω", StringComparison.Ordinal);
+}

@@ -1,0 +1,138 @@
+using System.CommandLine;
+using System.Globalization;
+using WaveSim.Core;
+using WaveSim.Core.Measurements;
+using WaveSim.Core.Model;
+using WaveSim.Core.Output;
+using WaveSim.Core.Rendering;
+using WaveSim.Core.Solver;
+using WaveSim.Core.Units;
+
+namespace WaveSim.Cli.Commands;
+
+/// <summary>`wavesim tdr SCENARIO [--capture FILE]`: impedance profile from a simulated or captured step reflectometer trace.</summary>
+public static class TdrCommand
+{
+    /// <summary>Default rise time of the simulated instrument.</summary>
+    public const string DefaultRise = "35 ps";
+
+    /// <summary>Creates the command.</summary>
+    public static Command Create()
+    {
+        var scenario = CommonOptions.Scenario();
+        var capture = new CaptureArguments(required: false);
+        var rise = new Option<string?>("--rise") { Description = $"10-90 % rise time of the step (default {DefaultRise}; with --capture, measured from the trace)", HelpName = "TIME" };
+        var rs = new Option<string>("--source-resistance") { Description = "Instrument resistance, also the reference impedance", DefaultValueFactory = _ => "50 ohm", HelpName = "OHMS" };
+        var velocity = new Option<string?>("--velocity") { Description = "Velocity for distances, e.g. 0.66c (default: the first segment's)", HelpName = "V" };
+        var epsEff = new Option<string?>("--eps-eff") { Description = "Effective permittivity for distances, e.g. 3.3 (instead of --velocity)", HelpName = "X" };
+        var incident = new Option<string?>("--incident") { Description = "With --capture: the incident step at the port (default: read after the edge)", HelpName = "VOLTS" };
+        var toScenario = new Option<string?>("--to-scenario") { Description = "Write the line found as a scenario YAML file", HelpName = "FILE" };
+        var outDir = new Option<string?>("--out", "-o") { Description = "Output folder (default: out/<scenario>-tdr)" };
+        var json = CommonOptions.Json();
+        var force = CommonOptions.Force();
+        var cmd = new Command("tdr", "Step reflectometry: impedance against distance by layer peeling, segments and lumped elements")
+        { scenario, rise, rs, velocity, epsEff, incident, toScenario, outDir, json, force };
+        capture.AddTo(cmd);
+        cmd.SetAction((pr, ct) => Task.FromResult(CommandGuard.Run(pr.InvocationConfiguration.Error, () =>
+        {
+            string path = pr.GetValue(scenario)!;
+            var s = CommonOptions.Load(path);
+            double sourceOhms = Positive(pr.GetValue(rs)!, Dimension.Resistance, "--source-resistance");
+            double? riseS = pr.GetValue(rise) is { } r ? Positive(r, Dimension.Time, "--rise") : null;
+            double v = Velocity(s, pr.GetValue(velocity), pr.GetValue(epsEff));
+            Capture? cap = capture.Read(pr);
+            if (cap is null && pr.GetValue(incident) is not null)
+                throw new InputException("--incident: applies only with --capture (the simulated instrument's incident step is 1 V)");
+
+            ReflectometerTrace trace;
+            if (cap is null)
+            {
+                using var bar = new ProgressBar(pr.InvocationConfiguration.Error, "simulating");
+                trace = Reflectometer.Simulate(s, riseS ?? Quantity.Parse(DefaultRise, Dimension.Time), sourceOhms,
+                    new SimulationOptions { Force = pr.GetValue(force), Progress = bar }, ct);
+            }
+            else
+            {
+                CaptureArguments.Warn(cap, pr.InvocationConfiguration.Error);
+                double? inc = pr.GetValue(incident) is { } i ? Positive(i, Dimension.Voltage, "--incident") : null;
+                trace = Reflectometer.FromCapture(cap, sourceOhms, inc, riseS ?? Quantity.Parse(DefaultRise, Dimension.Time));
+                if (riseS is { } given) trace = trace with { RampS = 1.25 * given };
+            }
+            TdrResult result = TdrAnalysis.Analyse(trace, v);
+
+            string title = cap is null ? $"{s.Title}: simulated reflectometer" : $"{Path.GetFileName(cap.Source)}: reflectometer trace";
+            string? yaml = pr.GetValue(toScenario) is null ? null : TdrScenarioWriter.Yaml(result, title);
+            string dir = pr.GetValue(outDir) ?? Path.Combine("out", Path.GetFileNameWithoutExtension(path) + "-tdr");
+            var summary = TdrOutputs.Json(result);
+            using (var output = new OutputFolder(dir))
+            {
+                TdrOutputs.WriteCsv(result, output.File("tdr.csv"));
+                File.WriteAllText(output.File("tdr.json"), RunSummary.Text(summary));
+                File.WriteAllBytes(output.File("tdr.png"), LineChart.RenderPng(TdrOutputs.Chart(result, title, cap is null ? s : null), 1200, 800));
+                output.Commit();
+            }
+            if (yaml is not null) WriteWhole(pr.GetValue(toScenario)!, yaml);
+
+            var o = pr.InvocationConfiguration.Output;
+            foreach (string w in result.Warnings) pr.InvocationConfiguration.Error.WriteLine("warning: " + w);
+            if (pr.GetValue(json)) o.WriteLine(RunSummary.Text(summary));
+            else Print(o, result, dir, pr.GetValue(toScenario));
+            return ExitCodes.Ok;
+        })));
+        return cmd;
+    }
+
+    static double Positive(string text, Dimension d, string option)
+    {
+        double x;
+        try { x = Quantity.Parse(text, d); }
+        catch (UnitException ex) { throw new InputException($"{option}: {ex.Message}"); }
+        if (!(x > 0) || !double.IsFinite(x)) throw new InputException($"{option}: expected a positive value, got '{text}'");
+        return x;
+    }
+
+    static double Velocity(Scenario s, string? velocity, string? epsEff)
+    {
+        if (velocity is not null && epsEff is not null)
+            throw new InputException("--velocity and --eps-eff: give one of them, not both");
+        if (velocity is not null)
+        {
+            double v = Positive(velocity, Dimension.Velocity, "--velocity");
+            if (v > Quantity.SpeedOfLight * (1 + 1e-9)) throw new InputException($"--velocity: '{velocity}' is faster than light");
+            return v;
+        }
+        if (epsEff is not null)
+        {
+            double e = Positive(epsEff, Dimension.Number, "--eps-eff");
+            if (e < 1) throw new InputException($"--eps-eff: must be at least 1, got '{epsEff}'");
+            return Quantity.SpeedOfLight / Math.Sqrt(e);
+        }
+        return s.Line.OfType<Segment>().First().Velocity;
+    }
+
+    /// <summary>Writes a file whole: to a temporary name beside it, then moved over.</summary>
+    static void WriteWhole(string path, string text)
+    {
+        string full = Path.GetFullPath(path);
+        string? parent = Path.GetDirectoryName(full);
+        if (parent is not null) Directory.CreateDirectory(parent);
+        string temp = full + ".partial-" + Guid.NewGuid().ToString("N");
+        File.WriteAllText(temp, text);
+        File.Move(temp, full, overwrite: true);
+    }
+
+    static void Print(TextWriter o, TdrResult r, string dir, string? scenarioFile)
+    {
+        o.WriteLine($"reference {Quantity.Format(r.ReferenceOhms, "Ω")}, incident {Quantity.Format(r.IncidentVolts, "V", 3)}, rise {Quantity.Format(r.RiseS, "s", 3)}, " +
+                    $"velocity {Quantity.Format(r.VelocityMps, "m/s", 3)}, layer step {Quantity.Format(r.LayerStepS, "s", 3)} ({Quantity.Format(r.VelocityMps * r.LayerStepS / 2, "m", 3)})");
+        o.WriteLine($"  {"from",10} {"to",10} {"Z0",10}");
+        foreach (var seg in r.Segments)
+            o.WriteLine($"  {Quantity.Format(seg.StartM, "m", 3),10} {Quantity.Format(seg.EndM, "m", 3),10} {Quantity.Format(seg.Z0Ohm, "Ω", 4),10}");
+        foreach (var l in r.Lumped)
+            o.WriteLine(l.Kind == LumpedKind.ShuntCapacitance
+                ? $"  shunt C {Quantity.Format(l.Value, "F", 3)} at {Quantity.Format(l.AtM, "m", 3)}"
+                : $"  series L {Quantity.Format(l.Value, "H", 3)} at {Quantity.Format(l.AtM, "m", 3)}");
+        o.WriteLine($"  end: {r.End.ToString().ToLower(CultureInfo.InvariantCulture)} at {Quantity.Format(r.EndM, "m", 3)}");
+        o.WriteLine($"wrote {Path.Combine(dir, "tdr.csv")}, tdr.json, tdr.png" + (scenarioFile is null ? "" : ", " + scenarioFile));
+    }
+}

@@ -1,0 +1,168 @@
+using WaveSim.Core.Measurements;
+using WaveSim.Core.Model;
+using WaveSim.Core.Scenarios;
+using WaveSim.Core.Solver;
+
+namespace WaveSim.Core.Fitting;
+
+/// <summary>
+/// Finds the scenario values that make a simulated probe match a capture in least squares (the workflow behind
+/// <c>wavesim fit</c>).
+/// </summary>
+/// <remarks>
+/// <para>Residual: the simulated probe, linearly interpolated at each capture sample time t_i + offset, minus the captured
+/// value. Before 0 the simulation holds its first value (nothing has happened yet), after its end its last. The capture
+/// samples used are fixed at the start: those that fall inside the simulated record with the starting offset.</para>
+/// <para>Alignment: the capture is aligned once, with the starting scenario (50 % crossings or cross-correlation). Aligning
+/// again at every evaluation would undo a fitted delay: moving the edge would be cancelled by moving the capture. Instead the
+/// offset joins the fit as one more parameter, bounded to ±10 % of the simulated duration around its start; so a delay is
+/// judged by where the edges and reflections fall relative to each other. With no alignment the capture's time axis is taken
+/// as the scenario's (t = 0 at the source's time 0) and nothing is shifted.</para>
+/// <para>Method: <see cref="BoundedLeastSquares"/> (Levenberg-Marquardt with bounds by change of variables); every residual
+/// evaluation is one simulation of an edited copy of the scenario text (<see cref="ScenarioEditor.With"/>). The simulations
+/// run one after another: the fitter asks for its Jacobian columns one at a time.</para>
+/// </remarks>
+public static class ScenarioFit
+{
+    /// <summary>Fits <paramref name="parameters"/> of <paramref name="scenario"/> so probe <paramref name="probe"/> matches <paramref name="capture"/>.</summary>
+    /// <param name="scenario">The starting scenario, read from text.</param>
+    /// <param name="capture">The measured waveform at the probe.</param>
+    /// <param name="probe">The scenario probe the capture was taken at.</param>
+    /// <param name="parameters">The free values (at least one, each key once).</param>
+    /// <param name="options">Alignment and budget; null for the defaults.</param>
+    /// <param name="ct">Cancels between simulations.</param>
+    /// <returns>The fitted values with uncertainties, the fitted scenario and the waveforms for a picture.</returns>
+    /// <exception cref="InputException">Bad probe, parameters, budget, or a capture that does not overlap the simulation.</exception>
+    public static ScenarioFitResult Run(Scenario scenario, Capture capture, string probe, IReadOnlyList<FreeParameter> parameters,
+        ScenarioFitOptions? options = null, CancellationToken ct = default)
+    {
+        ArgumentNullException.ThrowIfNull(scenario);
+        ArgumentNullException.ThrowIfNull(capture);
+        ArgumentNullException.ThrowIfNull(parameters);
+        options ??= new ScenarioFitOptions();
+        CaptureComparison.RequireProbe(scenario, probe);
+        if (parameters.Count == 0)
+            throw new InputException("--free: give at least one key path to fit, e.g. --free line[0].segment.z0");
+        var dup = parameters.GroupBy(p => p.KeyPath).FirstOrDefault(g => g.Count() > 1);
+        if (dup is not null)
+            throw new InputException($"--free: '{dup.Key}' is given more than once");
+
+        bool fitOffset = options.Align != AlignMode.None;
+        int n = parameters.Count + (fitOffset ? 1 : 0);
+        if (options.MaxSimulations < 2 * n + 3)
+            throw new InputException($"--max-sims: {options.MaxSimulations} is too few for {n} fitted value(s); give at least {2 * n + 3}");
+
+        int simulations = 0;
+        var cache = new Dictionary<string, (double[] T, double[] V)>();
+        (double[] T, double[] V) Probe(double[] values)
+        {
+            string cacheKey = string.Join(",", values.Select(v => v.ToString("R", System.Globalization.CultureInfo.InvariantCulture)));
+            if (cache.TryGetValue(cacheKey, out var hit))
+                return hit;
+            ct.ThrowIfCancellationRequested();
+            Scenario variant = Variant(scenario, parameters, values);
+            SimulationResult r = Simulate.Run(variant, new SimulationOptions { Force = options.Force }, ct);
+            simulations++;
+            options.Progress?.Report(Math.Min(1.0, simulations / (double)options.MaxSimulations));
+            var result = (r.Time, r.Probe(probe).Volts);
+            if (cache.Count > 8)
+                cache.Clear();   // only the latest few are ever asked for again
+            cache[cacheKey] = result;
+            return result;
+        }
+
+        double[] start = parameters.Select(p => p.Start).ToArray();
+        var (t0, v0) = Probe(start);
+        double offset0 = fitOffset
+            ? WaveformComparison.Compare(t0, v0, capture.Time, capture.Volts, options.Align).OffsetSeconds
+            : 0.0;
+
+        // The capture samples used, fixed for the whole fit so the residual keeps its length.
+        var use = Enumerable.Range(0, capture.Time.Length)
+            .Where(i => capture.Time[i] + offset0 >= t0[0] && capture.Time[i] + offset0 <= t0[^1])
+            .ToArray();
+        if (use.Length < n + 2)
+            throw new InputException(
+                $"only {use.Length} capture sample(s) fall inside the simulated record (0 to {t0[^1]:G4} s) after alignment; lengthen simulation.duration or check the capture's time unit");
+        double[] capT = use.Select(i => capture.Time[i]).ToArray();
+        double[] capV = use.Select(i => capture.Volts[i]).ToArray();
+
+        double window = ScenarioFitOptions.OffsetWindowFraction * scenario.Simulation.Duration;
+        double[] lower = parameters.Select(p => p.Lower).ToArray();
+        double[] upper = parameters.Select(p => p.Upper).ToArray();
+        double[] first = start;
+        if (fitOffset)
+        {
+            lower = [.. lower, offset0 - window];
+            upper = [.. upper, offset0 + window];
+            first = [.. start, offset0];
+        }
+
+        double[] Residuals(double[] x)
+        {
+            double[] values = fitOffset ? x[..^1] : x;
+            double offset = fitOffset ? x[^1] : 0.0;
+            var (t, v) = Probe(values);
+            return Difference(t, v, capT, capV, offset);
+        }
+
+        // The fitter's own count is checked against the budget; the alignment run above is already spent.
+        FitResult fit = BoundedLeastSquares.Fit(Residuals, first, lower, upper, options.MaxSimulations - 1, ct, options.ReductionTolerance);
+
+        double[] best = fitOffset ? fit.Values[..^1] : fit.Values;
+        double offset = fitOffset ? fit.Values[^1] : 0.0;
+        var fitted = parameters.Select((p, j) => new FittedParameter(p, best[j], fit.Uncertainty[j])).ToList();
+        string text = ScenarioEditor.EditedText(scenario, Changes(parameters, best));
+        Scenario fittedScenario = ScenarioLoader.Parse(text, scenario.FilePath ?? "scenario.yaml");
+
+        var (tf, vf) = Probe(best);
+        double[] startSim = Difference(t0, v0, capT, capV, offset0).Select((r, i) => r + capV[i]).ToArray();
+        double[] fittedSim = Difference(tf, vf, capT, capV, offset).Select((r, i) => r + capV[i]).ToArray();
+        double startRms = Rms(startSim.Select((s, i) => s - capV[i]));
+        double rms = Rms(fittedSim.Select((s, i) => s - capV[i]));
+        return new ScenarioFitResult(fitted, offset, fitOffset ? fit.Uncertainty[^1] : double.NaN, fitOffset, rms, startRms,
+            simulations, fit.Converged, text, fittedScenario, capT.Select(t => t + offset).ToArray(), capV, startSim, fittedSim);
+    }
+
+    /// <summary>The scenario with the parameters set to <paramref name="values"/> (SI), read back from the edited text.</summary>
+    /// <param name="scenario">The scenario, read from text.</param>
+    /// <param name="parameters">The free parameters.</param>
+    /// <param name="values">One SI value per parameter.</param>
+    /// <returns>The validated variant.</returns>
+    public static Scenario Variant(Scenario scenario, IReadOnlyList<FreeParameter> parameters, double[] values) =>
+        ScenarioEditor.With(scenario, Changes(parameters, values));
+
+    static IEnumerable<(string, string)> Changes(IReadOnlyList<FreeParameter> parameters, double[] values) =>
+        parameters.Select((p, j) => (p.KeyPath, ScenarioEditor.Format(values[j], p.Unit)));
+
+    /// <summary>Simulated (interpolated at capT + offset, held constant outside its record) minus captured.</summary>
+    static double[] Difference(double[] simT, double[] simV, double[] capT, double[] capV, double offset)
+    {
+        var r = new double[capT.Length];
+        int k = 0;
+        for (int i = 0; i < capT.Length; i++)
+        {
+            double t = capT[i] + offset;
+            double s;
+            if (t <= simT[0]) s = simV[0];
+            else if (t >= simT[^1]) s = simV[^1];
+            else
+            {
+                while (k + 1 < simT.Length && simT[k + 1] < t) k++;
+                while (k > 0 && simT[k] > t) k--;
+                double f = (t - simT[k]) / (simT[k + 1] - simT[k]);
+                s = simV[k] + f * (simV[k + 1] - simV[k]);
+            }
+            r[i] = s - capV[i];
+        }
+        return r;
+    }
+
+    static double Rms(IEnumerable<double> x)
+    {
+        double sum = 0;
+        int n = 0;
+        foreach (double v in x) { sum += v * v; n++; }
+        return n > 0 ? Math.Sqrt(sum / n) : double.NaN;
+    }
+}

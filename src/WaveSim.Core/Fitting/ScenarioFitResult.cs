@@ -1,0 +1,34 @@
+using WaveSim.Core.Model;
+
+namespace WaveSim.Core.Fitting;
+
+/// <summary>The outcome of <see cref="ScenarioFit.Run"/>.</summary>
+/// <param name="Parameters">The fitted values, in the order given.</param>
+/// <param name="OffsetSeconds">Shift added to the capture's time axis, s (fitted unless the alignment was None, then 0).</param>
+/// <param name="OffsetUncertaintySeconds">One standard deviation of the fitted offset, s; NaN when it was not fitted.</param>
+/// <param name="OffsetFitted">True when the offset was a fitted parameter (any alignment but None).</param>
+/// <param name="RmsV">RMS of simulated minus captured at the capture's samples, with the fitted values, V.</param>
+/// <param name="StartRmsV">The same with the starting values, V.</param>
+/// <param name="Simulations">Number of simulations run, including the alignment and the Jacobians.</param>
+/// <param name="Converged">True when the fit stopped improving; false when the budget ran out first.</param>
+/// <param name="FittedText">The scenario's YAML text with the fitted values spliced in.</param>
+/// <param name="Fitted">That text read back: the fitted scenario.</param>
+/// <param name="Time">The capture's sample times used, on the simulation's time axis (the fitted offset added), s.</param>
+/// <param name="Captured">The capture's values at <paramref name="Time"/>, V.</param>
+/// <param name="StartSimulated">The starting scenario's probe at <paramref name="Time"/>, V (aligned with the starting offset).</param>
+/// <param name="FittedSimulated">The fitted scenario's probe at <paramref name="Time"/>, V.</param>
+public sealed record ScenarioFitResult(
+    IReadOnlyList<FittedParameter> Parameters,
+    double OffsetSeconds,
+    double OffsetUncertaintySeconds,
+    bool OffsetFitted,
+    double RmsV,
+    double StartRmsV,
+    int Simulations,
+    bool Converged,
+    string FittedText,
+    Scenario Fitted,
+    double[] Time,
+    double[] Captured,
+    double[] StartSimulated,
+    double[] FittedSimulated);

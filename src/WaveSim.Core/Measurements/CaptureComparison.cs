@@ -1,0 +1,75 @@
+using WaveSim.Core.Analysis;
+using WaveSim.Core.Model;
+using WaveSim.Core.Output;
+using WaveSim.Core.Solver;
+
+namespace WaveSim.Core.Measurements;
+
+/// <summary>Simulates a scenario and compares one probe with a measured capture (the workflow behind <c>wavesim compare</c>).</summary>
+public static class CaptureComparison
+{
+    /// <summary>Runs <paramref name="scenario"/>, aligns <paramref name="capture"/> with probe <paramref name="probe"/> and compares them.</summary>
+    /// <param name="scenario">The scenario to simulate.</param>
+    /// <param name="capture">The measured waveform.</param>
+    /// <param name="probe">Name of the scenario probe the capture was taken at.</param>
+    /// <param name="mode">How to find the capture's time offset.</param>
+    /// <param name="options">Simulation options (progress, force); null for the defaults.</param>
+    /// <param name="ct">Cancels the simulation.</param>
+    /// <returns>The comparison and the figures of both waveforms.</returns>
+    /// <exception cref="InputException">No such probe, or the waveforms cannot be compared (see <see cref="WaveformComparison.Compare"/>).</exception>
+    public static CaptureComparisonResult Run(Scenario scenario, Capture capture, string probe, AlignMode mode,
+        SimulationOptions? options = null, CancellationToken ct = default)
+    {
+        ArgumentNullException.ThrowIfNull(scenario);
+        ArgumentNullException.ThrowIfNull(capture);
+        RequireProbe(scenario, probe);
+        SimulationResult sim = Simulate.Run(scenario, options, ct);
+        return Compare(sim, capture, probe, mode);
+    }
+
+    /// <summary>Compares an existing simulation's probe with a capture.</summary>
+    /// <param name="sim">A finished simulation.</param>
+    /// <param name="capture">The measured waveform.</param>
+    /// <param name="probe">Probe name.</param>
+    /// <param name="mode">How to find the capture's time offset.</param>
+    /// <returns>The comparison and the figures of both waveforms.</returns>
+    public static CaptureComparisonResult Compare(SimulationResult sim, Capture capture, string probe, AlignMode mode)
+    {
+        ProbeTrace trace = sim.Probe(probe);
+        ComparisonResult c = WaveformComparison.Compare(sim.Time, trace.Volts, capture.Time, capture.Volts, mode);
+        // Both sets of figures on the same grid and with the same options, so that their difference is the capture's doing.
+        SignalQualityOptions figureOptions = FigureOptions(sim.Scenario, probe);
+        SignalFigures simulated = SignalQuality.Compute(c.Time, c.Simulated, figureOptions);
+        SignalFigures captured = SignalQuality.Compute(c.Time, c.Captured, figureOptions);
+        var figures = SignalFigures.FigureNames
+            .Where(name => simulated.HasThresholds || !name.StartsWith("noise_margin", StringComparison.Ordinal))
+            .Select(name =>
+            {
+                double? a = simulated.GetNumber(name), b = captured.GetNumber(name);
+                return new FigureDifference(name, a, b, a is { } x && b is { } y ? y - x : null);
+            })
+            .ToList();
+        return new CaptureComparisonResult(probe, c, simulated, captured, figures);
+    }
+
+    /// <summary>The figure options <c>wavesim run</c> uses for this probe: receiver thresholds at a load that has them, delays from the source edge.</summary>
+    /// <param name="s">The scenario.</param>
+    /// <param name="probe">Probe name (must exist).</param>
+    /// <returns>The options.</returns>
+    public static SignalQualityOptions FigureOptions(Scenario s, string probe)
+    {
+        ProbeSpec spec = s.Probes.First(p => p.Name == probe);
+        ReceiverThresholds? rx = spec.Anchor == ProbeAnchor.Load ? RunSummary.LoadOf(s, spec.BranchPath).Receiver : null;
+        return new SignalQualityOptions { VihV = rx?.Vih, VilV = rx?.Vil, SourceEdgeTimeS = s.Source.FirstEdgeMidpoint };
+    }
+
+    /// <summary>Throws a one-line error naming the probes when <paramref name="probe"/> is not one of the scenario's.</summary>
+    /// <param name="s">The scenario.</param>
+    /// <param name="probe">Probe name.</param>
+    /// <exception cref="InputException">No such probe.</exception>
+    public static void RequireProbe(Scenario s, string probe)
+    {
+        if (!s.Probes.Any(p => p.Name == probe))
+            throw new InputException($"--probe: the scenario has no probe named '{probe}'; probes: {string.Join(", ", s.Probes.Select(p => p.Name))}");
+    }
+}

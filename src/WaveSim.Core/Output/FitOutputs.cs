@@ -1,0 +1,62 @@
+using System.Text.Json.Nodes;
+using WaveSim.Core.Fitting;
+using WaveSim.Core.Rendering;
+
+namespace WaveSim.Core.Output;
+
+/// <summary>The files of <c>wavesim fit</c>: fit.json and the overlay chart (fitted.yaml is <see cref="ScenarioFitResult.FittedText"/>).</summary>
+public static class FitOutputs
+{
+    /// <summary>fit.json: parameters {key: {value, uncertainty, start, lower, upper, unit}}, capture_offset_s, rms_V, start_rms_V, simulations, converged (SI).</summary>
+    /// <param name="r">The fit.</param>
+    /// <returns>The JSON object.</returns>
+    public static JsonObject Json(ScenarioFitResult r)
+    {
+        ArgumentNullException.ThrowIfNull(r);
+        var parameters = new JsonObject();
+        foreach (var p in r.Parameters)
+            parameters[p.Parameter.KeyPath] = new JsonObject
+            {
+                ["value"] = p.Value,
+                ["uncertainty"] = CompareOutputs.Finite(p.Uncertainty),
+                ["start"] = p.Parameter.Start,
+                ["lower"] = p.Parameter.Lower,
+                ["upper"] = p.Parameter.Upper,
+                ["unit"] = p.Parameter.Unit,
+            };
+        return new JsonObject
+        {
+            ["parameters"] = parameters,
+            ["capture_offset_s"] = new JsonObject
+            {
+                ["value"] = r.OffsetSeconds,
+                ["uncertainty"] = CompareOutputs.Finite(r.OffsetUncertaintySeconds),
+                ["fitted"] = r.OffsetFitted,
+            },
+            ["rms_V"] = r.RmsV,
+            ["start_rms_V"] = r.StartRmsV,
+            ["simulations"] = r.Simulations,
+            ["converged"] = r.Converged,
+        };
+    }
+
+    /// <summary>Capture, starting and fitted simulation at the capture's samples, with the fitted residual below.</summary>
+    /// <param name="r">The fit.</param>
+    /// <param name="title">Chart title.</param>
+    /// <returns>The chart.</returns>
+    public static ChartSpec Chart(ScenarioFitResult r, string title)
+    {
+        ArgumentNullException.ThrowIfNull(r);
+        double[] residual = r.FittedSimulated.Select((s, i) => s - r.Captured[i]).ToArray();
+        return new ChartSpec(title, "Time", "s",
+        [
+            new ChartPanel("Voltage", "V",
+            [
+                new Series("captured", r.Time, r.Captured),
+                new Series("start", r.Time, r.StartSimulated),
+                new Series("fitted", r.Time, r.FittedSimulated),
+            ]),
+            new ChartPanel("Residual", "V", [new Series("fitted - captured", r.Time, residual)]) { HeightWeight = 0.5 },
+        ]);
+    }
+}
