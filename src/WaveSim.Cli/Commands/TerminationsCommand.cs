@@ -90,12 +90,18 @@ public static class TerminationsCommand
     static void Print(TextWriter o, TerminationStudyResult r, string dir)
     {
         o.WriteLine($"Z0 {Quantity.Format(r.Z0, "Ω", 3)} (first segment), line delay {Quantity.Format(r.LineDelayS, "s", 3)}, receiver '{r.ReceiverProbe}'; limits: overshoot {r.Options.MaxOvershootPct:G3} %, settling {Quantity.Format(r.Options.MaxSettlingS, "s", 3)}");
-        o.WriteLine($"  {"strategy",-9} {"overshoot",9} {"undershoot",10} {"settling",9} {"crossings",9} {"delay",9} {"P high",9} {"P low",9} {"P avg",9}  verdict");
+        bool eyes = r.Outcomes.Any(x => x.ReceiverEye is not null);
+        string eyeHead = eyes ? $" {"eye height",10} {"eye width",9}" : "";
+        o.WriteLine($"  {"strategy",-9} {"overshoot",9} {"undershoot",10} {"settling",9} {"crossings",9} {"delay",9}{eyeHead} {"P high",9} {"P low",9} {"P avg",9}  verdict");
         foreach (var x in r.Outcomes)
         {
             if (x.Receiver is not { } f) { o.WriteLine($"  {x.Design.Name,-9} not applicable: {x.Design.Note}"); continue; }
-            o.WriteLine($"  {x.Design.Name,-9} {Pct(f.OvershootPct),9} {Pct(f.UndershootPct),10} {T(f.SettlingS),9} {f.ThresholdCrossings,9} {T(f.Delay50S),9} {W(x.PowerHighW),9} {W(x.PowerLowW),9} {W(x.PowerAverageW),9}  {x.Verdict}");
+            var e = x.ReceiverEye?.Diagram?.Figures;
+            string eye = !eyes ? "" : e is null ? $" {"-",10} {"-",9}"
+                : e.HasThresholds ? $" {V(e.EyeHeightThresholdsV),10} {T(e.EyeWidthThresholdsS),9}" : $" {V(e.EyeHeightV),10} {T(e.EyeWidthS),9}";
+            o.WriteLine($"  {x.Design.Name,-9} {Pct(f.OvershootPct),9} {Pct(f.UndershootPct),10} {T(f.SettlingS),9} {f.ThresholdCrossings,9} {T(f.Delay50S),9}{eye} {W(x.PowerHighW),9} {W(x.PowerLowW),9} {W(x.PowerAverageW),9}  {x.Verdict}");
         }
+        if (eyes) o.WriteLine("  (bit pattern: the verdict is judged on the receiver's eye" + (r.Outcomes.Any(x => x.ReceiverEye?.Thresholds is not null) ? ", measured against the receiver thresholds)" : ")"));
         o.WriteLine($"parts (simulated with {r.Options.Series}; computed value, nearest E24, nearest E96; capacitors: next E24 value up):");
         foreach (var x in r.Outcomes.Where(x => x.Design.Parts.Count > 0))
         {
@@ -109,6 +115,7 @@ public static class TerminationsCommand
     }
 
     static string T(double? t) => t is { } x ? Quantity.Format(x, "s", 3) : "-";
+    static string V(double? v) => v is { } x ? Quantity.Format(x, "V", 3) : "-";
     static string W(double? w) => w is { } x ? Quantity.Format(x, "W", 3) : "-";
     static string Pct(double? p) => p is { } x ? x.ToString("F1", CultureInfo.InvariantCulture) + " %" : "-";
 }

@@ -12,14 +12,14 @@ namespace WaveSim.Core.Output;
 /// <param name="Probe">The probe.</param>
 /// <param name="Diagram">The folded traces and figures; null when the record is too short for one window after the skip.</param>
 /// <param name="Thresholds">The receiver's thresholds at a load probe that has them, else null.</param>
-/// <param name="FirstBitStartS">Instant bit 0 begins at the probe: the source's delay plus the line delay to the probe, s.</param>
+/// <param name="FirstBitStartS">Instant bit 0 begins at the probe: the source's delay plus the line delay to the probe, moved to centre the eye between the crossings (<see cref="RunEyes.AlignedStart"/>), s.</param>
 /// <param name="SkipS">Start-up time left out, s.</param>
 /// <param name="Note">Why <paramref name="Diagram"/> is null.</param>
 public sealed record ProbeEye(ProbeTrace Probe, EyeDiagram? Diagram, ReceiverThresholds? Thresholds, double FirstBitStartS, double SkipS, string? Note);
 
 /// <summary>
 /// Eye diagrams of a run whose source is a bit pattern: every probe folded at the bit time, with bit 0 placed at the
-/// source's delay plus the line's delay to the probe, and the first max(2 bit times, 2 × the total line delay) left out
+/// source's delay plus the line's delay to the probe (then centred between the measured crossings), and the first max(2 bit times, 2 × the total line delay) left out
 /// so that the line has filled and the first reflections have died down (common practice, no source).
 /// </summary>
 public static class RunEyes
@@ -41,7 +41,7 @@ public static class RunEyes
         {
             var spec = s.Probes[i];
             var rx = spec.Anchor == ProbeAnchor.Load ? RunSummary.LoadOf(s, spec.BranchPath).Receiver : null;
-            double start = s.Source.Delay + DelayTo(s.Line, spec, 0);
+            double start = AlignedStart(r.Time, r.Probes[i].Volts, s.Source.Delay + DelayTo(s.Line, spec, 0), s.Source.BitTime, skip);
             try
             {
                 var eye = EyeAnalysis.Compute(r.Time, r.Probes[i].Volts, s.Source.BitTime, start, rx?.Vih, rx?.Vil, skip);
@@ -79,6 +79,30 @@ public static class RunEyes
             : ": eye closed";
         return EyePlot.RenderPng($"{title} — {e.Probe.Name}{figures}", d.Traces.Select(x => (x.T, x.V)).ToList(), d.BitTimeS, width, height,
             new EyePlotOptions { Thresholds = lines });
+    }
+
+    /// <summary>
+    /// The bit-0 start moved by the mean phase of the waveform's crossings of its mid level (after the skip), so that the
+    /// eye is centred between the crossings even when the edges are slowed or delayed by loads (common practice, no source).
+    /// The mean is taken on the circle (phases modulo one bit time), so crossings either side of a bit boundary average right.
+    /// Without crossings the start is <paramref name="nominal"/>.
+    /// </summary>
+    public static double AlignedStart(double[] time, double[] volts, double nominal, double bitTime, double skip)
+    {
+        int from = Array.FindIndex(time, t => t >= nominal + skip);
+        if (from < 0 || from >= time.Length - 1) return nominal;
+        double lo = double.PositiveInfinity, hi = double.NegativeInfinity;
+        for (int k = from; k < volts.Length; k++) { lo = Math.Min(lo, volts[k]); hi = Math.Max(hi, volts[k]); }
+        double mid = 0.5 * (lo + hi), sin = 0, cos = 0;
+        for (int k = from + 1; k < volts.Length; k++)
+        {
+            if ((volts[k - 1] < mid) == (volts[k] < mid)) continue;
+            double t = time[k - 1] + (mid - volts[k - 1]) / (volts[k] - volts[k - 1]) * (time[k] - time[k - 1]);
+            double phase = 2 * Math.PI * (t - nominal) / bitTime;
+            sin += Math.Sin(phase); cos += Math.Cos(phase);
+        }
+        if (sin == 0 && cos == 0) return nominal;
+        return nominal + Math.Atan2(sin, cos) / (2 * Math.PI) * bitTime;
     }
 
     /// <summary>Sum of the delays of every segment of a line and its branches, s.</summary>

@@ -1,4 +1,5 @@
 using WaveSim.Core.Analysis;
+using WaveSim.Core.Output;
 using WaveSim.Core.Solver;
 
 namespace WaveSim.Core.Terminations;
@@ -14,6 +15,9 @@ namespace WaveSim.Core.Terminations;
 public sealed record TerminationOutcome(TerminationDesign Design, SimulationResult? Result, IReadOnlyList<SignalFigures> Figures,
     SignalFigures? Receiver, double? PowerLowW, double? PowerHighW, IReadOnlyList<string> Failures)
 {
+    /// <summary>The receiver's eye when the source is a bit pattern (then the verdict is judged on it), else null.</summary>
+    public ProbeEye? ReceiverEye { get; init; }
+
     /// <summary>Average static power for a 50 % duty cycle, W.</summary>
     public double? PowerAverageW => PowerLowW is { } lo && PowerHighW is { } hi ? 0.5 * (lo + hi) : null;
 

@@ -7,10 +7,13 @@ namespace WaveSim.Core.Terminations;
 /// Static (DC) power in a termination with the driver held at one level: the network's DC operating point (capacitors open,
 /// inductors shorted, line resistance included) and Ohm's law, P = I²·R in each resistor of the termination. A load
 /// resistor given in the scenario counts as part of the termination. A Thevenin pair is simulated as its equivalent but its
-/// power is that of both resistors: (Vcc − V)²/R1 + V²/R2 at the load voltage V.
+/// power is that of both resistors: (Vcc − V)²/R1 + V²/R2 at the load voltage V. Below 1 pW is reported as 0.
 /// </summary>
 public static class TerminationPower
 {
+    /// <summary>Powers below this are reported as 0 W (they come from the DC solution's tiny leak to ground), W.</summary>
+    public const double NegligibleW = 1e-12;
+
     /// <summary>Power in the termination's resistors, W, with the driver's open-circuit voltage at <paramref name="level"/>.</summary>
     /// <exception cref="InputException">The design does not apply (no variant) or the network has no DC solution.</exception>
     public static double At(TerminationDesign design, double level)
@@ -33,7 +36,8 @@ public static class TerminationPower
             }
             p += amps[b] * amps[b] * br.R;
         }
-        return p;
+        // Below a picowatt is the DC solution's 1e-15 S leak at every junction, not a real current: report it as none.
+        return p < NegligibleW ? 0 : p;
     }
 
     static bool IsTermination(TerminationDesign d, Scenario v, LumpedBranch br) => br.Label switch

@@ -24,6 +24,7 @@ public static class TerminationReport
                 }).ToArray()),
                 ["thevenin_level_V"] = o.Design.Kind == TerminationKind.Thevenin && o.Result is not null ? o.Design.TheveninV : null,
                 ["receiver"] = o.Receiver?.ToJsonObject(),
+                ["receiver_eye"] = o.ReceiverEye is { } eye ? Output.RunEyes.Json(eye) : null,
                 ["probes"] = probes,
                 ["power_high_W"] = o.PowerHighW,
                 ["power_low_W"] = o.PowerLowW,

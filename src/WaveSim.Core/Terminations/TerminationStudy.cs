@@ -9,7 +9,8 @@ namespace WaveSim.Core.Terminations;
 
 /// <summary>
 /// Compares the termination strategies on a net: sizes each (<see cref="TerminationPlanner"/>), runs every variant through
-/// <see cref="Simulate.Run"/> (in parallel), measures the receiver and the static power, and checks the limits.
+/// <see cref="Simulate.Run"/> (in parallel), measures the receiver and the static power, and checks the limits: overshoot and
+/// settling of the first edge, or for a bit-pattern source the receiver's eye (open beyond the thresholds when given).
 /// </summary>
 public static class TerminationStudy
 {
@@ -58,12 +59,32 @@ public static class TerminationStudy
         var result = Simulate.Run(d.Variant, sim, ct);
         var figures = RunSummary.Figures(result, o.SettleBand).Select(f => f.Figures).ToArray();
         var rx = figures[receiver];
+        var src = d.Variant.Source;
+        var (lo, hi) = (TerminationPower.At(d, src.Low), TerminationPower.At(d, src.High));
+        if (RunEyes.Applies(d.Variant))
+        {
+            // A bit stream never settles: judge the receiver's eye instead of the first edge.
+            var eye = RunEyes.Compute(result)[receiver];
+            return new TerminationOutcome(d, result, figures, rx, lo, hi, EyeFailures(eye)) { ReceiverEye = eye };
+        }
         var failures = new List<string>();
         if (rx.OvershootPct is { } os && os > o.MaxOvershootPct)
             failures.Add($"overshoot {os:F1} % > {o.MaxOvershootPct:G3} %");
         if (rx.SettlingS is not { } st) failures.Add("does not settle in the record");
         else if (st > o.MaxSettlingS) failures.Add($"settling {Quantity.Format(st, "s", 3)} > {Quantity.Format(o.MaxSettlingS, "s", 3)}");
-        var src = d.Variant.Source;
-        return new TerminationOutcome(d, result, figures, rx, TerminationPower.At(d, src.Low), TerminationPower.At(d, src.High), failures);
+        return new TerminationOutcome(d, result, figures, rx, lo, hi, failures);
+    }
+
+    /// <summary>With thresholds, the eye must open beyond both (height and width against them above 0); without, at the mid level.</summary>
+    static IReadOnlyList<string> EyeFailures(ProbeEye eye)
+    {
+        if (eye.Diagram is not { } diagram) return ["no eye: " + eye.Note];
+        var f = diagram.Figures;
+        var failures = new List<string>();
+        double? height = f.HasThresholds ? f.EyeHeightThresholdsV : f.EyeHeightV, width = f.HasThresholds ? f.EyeWidthThresholdsS : f.EyeWidthS;
+        string against = f.HasThresholds ? " against the thresholds" : "";
+        if (!(height > 0)) failures.Add($"eye closed{against} (height {(height is { } h ? Quantity.Format(h, "V", 3) : "-")})");
+        else if (!(width > 0)) failures.Add($"eye closed{against} (no width)");
+        return failures;
     }
 }

@@ -50,5 +50,5 @@ public static class TerminationsCsv
         Write(r, w);
     }
 
-    static string Cell(double? v) => v is { } x ? x.ToString("R", CultureInfo.InvariantCulture) : "";
+    static string Cell(double? v) => v is { } x ? (x + 0.0).ToString("R", CultureInfo.InvariantCulture) : ""; // + 0.0 turns -0 into 0
 }

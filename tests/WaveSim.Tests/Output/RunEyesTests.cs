@@ -27,7 +27,8 @@ simulation: { duration: 27 ns, resolution: 10 }
         var eyes = RunEyes.Compute(r);
         Assert.Equal(2, eyes.Count);
         var rx = eyes.Single(e => e.Probe.Name == "rx");
-        Assert.Equal(1e-9, rx.FirstBitStartS, 1e-18);                   // 200 mm at 5 ns/m
+        // 200 mm at 5 ns/m, then centred on the crossings, which lie half a 0-100 % ramp (1.25 × 40 ps) after the bit boundary.
+        Assert.Equal(1e-9 + 0.5 * 1.25 * 40e-12, rx.FirstBitStartS, 2e-12);
         Assert.Equal(2e-9, rx.SkipS, 1e-18);                            // max(2 bit times, 2 × 1 ns)
         var f = rx.Diagram!.Figures;
         Assert.Equal(0.5, f.EyeHeightV!.Value, 0.005);
