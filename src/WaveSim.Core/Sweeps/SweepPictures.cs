@@ -22,8 +22,21 @@ public static class SweepPictures
                     : string.Join(", ", r.Axes.Skip(1).Select((a, k) => a.KeyPath + " " + Quantity.Format(pts[0].Values[k + 1], a.DisplayUnit, 3)));
                 return new Rendering.Series(name, pts.Select(p => p.Values[0]).ToArray(), pts.Select(p => r.Value(p, target) ?? double.NaN).ToArray());
             }).ToList();
-            panels.Add(new ChartPanel($"{probe} {FigureSelector.Stem(figure).Replace('_', ' ')}", FigureSelector.Unit(figure), series));
+            panels.Add(new ChartPanel($"{probe} {FigureSelector.Stem(figure).Replace('_', ' ')}", FigureSelector.Unit(figure), series)
+            {
+                Markers = series.SelectMany(IsolatedPoints).ToList(),
+            });
         }
         return new ChartSpec($"{FigureSelector.Stem(figure).Replace('_', ' ')} against {first.KeyPath}", first.KeyPath, first.DisplayUnit, panels);
+    }
+
+    /// <summary>Points whose neighbours are gaps (the figure does not apply there): a line cannot show them, so they get a ring.</summary>
+    static IEnumerable<Marker> IsolatedPoints(Rendering.Series s)
+    {
+        for (int i = 0; i < s.Y.Length; i++)
+        {
+            bool before = i > 0 && double.IsFinite(s.Y[i - 1]), after = i < s.Y.Length - 1 && double.IsFinite(s.Y[i + 1]);
+            if (double.IsFinite(s.Y[i]) && !before && !after) yield return new Marker(s.X[i], s.Y[i], s.Name);
+        }
     }
 }
