@@ -10,6 +10,8 @@ public static class Program
     public static RootCommand BuildRoot() => new("wavesim - transmission-line wave simulator")
     {
         RunCommand.Create(),
+        SweepCommand.Create(),
+        TerminationsCommand.Create(),
         CheckCommand.Create(),
         VersionInfoCommand.Create(),
         XSectionCommand.Create(),

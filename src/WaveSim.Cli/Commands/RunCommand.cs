@@ -41,7 +41,8 @@ public static class RunCommand
             using (var bar = new ProgressBar(pr.InvocationConfiguration.Error, "simulating"))
                 result = Simulate.Run(s, options with { Progress = bar }, ct);
             var figures = RunSummary.Figures(result, band);
-            var summary = RunSummary.Json(result, figures);
+            var eyes = RunEyes.Compute(result);
+            var summary = RunSummary.Json(result, figures, eyes);
             IReadOnlyList<ProbeDifference>? fd = null;
             FrequencyResponse? response = null;
             if (pr.GetValue(fdCheck))
@@ -61,6 +62,8 @@ public static class RunCommand
                 File.WriteAllBytes(output.File("waveforms.png"), LineChart.RenderPng(chart, 1200, pr.GetValue(currents) ? 900 : 600));
                 if (pr.GetValue(svg)) File.WriteAllText(output.File("waveforms.svg"), LineChart.RenderSvg(chart, 1200, pr.GetValue(currents) ? 900 : 600));
                 File.WriteAllBytes(output.File("spacetime.png"), RunPictures.SpaceTime(result, 1000, 800));
+                foreach (var eye in eyes)
+                    if (RunEyes.RenderPng(s.Title, eye, 1000, 700) is { } png) File.WriteAllBytes(output.File($"eye_{eye.Probe.Name}.png"), png);
                 if (nFrames > 0)
                 {
                     var (lo, hi) = RunPictures.VoltageRange(result);
@@ -75,7 +78,7 @@ public static class RunCommand
             if (pr.GetValue(json)) o.WriteLine(RunSummary.Text(summary));
             else
             {
-                PrintSummary(o, result, figures, dir);
+                PrintSummary(o, result, figures, eyes, dir);
                 if (fd is not null)
                     foreach (var d in fd)
                         o.WriteLine($"  frequency-domain check {d.Probe}: largest difference {Quantity.Format(d.MaxDiffV, "V", 3)} ({d.MaxDiffPct:F3} % of the swing)");
@@ -112,16 +115,24 @@ public static class RunCommand
         return v;
     }
 
-    static void PrintSummary(TextWriter o, SimulationResult r, IReadOnlyList<(ProbeTrace Probe, SignalFigures Figures)> figures, string dir)
+    static void PrintSummary(TextWriter o, SimulationResult r, IReadOnlyList<(ProbeTrace Probe, SignalFigures Figures)> figures, IReadOnlyList<ProbeEye> eyes, string dir)
     {
         o.WriteLine($"{r.Scenario.Title}: {r.Plan.Steps} steps of {Quantity.Format(r.Plan.Dt, "s")} on {r.Plan.TotalCells} cells in {r.Elapsed.TotalSeconds:F2} s");
         o.WriteLine($"  {"probe",-12} {"final",10} {"min",10} {"max",10} {"overshoot",10} {"delay",10} {"rise",10} {"settling",10}");
         foreach (var (p, f) in figures)
             o.WriteLine($"  {p.Name,-12} {V(p.Volts[^1]),10} {V(p.Volts.Min()),10} {V(p.Volts.Max()),10} {Pct(f.OvershootPct),10} {T(f.Delay50S),10} {T(f.Rise1090S ?? f.Fall9010S),10} {T(f.SettlingS),10}");
-        o.WriteLine($"wrote {Path.Combine(dir, "probes.csv")}, summary.json, waveforms.png, spacetime.png");
+        foreach (var e in eyes)
+        {
+            var f = e.Diagram?.Figures;
+            o.WriteLine(f is null ? $"  eye {e.Probe.Name}: {e.Note}"
+                : $"  eye {e.Probe.Name}: height {V(f.EyeHeightV)}, width {T(f.EyeWidthS)}" + (f.HasThresholds ? $", against thresholds {V(f.EyeHeightThresholdsV)} x {T(f.EyeWidthThresholdsS)}" : "") + $" ({f.TraceCount} bits)");
+        }
+        string eyeFiles = string.Concat(eyes.Where(e => e.Diagram is not null).Select(e => $", eye_{e.Probe.Name}.png"));
+        o.WriteLine($"wrote {Path.Combine(dir, "probes.csv")}, summary.json, waveforms.png, spacetime.png{eyeFiles}");
     }
 
     static string V(double v) => Quantity.Format(v, "V", 3);
+    static string V(double? v) => v is { } x ? V(x) : "-";
     static string T(double? t) => t is { } x ? Quantity.Format(x, "s", 3) : "-";
     static string Pct(double? p) => p is { } x ? x.ToString("F1", CultureInfo.InvariantCulture) + " %" : "-";
 }

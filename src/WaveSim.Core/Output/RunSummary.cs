@@ -64,8 +64,8 @@ public static class RunSummary
         }).ToArray()),
     };
 
-    /// <summary>The whole summary.json object.</summary>
-    public static JsonObject Json(SimulationResult r, IReadOnlyList<(ProbeTrace Probe, SignalFigures Figures)> figures)
+    /// <summary>The whole summary.json object; with <paramref name="eyes"/> (see <see cref="RunEyes.Compute"/>) each probe gets an "eye" object.</summary>
+    public static JsonObject Json(SimulationResult r, IReadOnlyList<(ProbeTrace Probe, SignalFigures Figures)> figures, IReadOnlyList<ProbeEye>? eyes = null)
     {
         var probes = new JsonObject();
         foreach (var (p, f) in figures)
@@ -80,6 +80,7 @@ public static class RunSummary
                 ["final_A"] = p.Amps[^1],
             };
             foreach (var kv in f.ToJsonObject()) o[kv.Key] = kv.Value?.DeepClone();
+            if (eyes?.FirstOrDefault(e => e.Probe.Name == p.Name) is { } eye) o["eye"] = RunEyes.Json(eye);
             probes[p.Name] = o;
         }
         return new JsonObject

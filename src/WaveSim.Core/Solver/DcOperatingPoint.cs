@@ -26,6 +26,18 @@ internal static class DcOperatingPoint
         Store(net, sourceLevel, x);
     }
 
+    /// <summary>
+    /// The DC solution with the driver at <paramref name="sourceLevel"/> (for static power): every junction's voltage and every
+    /// lumped branch's current (from A to B), without touching the grid arrays.
+    /// </summary>
+    public static (double[] JunctionVolts, double[] BranchCurrents) Solution(Network net, double sourceLevel)
+    {
+        var x = Solve(net, sourceLevel, 0) ?? Solve(net, sourceLevel, Rmin)
+            ?? throw new InputException("the network has no defined DC solution (a loop with no resistance?): give the driver or the load a resistance");
+        int nj = net.Junctions.Count, nb = net.Branches.Count;
+        return (x.SubVector(0, nj).ToArray(), x.SubVector(nj, nb).ToArray());
+    }
+
     static Vector<double>? Solve(Network net, double sourceLevel, double rmin)
     {
         int nj = net.Junctions.Count, nb = net.Branches.Count, ns = net.Segments.Count;

@@ -1,0 +1,110 @@
+using System.CommandLine;
+using System.Globalization;
+using WaveSim.Core;
+using WaveSim.Core.Output;
+using WaveSim.Core.Rendering;
+using WaveSim.Core.Sweeps;
+using WaveSim.Core.Units;
+
+namespace WaveSim.Cli.Commands;
+
+/// <summary>`wavesim sweep SCENARIO --vary KEY=RANGE ...`: runs a grid of variants and writes sweep.csv and one chart per chosen figure.</summary>
+public static class SweepCommand
+{
+    /// <summary>Tables longer than this are left to sweep.csv.</summary>
+    const int MaxPrintedRows = 40;
+
+    /// <summary>Creates the command.</summary>
+    public static Command Create()
+    {
+        var scenario = CommonOptions.Scenario();
+        var vary = new Option<string[]>("--vary") { Description = "KEY=RANGE: start..stop:count, start..stop:count:log or a,b,c, each value with its unit or the unit once at the end (load.r=10..200 ohm:20); repeat for a grid", Required = true };
+        var figure = new Option<string>("--figure") { Description = "Figures to chart, comma-separated (e.g. overshoot,settling)", DefaultValueFactory = _ => "overshoot,settling" };
+        var goal = new Option<string?>("--goal") { Description = "Pick the best point: min:PROBE.FIGURE or max:PROBE.FIGURE (e.g. min:rx.settling)" };
+        var limit = new Option<string[]>("--limit") { Description = "A bound the best point must meet, e.g. rx.overshoot<10% (repeatable)" };
+        var serial = new Option<bool>("--serial") { Description = "Run the points one at a time on one core (same results)" };
+        var settle = new Option<string>("--settle-band") { Description = "Settling band as a fraction or percentage of the swing", DefaultValueFactory = _ => "5 %" };
+        var outDir = CommonOptions.Out();
+        var json = CommonOptions.Json();
+        var force = CommonOptions.Force();
+        var cmd = new Command("sweep", "Run a grid of scenario variants and tabulate the signal figures")
+        { scenario, vary, figure, goal, limit, serial, settle, outDir, json, force };
+        cmd.SetAction((pr, ct) => Task.FromResult(CommandGuard.Run(pr.InvocationConfiguration.Error, () =>
+        {
+            string path = pr.GetValue(scenario)!;
+            // Everything is read and checked before the first point runs.
+            var axes = (pr.GetValue(vary) ?? []).Select(SweepAxis.Parse).ToArray();
+            var figures = (pr.GetValue(figure) ?? "").Split(',', StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries)
+                .Select(f => Figure(f)).Distinct().ToArray();
+            if (figures.Length == 0) throw new InputException("--figure: give at least one figure, e.g. overshoot,settling");
+            double band = RunCommand.ParseBand(pr.GetValue(settle)!);
+            var s = CommonOptions.Load(path);
+            var probes = s.Probes.Select(p => p.Name).ToArray();
+            var g = pr.GetValue(goal) is { } gt ? SweepGoal.Parse(gt, probes) : null;
+            var limits = (pr.GetValue(limit) ?? []).Select(l => SweepLimit.Parse(l, probes)).ToArray();
+            if (limits.Length > 0 && g is null) throw new InputException("--limit: give --goal too (the limits choose among points for the goal)");
+            var grid = SweepGrid.Build(s, axes, pr.GetValue(force));
+
+            SweepResult result;
+            using (var bar = new ProgressBar(pr.InvocationConfiguration.Error, $"sweep of {grid.Points.Count} points"))
+                result = SweepRunner.Run(grid, new SweepRunOptions { Serial = pr.GetValue(serial), SettleBand = band, Force = pr.GetValue(force), Progress = bar }, ct);
+
+            string dir = CommonOptions.OutputDir(pr.GetValue(outDir), path);
+            using (var output = new OutputFolder(dir))
+            {
+                SweepCsv.Write(result, output.File("sweep.csv"));
+                foreach (string f in figures)
+                {
+                    var chart = SweepPictures.Chart(result, f);
+                    File.WriteAllBytes(output.File($"sweep_{FigureSelector.Stem(f)}.png"), LineChart.RenderPng(chart, 1200, 300 + 300 * result.Probes.Count));
+                }
+                output.Commit();
+            }
+            var o = pr.InvocationConfiguration.Output;
+            if (pr.GetValue(json)) o.WriteLine(RunSummary.Text(SweepReport.Json(result, g, limits, dir)));
+            else Print(o, result, figures, g, limits, dir);
+            return ExitCodes.Ok;
+        })));
+        return cmd;
+    }
+
+    static string Figure(string f)
+    {
+        try { return FigureSelector.Resolve(f); }
+        catch (InputException ex) { throw new InputException("--figure: " + ex.Message); }
+    }
+
+    static void Print(TextWriter o, SweepResult r, string[] figures, SweepGoal? goal, IReadOnlyList<SweepLimit> limits, string dir)
+    {
+        var cols = r.Probes.SelectMany(p => figures.Select(f => new ProbeFigure(p, f))).ToArray();
+        o.WriteLine($"{r.Points.Count} points over {string.Join(" x ", r.Axes.Select(a => $"{a.KeyPath} ({a.Values.Count})"))}");
+        if (r.Points.Count <= MaxPrintedRows)
+        {
+            o.WriteLine("  " + string.Join(" ", r.Axes.Select(a => $"{a.KeyPath,14}").Concat(cols.Select(c => $"{Short(c),16}"))));
+            foreach (var p in r.Points)
+                o.WriteLine("  " + string.Join(" ", p.Values.Select((v, k) => $"{Quantity.Format(v, r.Axes[k].DisplayUnit, 4),14}")
+                    .Concat(cols.Select(c => $"{Show(r.Value(p, c), c.Figure),16}"))));
+        }
+        if (goal is not null)
+        {
+            string within = limits.Count == 0 ? "" : " within " + string.Join(", ", limits.Select(l => l.ToString()));
+            if (r.Best(goal, limits) is { } b)
+            {
+                string at = string.Join(", ", r.Axes.Select((a, k) => $"{a.KeyPath} = {Quantity.Format(b.Values[k], a.DisplayUnit, 4)}"));
+                o.WriteLine($"best by {goal}{within}: point {b.Index}: {at}: {Short(goal.Target)} {Show(r.Value(b, goal.Target), goal.Target.Figure)}"
+                    + string.Concat(limits.Select(l => $", {Short(l.Target)} {Show(r.Value(b, l.Target), l.Target.Figure)}")));
+            }
+            else o.WriteLine($"no point meets {goal}{within}");
+        }
+        o.WriteLine($"wrote {Path.Combine(dir, "sweep.csv")}, " + string.Join(", ", figures.Select(f => $"sweep_{FigureSelector.Stem(f)}.png")));
+    }
+
+    static string Short(ProbeFigure c) => c.Probe + "." + FigureSelector.Stem(c.Figure);
+
+    static string Show(double? v, string figure) => v is not { } x ? "-" : FigureSelector.Unit(figure) switch
+    {
+        "%" => x.ToString("F2", CultureInfo.InvariantCulture) + " %",
+        "" => x.ToString("G4", CultureInfo.InvariantCulture),
+        var u => Quantity.Format(x, u, 4),
+    };
+}

@@ -1,0 +1,121 @@
+using System.CommandLine;
+using System.Globalization;
+using WaveSim.Core;
+using WaveSim.Core.Analysis;
+using WaveSim.Core.Output;
+using WaveSim.Core.Rendering;
+using WaveSim.Core.Terminations;
+using WaveSim.Core.Units;
+
+namespace WaveSim.Cli.Commands;
+
+/// <summary>`wavesim terminations SCENARIO`: compares none, series, parallel, Thevenin and RC terminations on the scenario's net.</summary>
+public static class TerminationsCommand
+{
+    /// <summary>Creates the command.</summary>
+    public static Command Create()
+    {
+        var scenario = CommonOptions.Scenario();
+        var outDir = CommonOptions.Out();
+        var json = CommonOptions.Json();
+        var force = CommonOptions.Force();
+        var series = new Option<string>("--series") { Description = "Resistor series to simulate with: E24 or E96 (both are printed)", DefaultValueFactory = _ => "E96" };
+        var maxOvershoot = new Option<string>("--max-overshoot") { Description = "Largest acceptable overshoot at the receiver", DefaultValueFactory = _ => "10 %" };
+        var maxSettling = new Option<string>("--max-settling") { Description = "Largest acceptable settling time at the receiver", DefaultValueFactory = _ => "5 ns" };
+        var level = new Option<string?>("--thevenin-level") { Description = "Thevenin termination level (default: halfway between the source's low and high)" };
+        var settle = new Option<string>("--settle-band") { Description = "Settling band as a fraction or percentage of the swing", DefaultValueFactory = _ => "5 %" };
+        var serial = new Option<bool>("--serial") { Description = "Run the strategies one at a time" };
+        var cmd = new Command("terminations", "Compare termination strategies on the scenario's net and recommend part values")
+        { scenario, outDir, json, series, maxOvershoot, maxSettling, level, settle, serial, force };
+        cmd.SetAction((pr, ct) => Task.FromResult(CommandGuard.Run(pr.InvocationConfiguration.Error, () =>
+        {
+            string path = pr.GetValue(scenario)!;
+            var options = new TerminationOptions
+            {
+                Series = ParseSeries(pr.GetValue(series)!),
+                MaxOvershootPct = ParseOvershoot(pr.GetValue(maxOvershoot)!),
+                MaxSettlingS = Parse("--max-settling", pr.GetValue(maxSettling)!, Dimension.Time),
+                TheveninLevelV = pr.GetValue(level) is { } lv ? Parse("--thevenin-level", lv, Dimension.Voltage) : null,
+                SettleBand = RunCommand.ParseBand(pr.GetValue(settle)!),
+                Serial = pr.GetValue(serial),
+                Force = pr.GetValue(force),
+            };
+            var s = CommonOptions.Load(path);
+            TerminationStudyResult result;
+            using (var bar = new ProgressBar(pr.InvocationConfiguration.Error, "terminations"))
+                result = TerminationStudy.Run(s, options, bar, ct);
+            string dir = CommonOptions.OutputDir(pr.GetValue(outDir), path);
+            using (var output = new OutputFolder(dir))
+            {
+                TerminationsCsv.Write(result, output.File("terminations.csv"));
+                File.WriteAllBytes(output.File("terminations.png"), LineChart.RenderPng(TerminationPictures.Receiver(result), 1200, 650));
+                output.Commit();
+            }
+            var o = pr.InvocationConfiguration.Output;
+            if (pr.GetValue(json)) o.WriteLine(RunSummary.Text(TerminationReport.Json(result, dir)));
+            else Print(o, result, dir);
+            return ExitCodes.Ok;
+        })));
+        return cmd;
+    }
+
+    static PreferredSeries ParseSeries(string text) => text.Trim().ToUpperInvariant() switch
+    {
+        "E24" => PreferredSeries.E24,
+        "E96" => PreferredSeries.E96,
+        _ => throw new InputException($"--series: expected E24 or E96, got '{text}'"),
+    };
+
+    static double ParseOvershoot(string text)
+    {
+        var (v, dim) = Wrap("--max-overshoot", () => Quantity.ParseAny(text, Dimension.Percent, Dimension.Number));
+        double pct = dim == Dimension.Percent ? v * 100 : v;
+        if (!(pct >= 0)) throw new InputException($"--max-overshoot: expected a percentage of the swing such as 10 %, got '{text}'");
+        return pct;
+    }
+
+    static double Parse(string option, string text, Dimension d)
+    {
+        double v = Wrap(option, () => Quantity.Parse(text, d));
+        if (d == Dimension.Time && !(v > 0)) throw new InputException($"{option}: expected a time greater than zero, got '{text}'");
+        return v;
+    }
+
+    static T Wrap<T>(string option, Func<T> f)
+    {
+        try { return f(); }
+        catch (UnitException ex) { throw new InputException($"{option}: {ex.Message}"); }
+    }
+
+    static void Print(TextWriter o, TerminationStudyResult r, string dir)
+    {
+        o.WriteLine($"Z0 {Quantity.Format(r.Z0, "Ω", 3)} (first segment), line delay {Quantity.Format(r.LineDelayS, "s", 3)}, receiver '{r.ReceiverProbe}'; limits: overshoot {r.Options.MaxOvershootPct:G3} %, settling {Quantity.Format(r.Options.MaxSettlingS, "s", 3)}");
+        bool eyes = r.Outcomes.Any(x => x.ReceiverEye is not null);
+        string eyeHead = eyes ? $" {"eye height",10} {"eye width",9}" : "";
+        o.WriteLine($"  {"strategy",-9} {"overshoot",9} {"undershoot",10} {"settling",9} {"crossings",9} {"delay",9}{eyeHead} {"P high",9} {"P low",9} {"P avg",9}  verdict");
+        foreach (var x in r.Outcomes)
+        {
+            if (x.Receiver is not { } f) { o.WriteLine($"  {x.Design.Name,-9} not applicable: {x.Design.Note}"); continue; }
+            var e = x.ReceiverEye?.Diagram?.Figures;
+            string eye = !eyes ? "" : e is null ? $" {"-",10} {"-",9}"
+                : e.HasThresholds ? $" {V(e.EyeHeightThresholdsV),10} {T(e.EyeWidthThresholdsS),9}" : $" {V(e.EyeHeightV),10} {T(e.EyeWidthS),9}";
+            o.WriteLine($"  {x.Design.Name,-9} {Pct(f.OvershootPct),9} {Pct(f.UndershootPct),10} {T(f.SettlingS),9} {f.ThresholdCrossings,9} {T(f.Delay50S),9}{eye} {W(x.PowerHighW),9} {W(x.PowerLowW),9} {W(x.PowerAverageW),9}  {x.Verdict}");
+        }
+        if (eyes) o.WriteLine("  (bit pattern: the verdict is judged on the receiver's eye" + (r.Outcomes.Any(x => x.ReceiverEye?.Thresholds is not null) ? ", measured against the receiver thresholds)" : ")"));
+        o.WriteLine($"parts (simulated with {r.Options.Series}; computed value, nearest E24, nearest E96; capacitors: next E24 value up):");
+        foreach (var x in r.Outcomes.Where(x => x.Design.Parts.Count > 0))
+        {
+            string parts = string.Join("; ", x.Design.Parts.Select(p => p.E96 is { } e96
+                ? $"{p.Label} {Quantity.Format(p.Ideal, p.Unit, 4)} -> E24 {Quantity.Format(p.E24, p.Unit, 3)}, E96 {Quantity.Format(e96, p.Unit, 3)}"
+                : $"{p.Label} {Quantity.Format(p.Ideal, p.Unit, 4)} -> {Quantity.Format(p.E24, p.Unit, 3)}"));
+            if (x.Design.Kind == TerminationKind.Thevenin) parts += $"; level {Quantity.Format(x.Design.TheveninV, "V", 3)}";
+            o.WriteLine($"  {x.Design.Name,-9} {parts}" + (x.Design.Note is { } n && x.Result is not null ? $" ({n})" : ""));
+        }
+        o.WriteLine($"wrote {Path.Combine(dir, "terminations.csv")}, terminations.png");
+    }
+
+    static string T(double? t) => t is { } x ? Quantity.Format(x, "s", 3) : "-";
+    static string V(double? v) => v is { } x ? Quantity.Format(x, "V", 3) : "-";
+    static string W(double? w) => w is { } x ? Quantity.Format(x, "W", 3) : "-";
+    static string Pct(double? p) => p is { } x ? x.ToString("F1", CultureInfo.InvariantCulture) + " %" : "-";
+}

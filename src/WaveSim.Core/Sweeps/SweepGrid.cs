@@ -1,0 +1,83 @@
+using WaveSim.Core.Model;
+using WaveSim.Core.Scenarios;
+
+namespace WaveSim.Core.Sweeps;
+
+/// <summary>One point of a sweep: its index, the values of the varied keys and the variant scenario.</summary>
+/// <param name="Index">Position in sweep order (the first axis changes fastest).</param>
+/// <param name="Values">One SI value per axis, in axis order.</param>
+/// <param name="Scenario">The scenario with those values written in, read back like a file.</param>
+public sealed record SweepPoint(int Index, IReadOnlyList<double> Values, Scenario Scenario);
+
+/// <summary>
+/// The grid of variants of a sweep: every combination of the axes' values, made with <see cref="ScenarioEditor.With"/>
+/// and checked (keys, units, plan limits) before anything is run.
+/// </summary>
+public sealed class SweepGrid
+{
+    /// <summary>Largest number of points a sweep may hold.</summary>
+    public const int MaxPoints = 100_000;
+
+    /// <summary>The varied keys, in the order given; the first changes fastest.</summary>
+    public IReadOnlyList<SweepAxis> Axes { get; }
+    /// <summary>Every point, in sweep order.</summary>
+    public IReadOnlyList<SweepPoint> Points { get; }
+    /// <summary>The probe names (the same in every variant).</summary>
+    public IReadOnlyList<string> Probes { get; }
+
+    SweepGrid(IReadOnlyList<SweepAxis> axes, IReadOnlyList<SweepPoint> points)
+    {
+        Axes = axes; Points = points;
+        Probes = points[0].Scenario.Probes.Select(p => p.Name).ToArray();
+    }
+
+    /// <summary>Builds and validates every variant of <paramref name="scenario"/>.</summary>
+    /// <param name="scenario">A scenario read from text (its <see cref="Scenario.SourceText"/> is edited).</param>
+    /// <param name="axes">One or more axes with distinct keys.</param>
+    /// <param name="force">Accept points whose plan exceeds the memory or cell-update limits.</param>
+    /// <exception cref="InputException">A key does not exist, a value has the wrong unit or is out of range, or a plan is too large.</exception>
+    public static SweepGrid Build(Scenario scenario, IReadOnlyList<SweepAxis> axes, bool force = false)
+    {
+        if (axes.Count == 0) throw new InputException("a sweep needs at least one --vary KEY=RANGE");
+        var dup = axes.GroupBy(a => a.KeyPath).FirstOrDefault(g => g.Count() > 1);
+        if (dup is not null) throw new InputException($"--vary: key '{dup.Key}' is varied twice");
+        long total = axes.Aggregate(1L, (n, a) => n * a.Values.Count);
+        if (total > MaxPoints) throw new InputException($"--vary: the grid has {total} points (limit {MaxPoints}); use fewer values");
+
+        // Each key alone at its first value: a missing key or a wrong unit is reported against the option that caused it.
+        foreach (var a in axes)
+        {
+            try { ScenarioEditor.With(scenario, [(a.KeyPath, a.Text(0))]); }
+            catch (InputException ex) { throw new InputException($"--vary {a.KeyPath}: {ex.Message}"); }
+        }
+        var points = new SweepPoint[total];
+        for (int i = 0; i < total; i++)
+        {
+            var idx = Indices(axes, i);
+            var changes = axes.Select((a, k) => (a.KeyPath, a.Text(idx[k]))).ToArray();
+            Scenario v;
+            try { v = ScenarioEditor.With(scenario, changes); }
+            catch (InputException ex)
+            { throw new InputException($"sweep point {i} ({string.Join(", ", changes.Select(c => c.KeyPath + "=" + c.Item2))}): {ex.Message}"); }
+            if (!force)
+            {
+                try { Simulate.CheckLimits(Simulate.Plan(v)); }
+                catch (InputException ex) { throw new InputException($"sweep point {i}: {ex.Message}"); }
+            }
+            points[i] = new SweepPoint(i, axes.Select((a, k) => a.Values[idx[k]]).ToArray(), v);
+        }
+        return new SweepGrid(axes, points);
+    }
+
+    /// <summary>The value index on each axis of point <paramref name="index"/> (first axis fastest).</summary>
+    public static int[] Indices(IReadOnlyList<SweepAxis> axes, int index)
+    {
+        var idx = new int[axes.Count];
+        for (int k = 0; k < axes.Count; k++)
+        {
+            idx[k] = index % axes[k].Values.Count;
+            index /= axes[k].Values.Count;
+        }
+        return idx;
+    }
+}

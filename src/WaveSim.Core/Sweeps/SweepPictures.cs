@@ -1,0 +1,42 @@
+using WaveSim.Core.Rendering;
+using WaveSim.Core.Units;
+
+namespace WaveSim.Core.Sweeps;
+
+/// <summary>Charts of a sweep: one figure against the first varied key, one panel per probe, one line per value of the other keys.</summary>
+public static class SweepPictures
+{
+    /// <summary>The chart of <paramref name="figure"/> (a <see cref="Analysis.SignalFigures.FigureNames"/> entry); a figure that does not apply leaves a gap.</summary>
+    public static ChartSpec Chart(SweepResult r, string figure)
+    {
+        var first = r.Axes[0];
+        var groups = r.Points.GroupBy(p => string.Join("|", p.Values.Skip(1))).ToList();
+        var panels = new List<ChartPanel>();
+        foreach (string probe in r.Probes)
+        {
+            var target = new ProbeFigure(probe, figure);
+            var series = groups.Select(g =>
+            {
+                var pts = g.OrderBy(p => p.Values[0]).ToArray();
+                string name = r.Axes.Count == 1 ? probe
+                    : string.Join(", ", r.Axes.Skip(1).Select((a, k) => a.KeyPath + " " + Quantity.Format(pts[0].Values[k + 1], a.DisplayUnit, 3)));
+                return new Rendering.Series(name, pts.Select(p => p.Values[0]).ToArray(), pts.Select(p => r.Value(p, target) ?? double.NaN).ToArray());
+            }).ToList();
+            panels.Add(new ChartPanel($"{probe} {FigureSelector.Stem(figure).Replace('_', ' ')}", FigureSelector.Unit(figure), series)
+            {
+                Markers = series.SelectMany(IsolatedPoints).ToList(),
+            });
+        }
+        return new ChartSpec($"{FigureSelector.Stem(figure).Replace('_', ' ')} against {first.KeyPath}", first.KeyPath, first.DisplayUnit, panels);
+    }
+
+    /// <summary>Points whose neighbours are gaps (the figure does not apply there): a line cannot show them, so they get a ring.</summary>
+    static IEnumerable<Marker> IsolatedPoints(Rendering.Series s)
+    {
+        for (int i = 0; i < s.Y.Length; i++)
+        {
+            bool before = i > 0 && double.IsFinite(s.Y[i - 1]), after = i < s.Y.Length - 1 && double.IsFinite(s.Y[i + 1]);
+            if (double.IsFinite(s.Y[i]) && !before && !after) yield return new Marker(s.X[i], s.Y[i], s.Name);
+        }
+    }
+}

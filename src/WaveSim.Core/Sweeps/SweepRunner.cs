@@ -1,0 +1,59 @@
+using System.Runtime.ExceptionServices;
+using WaveSim.Core.Analysis;
+using WaveSim.Core.Output;
+using WaveSim.Core.Solver;
+
+namespace WaveSim.Core.Sweeps;
+
+/// <summary>Settings of a sweep run.</summary>
+public sealed record SweepRunOptions
+{
+    /// <summary>Run the points one after another on one thread (default false: all cores). Results are identical either way.</summary>
+    public bool Serial { get; init; }
+    /// <summary>Settling band as a fraction of the swing (default 0.05).</summary>
+    public double SettleBand { get; init; } = SignalQualityOptions.DefaultSettleBand;
+    /// <summary>Run points beyond the memory or cell-update limits.</summary>
+    public bool Force { get; init; }
+    /// <summary>Receives the fraction of points done, 0..1.</summary>
+    public IProgress<double>? Progress { get; init; }
+}
+
+/// <summary>Runs every point of a <see cref="SweepGrid"/> through <see cref="Simulate.Run"/> and keeps each probe's signal figures.</summary>
+public static class SweepRunner
+{
+    /// <summary>Runs the grid, in parallel on all cores unless <see cref="SweepRunOptions.Serial"/>.</summary>
+    /// <remarks>Each point is an independent run whose result is stored at its own index, so the order and values do not depend on scheduling.</remarks>
+    /// <exception cref="OperationCanceledException">The token was cancelled.</exception>
+    /// <exception cref="NumericalException">A point's solution broke down.</exception>
+    public static SweepResult Run(SweepGrid grid, SweepRunOptions? options = null, CancellationToken ct = default)
+    {
+        options ??= new SweepRunOptions();
+        var results = new SweepPointResult[grid.Points.Count];
+        var sim = new SimulationOptions { Force = options.Force };
+        int done = 0;
+        var gate = new object();
+        ParallelFor(grid.Points.Count, options.Serial, ct, i =>
+        {
+            var p = grid.Points[i];
+            var r = Simulate.Run(p.Scenario, sim, ct);
+            var figures = RunSummary.Figures(r, options.SettleBand).Select(f => f.Figures).ToArray();
+            results[i] = new SweepPointResult(p.Index, p.Values, figures);
+            int n = Interlocked.Increment(ref done);
+            if (options.Progress is { } progress) lock (gate) progress.Report((double)n / results.Length);
+        });
+        return new SweepResult(grid.Axes, grid.Probes, results);
+    }
+
+    /// <summary>Parallel.For over [0, count) on all cores (or one), rethrowing a body's own exception rather than an AggregateException.</summary>
+    internal static void ParallelFor(int count, bool serial, CancellationToken ct, Action<int> body)
+    {
+        var po = new ParallelOptions { MaxDegreeOfParallelism = serial ? 1 : Environment.ProcessorCount, CancellationToken = ct };
+        try { Parallel.For(0, count, po, body); }
+        catch (AggregateException ae)
+        {
+            var inner = ae.Flatten().InnerExceptions;
+            var first = inner.FirstOrDefault(e => e is not OperationCanceledException) ?? inner[0];
+            ExceptionDispatchInfo.Capture(first).Throw();
+        }
+    }
+}

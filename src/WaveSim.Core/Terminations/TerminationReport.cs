@@ -1,0 +1,48 @@
+using System.Text.Json.Nodes;
+
+namespace WaveSim.Core.Terminations;
+
+/// <summary>The JSON form of a termination study, as printed with --json (SI units).</summary>
+public static class TerminationReport
+{
+    /// <summary>The whole study: the line, the limits, and per strategy its parts, figures, power and verdict.</summary>
+    public static JsonObject Json(TerminationStudyResult r, string? folder)
+    {
+        var strategies = new JsonArray();
+        foreach (var o in r.Outcomes)
+        {
+            var probes = new JsonObject();
+            for (int i = 0; i < o.Figures.Count; i++) probes[r.Probes[i]] = o.Figures[i].ToJsonObject();
+            strategies.Add(new JsonObject
+            {
+                ["strategy"] = o.Design.Name,
+                ["applies"] = o.Result is not null,
+                ["note"] = o.Design.Note,
+                ["parts"] = new JsonArray(o.Design.Parts.Select(p => (JsonNode)new JsonObject
+                {
+                    ["name"] = p.Column, ["label"] = p.Label, ["computed"] = p.Ideal, ["e24"] = p.E24, ["e96"] = p.E96, ["simulated"] = p.Used,
+                }).ToArray()),
+                ["thevenin_level_V"] = o.Design.Kind == TerminationKind.Thevenin && o.Result is not null ? o.Design.TheveninV : null,
+                ["receiver"] = o.Receiver?.ToJsonObject(),
+                ["receiver_eye"] = o.ReceiverEye is { } eye ? Output.RunEyes.Json(eye) : null,
+                ["probes"] = probes,
+                ["power_high_W"] = o.PowerHighW,
+                ["power_low_W"] = o.PowerLowW,
+                ["power_avg_W"] = o.PowerAverageW,
+                ["meets_limits"] = o.MeetsLimits,
+                ["verdict"] = o.Verdict,
+            });
+        }
+        return new JsonObject
+        {
+            ["z0_ohm"] = r.Z0,
+            ["line_delay_s"] = r.LineDelayS,
+            ["receiver_probe"] = r.ReceiverProbe,
+            ["resistor_series"] = r.Options.Series.ToString(),
+            ["max_overshoot_pct"] = r.Options.MaxOvershootPct,
+            ["max_settling_s"] = r.Options.MaxSettlingS,
+            ["folder"] = folder,
+            ["strategies"] = strategies,
+        };
+    }
+}

@@ -1,0 +1,90 @@
+using WaveSim.Core.Analysis;
+using WaveSim.Core.Model;
+using WaveSim.Core.Output;
+using WaveSim.Core.Solver;
+using WaveSim.Core.Sweeps;
+using WaveSim.Core.Units;
+
+namespace WaveSim.Core.Terminations;
+
+/// <summary>
+/// Compares the termination strategies on a net: sizes each (<see cref="TerminationPlanner"/>), runs every variant through
+/// <see cref="Simulate.Run"/> (in parallel), measures the receiver and the static power, and checks the limits: overshoot and
+/// settling of the first edge, or for a bit-pattern source the receiver's eye (open beyond the thresholds when given).
+/// </summary>
+public static class TerminationStudy
+{
+    /// <summary>Name of the probe added when the scenario has none at the main line's load.</summary>
+    public const string AddedProbe = "load";
+
+    /// <summary>Runs the study.</summary>
+    /// <exception cref="InputException">The net cannot be terminated (shorted load) or an option is out of range.</exception>
+    /// <exception cref="OperationCanceledException">The token was cancelled.</exception>
+    public static TerminationStudyResult Run(Scenario scenario, TerminationOptions? options = null, IProgress<double>? progress = null, CancellationToken ct = default)
+    {
+        options ??= new TerminationOptions();
+        if (!(options.SettleBand > 0 && options.SettleBand < 0.5)) throw new InputException($"settle band {options.SettleBand} must lie between 0 and 0.5");
+        var (s, receiver) = WithReceiverProbe(scenario);
+        var designs = TerminationPlanner.Design(s, options);
+        var sim = new SimulationOptions { Force = options.Force };
+        if (!options.Force)
+            foreach (var d in designs.Where(d => d.Variant is not null)) Simulate.CheckLimits(Simulate.Plan(d.Variant!));
+        var outcomes = new TerminationOutcome[designs.Count];
+        int done = 0;
+        var gate = new object();
+        SweepRunner.ParallelFor(designs.Count, options.Serial, ct, i =>
+        {
+            outcomes[i] = Evaluate(designs[i], receiver, options, sim, ct);
+            int n = Interlocked.Increment(ref done);
+            if (progress is not null) lock (gate) progress.Report((double)n / designs.Count);
+        });
+        return new TerminationStudyResult(designs[0].Variant!.Line.OfType<Segment>().First().Z0, TerminationPlanner.LineDelay(s),
+            s.Probes[receiver].Name, s.Probes.Select(p => p.Name).ToArray(), options, outcomes);
+    }
+
+    /// <summary>The scenario with a probe at the main line's load (the first such probe, else the first at any load, else one added) and its index.</summary>
+    public static (Scenario Scenario, int Receiver) WithReceiverProbe(Scenario s)
+    {
+        int i = s.Probes.ToList().FindIndex(p => p.Anchor == ProbeAnchor.Load && p.BranchPath.Count == 0);
+        if (i < 0) i = s.Probes.ToList().FindIndex(p => p.Anchor == ProbeAnchor.Load);
+        if (i >= 0) return (s, i);
+        string name = AddedProbe;
+        while (s.Probes.Any(p => p.Name == name)) name += "_";
+        return (s with { Probes = [.. s.Probes, new ProbeSpec(name, [], ProbeAnchor.Load)] }, s.Probes.Count);
+    }
+
+    static TerminationOutcome Evaluate(TerminationDesign d, int receiver, TerminationOptions o, SimulationOptions sim, CancellationToken ct)
+    {
+        if (d.Variant is null) return new TerminationOutcome(d, null, [], null, null, null, []);
+        var result = Simulate.Run(d.Variant, sim, ct);
+        var figures = RunSummary.Figures(result, o.SettleBand).Select(f => f.Figures).ToArray();
+        var rx = figures[receiver];
+        var src = d.Variant.Source;
+        var (lo, hi) = (TerminationPower.At(d, src.Low), TerminationPower.At(d, src.High));
+        if (RunEyes.Applies(d.Variant))
+        {
+            // A bit stream never settles: judge the receiver's eye instead of the first edge.
+            var eye = RunEyes.Compute(result)[receiver];
+            return new TerminationOutcome(d, result, figures, rx, lo, hi, EyeFailures(eye)) { ReceiverEye = eye };
+        }
+        var failures = new List<string>();
+        if (rx.OvershootPct is { } os && os > o.MaxOvershootPct)
+            failures.Add($"overshoot {os:F1} % > {o.MaxOvershootPct:G3} %");
+        if (rx.SettlingS is not { } st) failures.Add("does not settle in the record");
+        else if (st > o.MaxSettlingS) failures.Add($"settling {Quantity.Format(st, "s", 3)} > {Quantity.Format(o.MaxSettlingS, "s", 3)}");
+        return new TerminationOutcome(d, result, figures, rx, lo, hi, failures);
+    }
+
+    /// <summary>With thresholds, the eye must open beyond both (height and width against them above 0); without, at the mid level.</summary>
+    static IReadOnlyList<string> EyeFailures(ProbeEye eye)
+    {
+        if (eye.Diagram is not { } diagram) return ["no eye: " + eye.Note];
+        var f = diagram.Figures;
+        var failures = new List<string>();
+        double? height = f.HasThresholds ? f.EyeHeightThresholdsV : f.EyeHeightV, width = f.HasThresholds ? f.EyeWidthThresholdsS : f.EyeWidthS;
+        string against = f.HasThresholds ? " against the thresholds" : "";
+        if (!(height > 0)) failures.Add($"eye closed{against} (height {(height is { } h ? Quantity.Format(h, "V", 3) : "-")})");
+        else if (!(width > 0)) failures.Add($"eye closed{against} (no width)");
+        return failures;
+    }
+}

@@ -1,0 +1,54 @@
+using System.Globalization;
+using CsvHelper;
+using WaveSim.Core.Analysis;
+
+namespace WaveSim.Core.Terminations;
+
+/// <summary>
+/// Writes terminations.csv: one row per strategy; <c>strategy</c>, the simulated part values in SI (series_r_ohm,
+/// parallel_r_ohm, thevenin_r1_ohm, thevenin_r2_ohm, rc_r_ohm, rc_c_F; empty for other strategies), <c>&lt;probe&gt;.&lt;figure&gt;</c>
+/// for every probe and figure, then power_high_W, power_low_W, power_avg_W. Invariant culture, round-trip doubles;
+/// a strategy that does not apply has only its name.
+/// </summary>
+public static class TerminationsCsv
+{
+    /// <summary>The part columns, in output order.</summary>
+    public static IReadOnlyList<string> PartColumns { get; } =
+        ["series_r_ohm", "parallel_r_ohm", "thevenin_r1_ohm", "thevenin_r2_ohm", "rc_r_ohm", "rc_c_F"];
+
+    /// <summary>The header row.</summary>
+    public static IReadOnlyList<string> Columns(TerminationStudyResult r) =>
+        new[] { "strategy" }.Concat(PartColumns)
+            .Concat(r.Probes.SelectMany(p => SignalFigures.FigureNames.Select(f => p + "." + f)))
+            .Concat(["power_high_W", "power_low_W", "power_avg_W"]).ToArray();
+
+    /// <summary>Writes the CSV to <paramref name="writer"/>.</summary>
+    public static void Write(TerminationStudyResult r, TextWriter writer)
+    {
+        using var csv = new CsvWriter(writer, CultureInfo.InvariantCulture, leaveOpen: true);
+        foreach (string c in Columns(r)) csv.WriteField(c);
+        csv.NextRecord();
+        foreach (var o in r.Outcomes)
+        {
+            csv.WriteField(o.Design.Name);
+            foreach (string col in PartColumns)
+                csv.WriteField(o.Design.Parts.FirstOrDefault(p => p.Column == col) is { } part ? Cell(part.Used) : "");
+            for (int i = 0; i < r.Probes.Count; i++)
+                foreach (string f in SignalFigures.FigureNames)
+                    csv.WriteField(o.Figures.Count > i && o.Figures[i].GetNumber(f) is { } x ? Cell(x) : "");
+            csv.WriteField(Cell(o.PowerHighW));
+            csv.WriteField(Cell(o.PowerLowW));
+            csv.WriteField(Cell(o.PowerAverageW));
+            csv.NextRecord();
+        }
+    }
+
+    /// <summary>Writes the CSV to the file <paramref name="path"/>.</summary>
+    public static void Write(TerminationStudyResult r, string path)
+    {
+        using var w = new StreamWriter(path);
+        Write(r, w);
+    }
+
+    static string Cell(double? v) => v is { } x ? (x + 0.0).ToString("R", CultureInfo.InvariantCulture) : ""; // + 0.0 turns -0 into 0
+}
