@@ -31,7 +31,7 @@ public static class CommandGuard
             error.WriteLine("error: " + OneLine(ex.Message));
             return ExitCodes.BadInput;
         }
-        catch (Exception ex) when (ex is ArgumentException or InvalidOperationException or ArithmeticException)
+        catch (Exception ex) when (ex is ArgumentException or InvalidOperationException or ArithmeticException && Environment.GetEnvironmentVariable("WAVESIM_DEBUG") is null)
         {
             // A check deeper in the library caught something the input checks missed: still one line, no stack trace.
             error.WriteLine("error: " + OneLine(ex.Message));

@@ -11,6 +11,9 @@ internal sealed class CliRunner : IDisposable
     /// <summary>The temporary folder.</summary>
     public string Dir { get; }
 
+    /// <summary>A path inside the folder.</summary>
+    public string PathOf(string name) => Path.Combine(Dir, name);
+
     /// <summary>Writes a file into the folder and returns its path.</summary>
     public string Write(string name, string text)
     {

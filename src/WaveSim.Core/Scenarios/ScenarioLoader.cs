@@ -49,6 +49,8 @@ public static class ScenarioLoader
         try { stream.Load(new StringReader(yaml)); }
         catch (YamlException ex)
         { throw new ScenarioException($"{file}:{ex.Start.Line}:{ex.Start.Column}: not valid YAML: {FirstLine(ex.InnerException?.Message ?? ex.Message)}"); }
+        catch (InvalidOperationException)
+        { throw new ScenarioException($"{file}: not valid YAML: the parser stopped inside an unbalanced bracket, brace or quote"); }
         if (stream.Documents.Count == 0 || stream.Documents[0].RootNode is not YamlMappingNode root)
             throw new ScenarioException($"{file}:1:1: a scenario is a mapping of keys (title, source, line, load, probes, simulation)");
 

@@ -17,8 +17,9 @@ simulation: { duration: 3 ns, output_step: 10 ps }
     [Fact]
     public void Run_writes_probes_csv_summary_and_pictures()
     {
-        string dir = CliRunner.TempDir();
-        string scenario = CliRunner.Write(dir, "s.yaml", Good);
+        using var cli = new CliRunner();
+        string dir = cli.Dir;
+        string scenario = cli.Write("s.yaml", Good);
         string outDir = Path.Combine(dir, "out");
         var (code, stdout, err) = CliRunner.Run("run", scenario, "--out", outDir, "--frames", "3", "--frame-size", "320x240", "--svg");
         Assert.True(code == 0, err);
@@ -40,9 +41,10 @@ simulation: { duration: 3 ns, output_step: 10 ps }
     public void Frequency_domain_check_agrees_within_one_percent_and_writes_the_frequency_outputs()
     {
         // Independent cross-check: frequency-domain ABCD cascade vs time-domain leapfrog (two methods, one scenario).
-        string dir = CliRunner.TempDir();
+        using var cli = new CliRunner();
+        string dir = cli.Dir;
         string outDir = Path.Combine(dir, "out");
-        var (code, _, err) = CliRunner.Run("run", CliRunner.Write(dir, "s.yaml", Good.Replace("{ r: 50 ohm }", "{ r: 75 ohm, c: 1 pF }")), "--out", outDir, "--check-frequency-domain");
+        var (code, _, err) = CliRunner.Run("run", cli.Write("s.yaml", Good.Replace("{ r: 50 ohm }", "{ r: 75 ohm, c: 1 pF }")), "--out", outDir, "--check-frequency-domain");
         Assert.True(code == 0, err);
         var summary = JsonNode.Parse(File.ReadAllText(Path.Combine(outDir, "summary.json")))!;
         foreach (var p in new[] { "near", "far" })
@@ -54,8 +56,9 @@ simulation: { duration: 3 ns, output_step: 10 ps }
     [Fact]
     public void Check_prints_cells_and_Courant_numbers_without_running()
     {
-        string dir = CliRunner.TempDir();
-        var (code, stdout, _) = CliRunner.Run("check", CliRunner.Write(dir, "s.yaml", Good), "--json");
+        using var cli = new CliRunner();
+        string dir = cli.Dir;
+        var (code, stdout, _) = CliRunner.Run("check", cli.Write("s.yaml", Good), "--json");
         Assert.Equal(0, code);
         var plan = JsonNode.Parse(stdout)!;
         // 0.5 ns delay at resolution 20 over a 100 ps rise: dt = 5 ps → 100 cells, Courant 1 (whole steps).
@@ -80,8 +83,9 @@ simulation: { duration: 3 ns, output_step: 10 ps }
     [InlineData("{ name: near, at: source }, ", "{ name: far, at: source }, ", "used twice")]
     public void A_bad_scenario_gets_one_line_naming_file_line_and_key_and_writes_nothing(string find, string replace, string fragment)
     {
-        string dir = CliRunner.TempDir();
-        string scenario = CliRunner.Write(dir, "bad.yaml", Good.Replace(find, replace));
+        using var cli = new CliRunner();
+        string dir = cli.Dir;
+        string scenario = cli.Write("bad.yaml", Good.Replace(find, replace));
         string outDir = Path.Combine(dir, "out");
         var (code, stdout, err) = CliRunner.Run("run", scenario, "--out", outDir);
         Assert.Equal(2, code);
@@ -106,10 +110,11 @@ simulation: { duration: 3 ns, output_step: 10 ps }
     [Fact]
     public void A_branch_name_that_is_not_an_identifier_is_refused()
     {
-        string dir = CliRunner.TempDir();
+        using var cli = new CliRunner();
+        string dir = cli.Dir;
         string yaml = Good.Replace("line: [ { segment: { length: 100 mm, z0: 50 ohm, delay: 5 ns/m } } ]",
             "line: [ { segment: { length: 100 mm, z0: 50 ohm, delay: 5 ns/m } }, { branch: { name: 'a/b', line: [ { segment: { length: 1 mm, z0: 50 ohm, delay: 5 ns/m } } ] } } ]");
-        var (code, _, err) = CliRunner.Run("run", CliRunner.Write(dir, "b.yaml", yaml), "--out", Path.Combine(dir, "o"));
+        var (code, _, err) = CliRunner.Run("run", cli.Write("b.yaml", yaml), "--out", Path.Combine(dir, "o"));
         Assert.Equal(2, code);
         Assert.Contains("'a/b' is not a name", err);
     }

@@ -20,7 +20,7 @@ simulation: { duration: 4 ns, resolution: 5 }
     [InlineData("compare", "t,v\n0,0.1\n", "fewer than two samples")]
     public void A_bad_capture_is_one_error_line_with_exit_code_2_and_no_output(string command, string content, string fragment)
     {
-        using var run = new CliRun();
+        using var run = new CliRunner();
         string scenario = run.Write("s.yaml", Scenario);
         string capture = run.Write("bad.csv", content);
         string outDir = run.PathOf("out");
@@ -31,7 +31,7 @@ simulation: { duration: 4 ns, resolution: 5 }
             _ => ["compare", scenario, "--capture", capture, "--probe", "rx", "--out", outDir],
         };
 
-        var (code, output, err) = CliRun.Invoke(args);
+        var (code, output, err) = CliRunner.Run(args);
 
         Assert.Equal(2, code);
         Assert.Equal("", output);

@@ -23,7 +23,7 @@ simulation: { duration: 10 ns, output_step: 10 ps, resolution: 10 }
         // Known answer: a copy of the simulation shifted by 3.217 ns plus seeded Gaussian noise. Once aligned, the
         // residual is the noise itself, so its RMS must equal the noise's RMS (definition of RMS); 10 % allows for the
         // alignment error and interpolation (tolerance: common practice, no source). One sample = 10 ps.
-        using var run = new CliRun();
+        using var run = new CliRunner();
         string scenario = run.Write("board.yaml", Scenario);
         var sim = TestScenarios.Run(Scenario);
         double[] v = sim.Probe("rx").Volts;
@@ -37,7 +37,7 @@ simulation: { duration: 10 ns, output_step: 10 ps, resolution: 10 }
         string capture = run.Write("scope.csv", text.ToString());
         string outDir = run.PathOf("cmp");
 
-        var (code, output, err) = CliRun.Invoke("compare", scenario, "--capture", capture, "--probe", "rx",
+        var (code, output, err) = CliRunner.Run("compare", scenario, "--capture", capture, "--probe", "rx",
             "--time-col", "time_ns", "--volt-col", "ch1_V", "--time-unit", "ns", "--out", outDir, "--json");
 
         Assert.True(code == 0, err);

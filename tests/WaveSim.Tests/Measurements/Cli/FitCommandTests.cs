@@ -25,7 +25,7 @@ simulation: { duration: 10 ns, output_step: 10 ps, resolution: 10 }
         // Known-answer test of an estimator: the capture is the simulation with z0 = 50 ohm, delay = 1 ns, C = 2 pF plus seeded
         // 5 mV noise and a 1.234 ns shift of the time axis; the start is 30 % off each (common practice for testing a fit,
         // no source). The budget bound is ours: 3 values and an offset need a few Jacobians of 4 runs each.
-        using var run = new CliRun();
+        using var run = new CliRunner();
         var sim = TestScenarios.Run(Truth);
         double[] v = sim.Probe("rx").Volts;
         double[] noise = SyntheticCapture.Noise(v.Length, 0.005, seed: 5);
@@ -38,7 +38,7 @@ simulation: { duration: 10 ns, output_step: 10 ps, resolution: 10 }
         string scenario = run.Write("start.yaml", start);
         string outDir = run.PathOf("fit");
 
-        var (code, output, err) = CliRun.Invoke("fit", scenario, "--capture", capture, "--probe", "rx",
+        var (code, output, err) = CliRunner.Run("fit", scenario, "--capture", capture, "--probe", "rx",
             "--free", "line[0].segment.z0", "--free", "line[0].segment.delay", "--free", "load.c", "--out", outDir, "--json");
 
         Assert.True(code == 0, err);

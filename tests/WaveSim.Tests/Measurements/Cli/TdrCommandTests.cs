@@ -28,7 +28,7 @@ simulation: { duration: 5 ns, resolution: 10 }
         // Layer peeling (Bruckstein and Kailath, SIAM Review 29(3), 1987) with Z = Z0(1+ρ)/(1-ρ), distance v·t/2 and
         // C = -2A/Z0 (CHECKS.md section 11). The capture is the solver's port voltage with 1 mV of seeded noise, written
         // as an instrument export would be; tolerances 1 ohm, 10 % on C, 3 mm on positions (common practice, no source).
-        using var run = new CliRun();
+        using var run = new CliRunner();
         string scenario = run.Write("line.yaml", Line);
         var s = ScenarioLoader.Parse(Line, "line.yaml");
         var trace = Reflectometer.Simulate(s, 35e-12, 50);
@@ -40,7 +40,7 @@ simulation: { duration: 5 ns, resolution: 10 }
         string capture = run.Write("trace.csv", text.ToString());
         string found = run.PathOf("found.yaml");
 
-        var (code, output, err) = CliRun.Invoke("tdr", scenario, "--capture", capture, "--to-scenario", found, "--out", run.PathOf("tdr"), "--json");
+        var (code, output, err) = CliRunner.Run("tdr", scenario, "--capture", capture, "--to-scenario", found, "--out", run.PathOf("tdr"), "--json");
 
         Assert.True(code == 0, err);
         var root = JsonDocument.Parse(output).RootElement;
@@ -63,7 +63,7 @@ simulation: { duration: 5 ns, resolution: 10 }
         var segs = written.Line.OfType<Segment>().ToList();
         Assert.Contains(written.Line, e => e is Shunt { Parts.C: > 0.9e-12 and < 1.1e-12 });
         Assert.All(segs, g => Assert.InRange(g.Velocity, 0.999 * 2e8, 1.001 * 2e8));
-        var (runCode, _, runErr) = CliRun.Invoke("run", found, "--out", run.PathOf("rerun"));
+        var (runCode, _, runErr) = CliRunner.Run("run", found, "--out", run.PathOf("rerun"));
         Assert.True(runCode == 0, runErr);
 
         // Simulated again as a reflectometer, it shows the same profile.
