@@ -10,6 +10,7 @@ public static class Program
     public static RootCommand BuildRoot() => new("wavesim - transmission-line wave simulator")
     {
         VersionInfoCommand.Create(),
+        BenchCommand.Create(),
     };
 
     /// <summary>Runs the command line and returns the exit code.</summary>
