@@ -38,17 +38,7 @@ public static class KernelBench
     {
         if (cells < 2) throw new InputException($"--cells must be at least 2 (got {cells})");
         if (steps < 1) throw new InputException($"--steps must be at least 1 (got {steps})");
-        const double dt = 1e-12, z0 = 50;
-        var segment = Segment.FromZ0(1, z0, cells * dt, lossless ? 0 : 10, lossless ? 0 : 1e-3);
-        var grid = new GridSegment
-        {
-            Plan = new SegmentPlan("bench", segment, cells, 1), Start = 0, End = 1, StartPosition = 0, LinePath = "",
-            V = new double[cells + 1], I = new double[cells],
-        };
-        var kernel = new SegmentKernel(grid, dt);
-        double[] v = grid.V, i = grid.I;
-        for (int k = 1; k < cells; k++) v[k] = Math.Sin(Math.PI * k / cells);
-        v[0] = lossless ? 0 : 1;
+        var kernel = TestLine(cells, lossless, out double[] v, out double[] i);
 
         // Warm-up: about 1e8 cell updates, enough for the JIT and the caches.
         int warm = Math.Max(1, (int)Math.Min(steps, 1e8 / cells));
@@ -60,5 +50,21 @@ public static class KernelBench
             if (!double.IsFinite(v[k]) || !double.IsFinite(i[k]))
                 throw new NumericalException($"the benchmark line is not finite at cell {k} after {warm + steps} steps");
         return (seconds, (double)cells * steps / seconds);
+    }
+
+    /// <summary>The benchmark line described in the remarks: its kernel and its state arrays, ready to step.</summary>
+    internal static SegmentKernel TestLine(int cells, bool lossless, out double[] v, out double[] i)
+    {
+        const double dt = 1e-12, z0 = 50;
+        var segment = Segment.FromZ0(1, z0, cells * dt, lossless ? 0 : 10, lossless ? 0 : 1e-3);
+        var grid = new GridSegment
+        {
+            Plan = new SegmentPlan("bench", segment, cells, 1), Start = 0, End = 1, StartPosition = 0, LinePath = "",
+            V = new double[cells + 1], I = new double[cells],
+        };
+        v = grid.V; i = grid.I;
+        for (int k = 1; k < cells; k++) v[k] = Math.Sin(Math.PI * k / cells);
+        v[0] = lossless ? 0 : 1;
+        return new SegmentKernel(grid, dt);
     }
 }
