@@ -117,8 +117,14 @@ internal sealed class LeapfrogSolver
     }
 
     List<(LineProfile Profile, NodeRef[] Nodes)> Profiles() =>
-        _net.Lines.Select(kv => (new LineProfile(kv.Key, kv.Value.Nodes.Select(n => n.Position).ToArray()),
-                                  kv.Value.Nodes.Select(n => n.Node).ToArray())).ToList();
+        _net.Lines.Select(kv =>
+        {
+            var nodes = kv.Value.Nodes;
+            var positions = new double[nodes.Count];
+            var refs = new NodeRef[nodes.Count];
+            for (int k = 0; k < nodes.Count; k++) { positions[k] = nodes.Position(k); refs[k] = nodes.Node(k); }
+            return (new LineProfile(kv.Key, positions), refs);
+        }).ToList();
 
     ProfileSnapshot Snapshot(List<(LineProfile Profile, NodeRef[] Nodes)> profiles, double t) =>
         new(t, profiles.Select(p => p.Nodes.Select(r => r.Junction >= 0 ? _jv[r.Junction] : _net.Segments[r.Segment].V[r.Index]).ToArray()).ToArray());
