@@ -30,14 +30,19 @@ public static class BenchCommand
             int n = pr.GetValue(cells);
             int m = pr.GetValue(steps) ?? KernelBench.DefaultSteps(n);
             bool ll = pr.GetValue(lossless);
-            var (seconds, rate) = KernelBench.Run(n, m, ll);
+            var r = KernelBench.Measure(n, m, ll);
             var o = pr.InvocationConfiguration.Output;
             var inv = CultureInfo.InvariantCulture;
             if (pr.GetValue(json))
-                o.WriteLine(string.Format(inv, "{{\"cells\": {0}, \"steps\": {1}, \"seconds\": {2:R}, \"cell_updates_per_s\": {3:R}}}", n, m, seconds, rate));
+                o.WriteLine(string.Format(inv, "{{\"cells\": {0}, \"steps\": {1}, \"seconds\": {2:R}, \"cell_updates_per_s\": {3:R}}}",
+                    n, m, r.Seconds, r.CellUpdatesPerSecond));
             else
+            {
                 o.WriteLine(string.Format(inv, "{0} line, {1} cells x {2} steps in {3:F3} s on one thread ({4}): {5:E3} cell updates/s",
-                    ll ? "lossless" : "lossy", n, m, seconds, KernelBench.VectorDescription, rate));
+                    ll ? "lossless" : "lossy", n, m, r.Seconds, KernelBench.VectorDescription, r.CellUpdatesPerSecond));
+                o.WriteLine(string.Format(inv, "CPU time {0:F3} s ({1:P0} of a core): {2:E3} cell updates per CPU second",
+                    r.CpuSeconds, r.CoreShare, r.CellUpdatesPerCpuSecond));
+            }
             return 0;
         }));
         return cmd;

@@ -36,6 +36,18 @@ public static class KernelBench
     /// <exception cref="NumericalException">The line's state is not finite at the end (it should never happen on this line).</exception>
     public static (double Seconds, double CellUpdatesPerSecond) Run(int cells, int steps, bool lossless)
     {
+        var r = Measure(cells, steps, lossless);
+        return (r.Seconds, r.CellUpdatesPerSecond);
+    }
+
+    /// <summary>Like <see cref="Run"/>, also giving the process's CPU time over the timed steps, which tells how much of a core the run had.</summary>
+    /// <param name="cells">Cells in the line, at least 2.</param>
+    /// <param name="steps">Timed steps, at least 1.</param>
+    /// <param name="lossless">True for a lossless line (R = G = 0), otherwise a lossy one.</param>
+    /// <exception cref="InputException"><paramref name="cells"/> or <paramref name="steps"/> is out of range.</exception>
+    /// <exception cref="NumericalException">The line's state is not finite at the end.</exception>
+    public static KernelBenchResult Measure(int cells, int steps, bool lossless)
+    {
         if (cells < 2) throw new InputException($"--cells must be at least 2 (got {cells})");
         if (steps < 1) throw new InputException($"--steps must be at least 1 (got {steps})");
         var kernel = TestLine(cells, lossless, out double[] v, out double[] i);
@@ -43,13 +55,17 @@ public static class KernelBench
         // Warm-up: about 1e8 cell updates, enough for the JIT and the caches.
         int warm = Math.Max(1, (int)Math.Min(steps, 1e8 / cells));
         for (int n = 0; n < warm; n++) kernel.Step(v, i);
+        using var process = Process.GetCurrentProcess();
+        var cpu0 = process.TotalProcessorTime;
         var clock = Stopwatch.StartNew();
         for (int n = 0; n < steps; n++) kernel.Step(v, i);
         double seconds = clock.Elapsed.TotalSeconds;
+        process.Refresh();
+        double cpuSeconds = (process.TotalProcessorTime - cpu0).TotalSeconds;
         for (int k = 0; k < cells; k++)
             if (!double.IsFinite(v[k]) || !double.IsFinite(i[k]))
                 throw new NumericalException($"the benchmark line is not finite at cell {k} after {warm + steps} steps");
-        return (seconds, (double)cells * steps / seconds);
+        return new KernelBenchResult(cells, steps, seconds, cpuSeconds);
     }
 
     /// <summary>The benchmark line described in the remarks: its kernel and its state arrays, ready to step.</summary>
