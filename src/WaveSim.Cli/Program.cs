@@ -10,14 +10,15 @@ public static class Program
     public static RootCommand BuildRoot() => new("wavesim - transmission-line wave simulator")
     {
         RunCommand.Create(),
+        CheckCommand.Create(),
         SweepCommand.Create(),
         TerminationsCommand.Create(),
-        CheckCommand.Create(),
-        VersionInfoCommand.Create(),
-        XSectionCommand.Create(),
         CompareCommand.Create(),
         FitCommand.Create(),
         TdrCommand.Create(),
+        XSectionCommand.Create(),
+        BenchCommand.Create(),
+        VersionInfoCommand.Create(),
     };
 
     /// <summary>Runs the command line and returns the exit code.</summary>

@@ -12,6 +12,7 @@ internal sealed class LeapfrogSolver
     readonly SegmentKernel[] _kernels;
     readonly JunctionSystem _junctions;
     readonly double[] _jv;
+    readonly double[][] _segV, _segI;
 
     public LeapfrogSolver(Scenario scenario, GridPlan plan)
     {
@@ -22,6 +23,8 @@ internal sealed class LeapfrogSolver
         _jv = new double[_net.Junctions.Count];
         foreach (var s in _net.Segments) { _jv[s.Start] = s.V[0]; _jv[s.End] = s.V[^1]; }
         _kernels = _net.Segments.Select(s => new SegmentKernel(s, plan.Dt)).ToArray();
+        _segV = _net.Segments.Select(s => s.V).ToArray();
+        _segI = _net.Segments.Select(s => s.I).ToArray();
         _junctions = new JunctionSystem(_net, plan.Dt);
         _junctions.Bind(_jv);
     }
@@ -47,15 +50,22 @@ internal sealed class LeapfrogSolver
             while (nextSnap < snapTimes.Length && snapTimes[nextSnap] <= t + 0.5 * dt)
                 snapshots.Add(Snapshot(profiles, snapTimes[nextSnap++]));
 
-            double product = 0;
-            for (int s = 0; s < _kernels.Length; s++)
+            if (energy is null)
             {
-                var seg = _net.Segments[s];
-                if (energy is null) _kernels[s].UpdateCurrents(seg.V, seg.I);
-                else product += seg.Plan.Segment.L * seg.Dz * _kernels[s].UpdateCurrentsTrackingProduct(seg.V, seg.I);
+                // A segment's voltage pass reads only its own currents, so both passes fuse per segment.
+                for (int s = 0; s < _kernels.Length; s++) _kernels[s].Step(_segV[s], _segI[s]);
             }
-            if (energy is not null) energy[n] = 0.5 * product + ElectricEnergy();
-            for (int s = 0; s < _kernels.Length; s++) _kernels[s].UpdateVoltages(_net.Segments[s].V, _net.Segments[s].I);
+            else
+            {
+                double product = 0;
+                for (int s = 0; s < _kernels.Length; s++)
+                {
+                    var seg = _net.Segments[s];
+                    product += seg.Plan.Segment.L * seg.Dz * _kernels[s].UpdateCurrentsTrackingProduct(seg.V, seg.I);
+                }
+                energy[n] = 0.5 * product + ElectricEnergy();
+                for (int s = 0; s < _kernels.Length; s++) _kernels[s].UpdateVoltages(_segV[s], _segI[s]);
+            }
             _junctions.Solve(src.Value(t), src.Value(t + dt));
             var x = _junctions.Voltages;
             for (int j = 0; j < _jv.Length; j++)
@@ -107,8 +117,14 @@ internal sealed class LeapfrogSolver
     }
 
     List<(LineProfile Profile, NodeRef[] Nodes)> Profiles() =>
-        _net.Lines.Select(kv => (new LineProfile(kv.Key, kv.Value.Nodes.Select(n => n.Position).ToArray()),
-                                  kv.Value.Nodes.Select(n => n.Node).ToArray())).ToList();
+        _net.Lines.Select(kv =>
+        {
+            var nodes = kv.Value.Nodes;
+            var positions = new double[nodes.Count];
+            var refs = new NodeRef[nodes.Count];
+            for (int k = 0; k < nodes.Count; k++) { positions[k] = nodes.Position(k); refs[k] = nodes.Node(k); }
+            return (new LineProfile(kv.Key, positions), refs);
+        }).ToList();
 
     ProfileSnapshot Snapshot(List<(LineProfile Profile, NodeRef[] Nodes)> profiles, double t) =>
         new(t, profiles.Select(p => p.Nodes.Select(r => r.Junction >= 0 ? _jv[r.Junction] : _net.Segments[r.Segment].V[r.Index]).ToArray()).ToArray());

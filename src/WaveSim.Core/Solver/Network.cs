@@ -77,7 +77,7 @@ internal sealed class Network
 /// <summary>The nodes of one line in order from its start, with the edges on either side of each node.</summary>
 internal sealed class LineNodes
 {
-    public List<(double Position, NodeRef Node, EdgeRef[] Upstream, EdgeRef[] Downstream)> Nodes { get; } = [];
+    public LineNodeList Nodes { get; } = new();
     public int StartJunction;
     public int EndJunction;
     public List<int> LoadBranches { get; } = [];

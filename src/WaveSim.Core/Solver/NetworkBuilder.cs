@@ -58,8 +58,7 @@ internal static class NetworkBuilder
                     net.Junctions[end].C += s.C * dz / 2; net.Junctions[end].G += s.G * dz / 2;
                     // The start junction node: its downstream edge is this segment's first half cell.
                     nodes.Nodes.Add((pos, NodeRef.OnJunction(node), pendingUp.ToArray(), [new EdgeRef(si, 0, -1)]));
-                    for (int k = 1; k < sp.Cells; k++)
-                        nodes.Nodes.Add((pos + k * dz, new NodeRef(si, k, -1), [new EdgeRef(si, k - 1, -1)], [new EdgeRef(si, k, -1)]));
+                    nodes.Nodes.AddInterior(si, sp.Cells, pos, dz);
                     pendingUp = [new EdgeRef(si, sp.Cells - 1, -1)];
                     node = end;
                     pos += s.Length;

@@ -45,7 +45,7 @@ internal sealed class ProbeSampler
                 // Nearest node; where a series part repeats a position, the first entry is the side toward the source.
                 int best = 0;
                 for (int k = 1; k < line.Nodes.Count; k++)
-                    if (Math.Abs(line.Nodes[k].Position - spec.Distance) < Math.Abs(line.Nodes[best].Position - spec.Distance) - 1e-15)
+                    if (Math.Abs(line.Nodes.Position(k) - spec.Distance) < Math.Abs(line.Nodes.Position(best) - spec.Distance) - 1e-15)
                         best = k;
                 var e = line.Nodes[best];
                 bool both = e.Upstream.Length > 0 && e.Downstream.Length > 0;

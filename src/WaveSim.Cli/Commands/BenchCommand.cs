@@ -1,0 +1,58 @@
+using System.CommandLine;
+using System.CommandLine.Parsing;
+using System.Globalization;
+using WaveSim.Core.Solver;
+
+namespace WaveSim.Cli.Commands;
+
+/// <summary>`wavesim bench`: times the solver's segment kernel on one thread and prints cell updates per second.</summary>
+public static class BenchCommand
+{
+    /// <summary>Creates the command.</summary>
+    public static Command Create()
+    {
+        var cells = new Option<int>("--cells")
+        {
+            Description = "Cells in the test line (at least 2)", DefaultValueFactory = _ => 10_000,
+            CustomParser = r => PositiveInt(r, "--cells", 2),
+        };
+        var steps = new Option<int?>("--steps")
+        {
+            Description = "Timed steps (default: about 7.5e9 cell updates, 2-3 s)",
+            CustomParser = r => PositiveInt(r, "--steps", 1),
+        };
+        var lossless = new Option<bool>("--lossless") { Description = "Time a lossless line instead of a lossy one" };
+        var json = new Option<bool>("--json") { Description = "Print one JSON object instead of text" };
+
+        var cmd = new Command("bench", "Time the solver's kernel on one core") { cells, steps, lossless, json };
+        cmd.SetAction(pr => CommandGuard.Run(pr.InvocationConfiguration.Error, () =>
+        {
+            int n = pr.GetValue(cells);
+            int m = pr.GetValue(steps) ?? KernelBench.DefaultSteps(n);
+            bool ll = pr.GetValue(lossless);
+            var r = KernelBench.Measure(n, m, ll);
+            var o = pr.InvocationConfiguration.Output;
+            var inv = CultureInfo.InvariantCulture;
+            if (pr.GetValue(json))
+                o.WriteLine(string.Format(inv, "{{\"cells\": {0}, \"steps\": {1}, \"seconds\": {2:R}, \"cell_updates_per_s\": {3:R}}}",
+                    n, m, r.Seconds, r.CellUpdatesPerSecond));
+            else
+            {
+                o.WriteLine(string.Format(inv, "{0} line, {1} cells x {2} steps in {3:F3} s on one thread ({4}): {5:E3} cell updates/s",
+                    ll ? "lossless" : "lossy", n, m, r.Seconds, KernelBench.VectorDescription, r.CellUpdatesPerSecond));
+                o.WriteLine(string.Format(inv, "CPU time {0:F3} s ({1:P0} of a core): {2:E3} cell updates per CPU second",
+                    r.CpuSeconds, r.CoreShare, r.CellUpdatesPerCpuSecond));
+            }
+            return 0;
+        }));
+        return cmd;
+    }
+
+    static int PositiveInt(ArgumentResult r, string name, int min)
+    {
+        string text = r.Tokens.Count > 0 ? r.Tokens[0].Value : "";
+        if (int.TryParse(text, NumberStyles.Integer, CultureInfo.InvariantCulture, out int x) && x >= min) return x;
+        r.AddError($"{name}: expected a whole number of at least {min} (got '{text}').");
+        return min;
+    }
+}
