@@ -18,6 +18,7 @@ public static class Program
         CompareCommand.Create(),
         FitCommand.Create(),
         TdrCommand.Create(),
+        ReportCommand.Create(),
     };
 
     /// <summary>Runs the command line and returns the exit code.</summary>
