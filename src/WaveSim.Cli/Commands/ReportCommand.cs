@@ -31,7 +31,7 @@ public static class ReportCommand
             double band = RunCommand.ParseBand(pr.GetValue(settle)!);
             var s = CommonOptions.Load(path);
             string text = File.ReadAllText(path);
-            var options = new SimulationOptions { Force = pr.GetValue(force), SnapshotTimes = RunPictures.SnapshotTimes(s, 0) };
+            var options = HtmlReport.RunOptions(s, pr.GetValue(force));
             SimulationResult result;
             using (var bar = new ProgressBar(pr.InvocationConfiguration.Error, "simulating"))
                 result = Simulate.Run(s, options with { Progress = bar }, ct);

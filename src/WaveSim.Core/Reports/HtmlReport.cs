@@ -26,6 +26,8 @@ public static class HtmlReport
         h2 { font-size: 1.2em; margin-top: 1.8em; border-bottom: 1px solid #bbb; padding-bottom: 0.2em; }
         table { border-collapse: collapse; margin: 0.6em 0; font-size: 0.9em; }
         th, td { border: 1px solid #999; padding: 0.25em 0.5em; text-align: right; }
+        td { white-space: nowrap; }
+        .wide { overflow-x: auto; }
         th { background: #f2f2f2; }
         td:first-child, th:first-child { text-align: left; }
         td.pass { background: #e3f1e3; }
@@ -35,7 +37,11 @@ public static class HtmlReport
         .note { color: #444; font-size: 0.9em; }
         """;
 
-    /// <summary>Builds the page.</summary>
+    /// <summary>The options a run needs for its report: the snapshots of the space-time map.</summary>
+    public static SimulationOptions RunOptions(Model.Scenario s, bool force = false) =>
+        new() { Force = force, SnapshotTimes = RunPictures.SnapshotTimes(s, 0) };
+
+    /// <summary>Builds the page. The run must hold snapshots (simulate with <see cref="RunOptions"/>); without them the space-time map is left out with a note.</summary>
     public static HtmlReportResult Build(ReportInput input)
     {
         var r = input.Result;
@@ -61,7 +67,8 @@ public static class HtmlReport
             ReportImages.WaveformWidth, ReportImages.WaveformHeight, "Probe voltages against time");
         w.El("h2", "Space-time map");
         w.El("p", "Voltage along the main line (across) against time (down).", ("class", "note"));
-        w.Image("spacetime", RunPictures.SpaceTime(r, ReportImages.SpaceTimeWidth, ReportImages.SpaceTimeHeight),
+        if (r.Snapshots.Count < 2) w.El("p", "No snapshots were recorded in this run, so there is no space-time map.");
+        else w.Image("spacetime", RunPictures.SpaceTime(r, ReportImages.SpaceTimeWidth, ReportImages.SpaceTimeHeight),
             ReportImages.SpaceTimeWidth, ReportImages.SpaceTimeHeight, "Voltage along the line against time");
 
         if (input.Eyes.Count > 0) Eyes(w, s.Title, input.Eyes);
@@ -107,7 +114,7 @@ public static class HtmlReport
             "delay 50 %", "settling", "threshold crossings", "noise margin high", "noise margin low" };
         if (bits) head.AddRange(["eye height vs thresholds", "eye width vs thresholds"]);
         head.Add("verdict");
-        w.Raw("<table id=\"figures\">\n").HeaderRow(head);
+        w.Raw("<div class=\"wide\">\n<table id=\"figures\">\n").HeaderRow(head);
         for (int i = 0; i < input.Figures.Count; i++)
         {
             var (p, f) = input.Figures[i];
@@ -129,7 +136,7 @@ public static class HtmlReport
             cells.Add((c.Pass switch { true => "pass", false => "fail", null => "not judged" }, Cls(c.Pass)));
             w.Row(cells);
         }
-        w.Raw("</table>\n");
+        w.Raw("</table>\n</div>\n");
         var withRx = checks.Where(c => c.Thresholds is not null).ToList();
         foreach (var c in withRx)
             w.El("p", $"{c.Probe}: receiver thresholds Vih {V(c.Thresholds!.Vih)}, Vil {V(c.Thresholds.Vil)}.", ("class", "note"));
