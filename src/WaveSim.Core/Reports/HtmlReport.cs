@@ -125,7 +125,8 @@ public static class HtmlReport
                 (p.Name, null), (p.Location, null), (V(p.Volts[^1]), null), (V(p.Volts.Min()), null), (V(p.Volts.Max()), null),
                 (Pct(f.OvershootPct), null), (Pct(f.UndershootPct), null), (V(f.RingbackV), null), (T(f.Rise1090S), null), (T(f.Fall9010S), null),
                 (T(f.Delay50S), null), (T(f.SettlingS), null), (crossings, Cls(c.CrossingsOk)),
-                (V(f.NoiseMarginHighV), Cls(c.MarginHighOk)), (V(f.NoiseMarginLowV), Cls(c.MarginLowOk)),
+                // A bit stream has no single settled level: its margins are in the eye columns.
+                (bits ? "-" : V(f.NoiseMarginHighV), Cls(c.MarginHighOk)), (bits ? "-" : V(f.NoiseMarginLowV), Cls(c.MarginLowOk)),
             };
             if (bits)
             {
