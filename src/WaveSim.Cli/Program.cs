@@ -16,6 +16,7 @@ public static class Program
         CompareCommand.Create(),
         FitCommand.Create(),
         TdrCommand.Create(),
+        ReportCommand.Create(),
         XSectionCommand.Create(),
         BenchCommand.Create(),
         VersionInfoCommand.Create(),

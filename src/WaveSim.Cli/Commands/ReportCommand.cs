@@ -1,0 +1,74 @@
+using System.CommandLine;
+using System.Text.Json.Nodes;
+using WaveSim.Core;
+using WaveSim.Core.Output;
+using WaveSim.Core.Reports;
+using WaveSim.Core.Solver;
+using WaveSim.Core.Terminations;
+
+namespace WaveSim.Cli.Commands;
+
+/// <summary>`wavesim report SCENARIO`: simulates and writes one self-contained report.html.</summary>
+public static class ReportCommand
+{
+    /// <summary>Name of the page written into the output folder.</summary>
+    public const string FileName = "report.html";
+
+    /// <summary>Creates the command.</summary>
+    public static Command Create()
+    {
+        var scenario = CommonOptions.Scenario();
+        var outDir = CommonOptions.Out();
+        var json = CommonOptions.Json();
+        var force = CommonOptions.Force();
+        var terminations = new Option<bool>("--terminations") { Description = "Add the termination comparison (runs every strategy)" };
+        var settle = new Option<string>("--settle-band") { Description = "Settling band as a fraction or percentage of the swing", DefaultValueFactory = _ => "5 %" };
+        var cmd = new Command("report", "Simulate a scenario and write one self-contained HTML report (report.html)")
+        { scenario, outDir, json, force, terminations, settle };
+        cmd.SetAction((pr, ct) => Task.FromResult(CommandGuard.Run(pr.InvocationConfiguration.Error, () =>
+        {
+            string path = pr.GetValue(scenario)!;
+            double band = RunCommand.ParseBand(pr.GetValue(settle)!);
+            var s = CommonOptions.Load(path);
+            string text = File.ReadAllText(path);
+            var options = HtmlReport.RunOptions(s, pr.GetValue(force));
+            SimulationResult result;
+            using (var bar = new ProgressBar(pr.InvocationConfiguration.Error, "simulating"))
+                result = Simulate.Run(s, options with { Progress = bar }, ct);
+            TerminationStudyResult? study = null;
+            if (pr.GetValue(terminations))
+                using (var bar = new ProgressBar(pr.InvocationConfiguration.Error, "terminations"))
+                    study = TerminationStudy.Run(s, new TerminationOptions { SettleBand = band, Force = pr.GetValue(force) }, bar, ct);
+            var report = HtmlReport.Build(ReportInput.For(result, text, band, study));
+            string dir = CommonOptions.OutputDir(pr.GetValue(outDir), path);
+            using (var output = new OutputFolder(dir))
+            {
+                File.WriteAllText(output.File(FileName), report.Html);
+                output.Commit();
+            }
+            string file = Path.Combine(Path.GetFullPath(dir), FileName);
+            var o = pr.InvocationConfiguration.Output;
+            int pass = report.Checks.Count(c => c.Pass == true), fail = report.Checks.Count(c => c.Pass == false);
+            if (pr.GetValue(json))
+                o.WriteLine(RunSummary.Text(new JsonObject
+                {
+                    ["report"] = file,
+                    ["probes"] = new JsonArray(report.Checks.Select(c => (JsonNode)new JsonObject
+                    {
+                        ["name"] = c.Probe,
+                        ["verdict"] = c.Pass switch { true => "pass", false => "fail", null => "not judged" },
+                    }).ToArray()),
+                    ["pass"] = pass,
+                    ["fail"] = fail,
+                    ["not_judged"] = report.Checks.Count - pass - fail,
+                }));
+            else
+            {
+                o.WriteLine($"{s.Title}: {pass} probe(s) pass, {fail} fail, {report.Checks.Count - pass - fail} not judged (no receiver thresholds)");
+                o.WriteLine($"wrote {file}");
+            }
+            return ExitCodes.Ok;
+        })));
+        return cmd;
+    }
+}

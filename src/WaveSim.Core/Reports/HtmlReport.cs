@@ -1,0 +1,204 @@
+using System.Globalization;
+using WaveSim.Core.Analysis;
+using WaveSim.Core.Output;
+using WaveSim.Core.Rendering;
+using WaveSim.Core.Solver;
+using WaveSim.Core.Terminations;
+using WaveSim.Core.Units;
+
+namespace WaveSim.Core.Reports;
+
+/// <summary>The result of building a report: the page and the per-probe verdicts it shows.</summary>
+/// <param name="Html">The whole self-contained page (UTF-8 text).</param>
+/// <param name="Checks">One verdict per probe, in probe order.</param>
+public sealed record HtmlReportResult(string Html, IReadOnlyList<ReceiverCheck> Checks);
+
+/// <summary>
+/// Builds one self-contained HTML page for a run: the scenario, the plan and its problems, a signal-quality table with
+/// pass/fail cells against the receiver thresholds, the pictures as PNG data URIs, eyes, terminations, limits and cautions.
+/// The page loads nothing else (no scripts, fonts, style sheets or images from elsewhere), so it opens offline.
+/// </summary>
+public static class HtmlReport
+{
+    const string Style = """
+        body { background: #fff; color: #111; font-family: system-ui, -apple-system, "Segoe UI", Roboto, "Noto Sans", "DejaVu Sans", sans-serif; margin: 2em auto; max-width: 1150px; padding: 0 1em; line-height: 1.4; }
+        h1 { font-size: 1.6em; margin-bottom: 0.2em; }
+        h2 { font-size: 1.2em; margin-top: 1.8em; border-bottom: 1px solid #bbb; padding-bottom: 0.2em; }
+        table { border-collapse: collapse; margin: 0.6em 0; font-size: 0.9em; }
+        th, td { border: 1px solid #999; padding: 0.25em 0.5em; text-align: right; }
+        td { white-space: nowrap; }
+        .wide { overflow-x: auto; }
+        th { background: #f2f2f2; }
+        td:first-child, th:first-child { text-align: left; }
+        td.pass { background: #e3f1e3; }
+        td.fail { background: #f7dddd; font-weight: bold; }
+        pre { background: #f7f7f7; border: 1px solid #ccc; padding: 0.6em; overflow-x: auto; font-size: 0.85em; }
+        img { max-width: 100%; height: auto; border: 1px solid #ddd; display: block; margin: 0.6em 0; }
+        .note { color: #444; font-size: 0.9em; }
+        """;
+
+    /// <summary>The options a run needs for its report: the snapshots of the space-time map.</summary>
+    public static SimulationOptions RunOptions(Model.Scenario s, bool force = false) =>
+        new() { Force = force, SnapshotTimes = RunPictures.SnapshotTimes(s, 0) };
+
+    /// <summary>Builds the page. The run must hold snapshots (simulate with <see cref="RunOptions"/>); without them the space-time map is left out with a note.</summary>
+    public static HtmlReportResult Build(ReportInput input)
+    {
+        var r = input.Result;
+        var s = r.Scenario;
+        var checks = ReceiverCheck.Judge(r, input.Figures, input.Eyes);
+        var w = new HtmlWriter();
+        w.Line("<!DOCTYPE html>").Line("<html lang=\"en\">").Line("<head>").Line("<meta charset=\"utf-8\" />")
+         .Line("<meta name=\"viewport\" content=\"width=device-width, initial-scale=1\" />");
+        w.El("title", $"{s.Title} - WaveSim report");
+        w.Raw("<style>\n").Raw(Style).Raw("\n</style>\n").Line("</head>").Line("<body>");
+        w.El("h1", s.Title);
+        w.El("p", $"WaveSim report. Simulated {Quantity.Format(s.Simulation.Duration, "s", 4)} in {r.Plan.Steps} steps; scenario file {Path.GetFileName(s.FilePath ?? "")}.", ("class", "note"));
+
+        w.El("h2", "Scenario");
+        w.El("pre", input.ScenarioText, ("id", "scenario"));
+
+        Plan(w, r);
+        Figures(w, input, checks);
+
+        w.El("h2", "Waveforms");
+        var chart = RunPictures.Waveforms(r, currents: false);
+        w.Image("waveforms", LineChart.RenderPng(chart, ReportImages.WaveformWidth, ReportImages.WaveformHeight),
+            ReportImages.WaveformWidth, ReportImages.WaveformHeight, "Probe voltages against time");
+        w.El("h2", "Space-time map");
+        w.El("p", "Voltage along the main line (across) against time (down).", ("class", "note"));
+        if (r.Snapshots.Count < 2) w.El("p", "No snapshots were recorded in this run, so there is no space-time map.");
+        else w.Image("spacetime", RunPictures.SpaceTime(r, ReportImages.SpaceTimeWidth, ReportImages.SpaceTimeHeight),
+            ReportImages.SpaceTimeWidth, ReportImages.SpaceTimeHeight, "Voltage along the line against time");
+
+        if (input.Eyes.Count > 0) Eyes(w, s.Title, input.Eyes);
+        if (input.Terminations is { } t) TerminationSection(w, t);
+        Limits(w);
+        w.Line("</body>").Line("</html>");
+        return new HtmlReportResult(w.ToString(), checks);
+    }
+
+    static void Plan(HtmlWriter w, SimulationResult r)
+    {
+        var p = r.Plan;
+        w.El("h2", "Plan");
+        w.Raw("<table id=\"plan\">\n").HeaderRow(["item", "value"]);
+        w.Row([("time step", null), (Quantity.Format(p.Dt, "s", 4), null)]);
+        w.Row([("stability limit of the step", null), (Quantity.Format(p.DtLimit, "s", 4), null)]);
+        w.Row([("steps", null), (p.Steps.ToString(CultureInfo.InvariantCulture), null)]);
+        w.Row([("cells", null), (p.TotalCells.ToString(CultureInfo.InvariantCulture), null)]);
+        w.Row([("cell updates", null), (p.CellUpdates.ToString("G3", CultureInfo.InvariantCulture), null)]);
+        w.Raw("</table>\n");
+        w.Raw("<table id=\"segments\">\n").HeaderRow(["segment", "length", "Z0", "delay", "cells", "Courant number"]);
+        foreach (var sp in p.Segments)
+            w.Row([(sp.Where, null), (Quantity.Format(sp.Segment.Length, "m", 4), null), (Quantity.Format(sp.Segment.Z0, "Ω", 4), null),
+                (Quantity.Format(sp.Segment.Delay, "s", 4), null), (sp.Cells.ToString(CultureInfo.InvariantCulture), null),
+                (sp.Courant.ToString("F3", CultureInfo.InvariantCulture), null)]);
+        w.Raw("</table>\n");
+        var problems = PlanAdvisor.Problems(r.Scenario, p);
+        w.El("h2", "Problems found");
+        if (problems.Count == 0) w.El("p", "None found in the plan.");
+        else
+        {
+            w.Raw("<ul id=\"problems\">\n");
+            foreach (var x in problems) w.El("li", x);
+            w.Raw("</ul>\n");
+        }
+    }
+
+    static void Figures(HtmlWriter w, ReportInput input, IReadOnlyList<ReceiverCheck> checks)
+    {
+        bool bits = input.Eyes.Count > 0;
+        w.El("h2", "Signal quality");
+        var head = new List<string> { "probe", "at", "final", "min", "max", "overshoot", "undershoot", "ringback", "rise 10-90", "fall 90-10",
+            "delay 50 %", "settling", "threshold crossings", "noise margin high", "noise margin low" };
+        if (bits) head.AddRange(["eye height vs thresholds", "eye width vs thresholds"]);
+        head.Add("verdict");
+        w.Raw("<div class=\"wide\">\n<table id=\"figures\">\n").HeaderRow(head);
+        for (int i = 0; i < input.Figures.Count; i++)
+        {
+            var (p, f) = input.Figures[i];
+            var c = checks[i];
+            string crossings = f.ThresholdCrossings.ToString(CultureInfo.InvariantCulture) + (c.ExpectedCrossings is { } e ? $" (expected {e})" : "");
+            var cells = new List<(string, string?)>
+            {
+                (p.Name, null), (p.Location, null), (V(p.Volts[^1]), null), (V(p.Volts.Min()), null), (V(p.Volts.Max()), null),
+                (Pct(f.OvershootPct), null), (Pct(f.UndershootPct), null), (V(f.RingbackV), null), (T(f.Rise1090S), null), (T(f.Fall9010S), null),
+                (T(f.Delay50S), null), (T(f.SettlingS), null), (crossings, Cls(c.CrossingsOk)),
+                // A bit stream has no single settled level: its margins are in the eye columns.
+                (bits ? "-" : V(f.NoiseMarginHighV), Cls(c.MarginHighOk)), (bits ? "-" : V(f.NoiseMarginLowV), Cls(c.MarginLowOk)),
+            };
+            if (bits)
+            {
+                var ef = input.Eyes.FirstOrDefault(x => x.Probe.Name == p.Name)?.Diagram?.Figures;
+                cells.Add((V(ef?.EyeHeightThresholdsV), Cls(c.EyeOk)));
+                cells.Add((T(ef?.EyeWidthThresholdsS), Cls(c.EyeOk)));
+            }
+            cells.Add((c.Pass switch { true => "pass", false => "fail", null => "not judged" }, Cls(c.Pass)));
+            w.Row(cells);
+        }
+        w.Raw("</table>\n</div>\n");
+        var withRx = checks.Where(c => c.Thresholds is not null).ToList();
+        foreach (var c in withRx)
+            w.El("p", $"{c.Probe}: receiver thresholds Vih {V(c.Thresholds!.Vih)}, Vil {V(c.Thresholds.Vil)}.", ("class", "note"));
+        w.El("p", "Pass/fail rule: " + ReceiverCheck.Rule, ("id", "rule"));
+        w.El("p", "Figures refer to the first edge and the level it settles to; a dash means the figure does not apply. " +
+            "Noise margin high = settled high level − Vih; noise margin low = Vil − settled low level.", ("class", "note"));
+    }
+
+    static void Eyes(HtmlWriter w, string title, IReadOnlyList<ProbeEye> eyes)
+    {
+        w.El("h2", "Eye diagrams");
+        foreach (var e in eyes)
+        {
+            if (EyePng(title, e) is { } png)
+                w.Image("eye-" + e.Probe.Name, png, ReportImages.EyeWidth, ReportImages.EyeHeight, $"Eye diagram at {e.Probe.Name}");
+            else w.El("p", $"{e.Probe.Name}: no eye ({e.Note}).");
+        }
+    }
+
+    static byte[]? EyePng(string title, ProbeEye e) => RunEyes.RenderPng(title, e, ReportImages.EyeWidth, ReportImages.EyeHeight);
+
+    static void TerminationSection(HtmlWriter w, TerminationStudyResult t)
+    {
+        w.El("h2", "Terminations");
+        w.El("p", $"Z0 {Quantity.Format(t.Z0, "Ω", 3)} (first segment), line delay {Quantity.Format(t.LineDelayS, "s", 3)}, receiver '{t.ReceiverProbe}'; " +
+            $"limits: overshoot {t.Options.MaxOvershootPct.ToString("G3", CultureInfo.InvariantCulture)} %, settling {Quantity.Format(t.Options.MaxSettlingS, "s", 3)}; " +
+            $"parts simulated with {t.Options.Series} values.");
+        w.Raw("<table id=\"terminations\">\n").HeaderRow(["strategy", "parts", "overshoot", "undershoot", "settling", "threshold crossings", "delay 50 %", "power avg", "verdict"]);
+        foreach (var o in t.Outcomes)
+        {
+            string parts = o.Design.Parts.Count == 0 ? "-" : string.Join("; ", o.Design.Parts.Select(p => $"{p.Label} {Quantity.Format(p.Used, p.Unit, 3)}"));
+            var f = o.Receiver;
+            w.Row([(o.Design.Name, null), (parts, null), (Pct(f?.OvershootPct), null), (Pct(f?.UndershootPct), null), (T(f?.SettlingS), null),
+                (f is null ? "-" : f.ThresholdCrossings.ToString(CultureInfo.InvariantCulture), null), (T(f?.Delay50S), null),
+                (o.PowerAverageW is { } pw ? Quantity.Format(pw, "W", 3) : "-", null),
+                (o.Result is null ? "n/a: " + o.Design.Note : o.Verdict, o.Result is null ? null : Cls(o.MeetsLimits))]);
+        }
+        w.Raw("</table>\n");
+        w.Image("terminations-overlay", LineChart.RenderPng(TerminationPictures.Receiver(t), ReportImages.TerminationsWidth, ReportImages.TerminationsHeight),
+            ReportImages.TerminationsWidth, ReportImages.TerminationsHeight, "Receiver voltage for every termination strategy");
+    }
+
+    static void Limits(HtmlWriter w)
+    {
+        w.El("h2", "Limits of the model");
+        w.Raw("<ul id=\"limits\">\n");
+        w.El("li", "One conductor pair: a single signal path and its return; no crosstalk between neighbouring lines.");
+        w.El("li", "Quasi-TEM propagation: per-unit-length R, L, G, C; no higher-order modes or radiation.");
+        w.El("li", "Linear parts: resistors, capacitors and inductors with fixed values; drivers are a waveform behind a fixed resistance; no diodes, clamps or non-linear receivers.");
+        w.Raw("</ul>\n");
+        w.El("h2", "Cautions");
+        w.Raw("<ul id=\"cautions\">\n");
+        w.El("li", "This simulation is an estimate. Verify every result on the real hardware before relying on it.");
+        w.El("li", "Never connect instruments to energized or high-voltage lines.");
+        w.El("li", "Where cables carry mains or high voltage, follow your local codes and licensed practice; this report does not replace them.");
+        w.Raw("</ul>\n");
+    }
+
+    static string? Cls(bool? ok) => ok switch { true => "pass", false => "fail", null => null };
+    static string V(double v) => Quantity.Format(v, "V", 3);
+    static string V(double? v) => v is { } x ? V(x) : "-";
+    static string T(double? t) => t is { } x ? Quantity.Format(x, "s", 3) : "-";
+    static string Pct(double? p) => p is { } x ? x.ToString("F1", CultureInfo.InvariantCulture) + " %" : "-";
+}
