@@ -10,6 +10,7 @@ internal sealed class LeapfrogSolver
     readonly GridPlan _plan;
     readonly Network _net;
     readonly SegmentKernel[] _kernels;
+    readonly DispersiveKernel?[] _dispersive;
     readonly JunctionSystem _junctions;
     readonly double[] _jv;
 
@@ -22,6 +23,7 @@ internal sealed class LeapfrogSolver
         _jv = new double[_net.Junctions.Count];
         foreach (var s in _net.Segments) { _jv[s.Start] = s.V[0]; _jv[s.End] = s.V[^1]; }
         _kernels = _net.Segments.Select(s => new SegmentKernel(s, plan.Dt)).ToArray();
+        _dispersive = _net.Segments.Select(s => s.Dispersion is null ? null : new DispersiveKernel(s, plan.Dt)).ToArray();
         _junctions = new JunctionSystem(_net, plan.Dt);
         _junctions.Bind(_jv);
     }
@@ -51,11 +53,14 @@ internal sealed class LeapfrogSolver
             for (int s = 0; s < _kernels.Length; s++)
             {
                 var seg = _net.Segments[s];
+                if (_dispersive[s] is { } dk) { product += seg.Plan.Segment.L * seg.Dz * dk.UpdateCurrents(seg.V, seg.I); continue; }
                 if (energy is null) _kernels[s].UpdateCurrents(seg.V, seg.I);
                 else product += seg.Plan.Segment.L * seg.Dz * _kernels[s].UpdateCurrentsTrackingProduct(seg.V, seg.I);
             }
             if (energy is not null) energy[n] = 0.5 * product + ElectricEnergy();
-            for (int s = 0; s < _kernels.Length; s++) _kernels[s].UpdateVoltages(_net.Segments[s].V, _net.Segments[s].I);
+            for (int s = 0; s < _kernels.Length; s++)
+                if (_dispersive[s] is { } dk) dk.UpdateVoltages(_net.Segments[s].V, _net.Segments[s].I);
+                else _kernels[s].UpdateVoltages(_net.Segments[s].V, _net.Segments[s].I);
             _junctions.Solve(src.Value(t), src.Value(t + dt));
             var x = _junctions.Voltages;
             for (int j = 0; j < _jv.Length; j++)
