@@ -49,8 +49,8 @@ public sealed record RationalLoss
     /// <summary>Largest |Δκ_fit − Δκ|/|Δκ| over the band, Δκ = κ − κ(∞) the dispersive (lossy) part alone.</summary>
     public required double DispersionMaxError { get; init; }
 
-    /// <summary>Default number of poles per function.</summary>
-    public const int DefaultPoles = 10;
+    /// <summary>Pole count chosen from the band: 2.5 per decade of the pole span, within 6..12.</summary>
+    public const int AutoPoles = 0;
 
     /// <summary>The fitted series impedance per length, ohm/m.</summary>
     public Complex SeriesImpedance(Complex s)
@@ -76,12 +76,14 @@ public sealed record RationalLoss
     /// <param name="c">The segment's C0, F/m.</param>
     /// <param name="fLow">Lower band edge, Hz, &gt; 0.</param>
     /// <param name="fHigh">Upper band edge, Hz, &gt; fLow.</param>
-    /// <param name="poles">Poles per function, 2..40 (default 10).</param>
+    /// <param name="poles">Poles per function, 2..40, or <see cref="AutoPoles"/> (2.5 per decade of the pole span, 6 to 12).</param>
     /// <exception cref="InputException">Band or pole count out of range.</exception>
-    public static RationalLoss Fit(FrequencyLoss loss, double r, double l, double g, double c, double fLow, double fHigh, int poles = DefaultPoles)
+    public static RationalLoss Fit(FrequencyLoss loss, double r, double l, double g, double c, double fLow, double fHigh, int poles = AutoPoles)
     {
         if (!(fLow > 0) || !(fHigh > fLow) || !double.IsFinite(fHigh))
             throw new InputException($"frequency-loss fit: the band must satisfy 0 < low < high (got {fLow} Hz to {fHigh} Hz)");
+        if (poles == AutoPoles)
+            poles = (int)Math.Clamp(Math.Ceiling(2.5 * Math.Log10(fHigh / fLow * PoleSpanBelow * PoleSpanAbove)), 6, 12);
         if (poles < 2 || poles > 40) throw new InputException($"frequency-loss fit: 2 to 40 poles (got {poles})");
         double wLo = 2 * Math.PI * fLow, wHi = 2 * Math.PI * fHigh;
         var grid = LogSpace(wLo, wHi, Math.Max(100, (int)(30 * Math.Log10(wHi / wLo))));
@@ -99,9 +101,9 @@ public sealed record RationalLoss
         }
         if (loss.Dielectric is not null)
         {
-            // Δκ(s) = κ(s) − κ(∞) ≈ d + Σ c_k/(s + q_k); then C∞ = C0(κ(∞) + d), b_k = C0·c_k. DC is a fit point too.
+            // Δκ(s) = κ(s) − κ(∞) ≈ d + Σ c_k/(s + q_k); then C∞ = C0(κ(∞) + d), b_k = C0·c_k.
             double kInf = loss.HighFrequencyRatio;
-            var rows = grid.Select(w => new Complex(0, w)).Prepend(Complex.Zero).ToArray();
+            var rows = grid.Select(w => new Complex(0, w)).ToArray();
             var (x, _) = FitColumns(rows, s => loss.PermittivityRatio(s) - kInf, s => loss.PermittivityRatio(s) - kInf,
                 [_ => 1, .. pl.Select<double, Func<Complex, Complex>>(p => s => 1 / (s + p))]);
             cInst = c * (kInf + x[0]); qp = pl; qr = x[1..].Select(v => c * v).ToArray();
@@ -133,7 +135,7 @@ public sealed record RationalLoss
     }
 
     /// <summary>Poles reach this factor below the band's lower edge.</summary>
-    const double PoleSpanBelow = 3;
+    const double PoleSpanBelow = 10;
     /// <summary>Poles reach this factor above the band's upper edge.</summary>
     const double PoleSpanAbove = 10;
 
