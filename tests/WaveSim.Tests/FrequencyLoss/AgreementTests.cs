@@ -27,4 +27,18 @@ public class AgreementTests
             Assert.True(d.MaxDiffPct < 1, $"{name} {d.Probe}: {d.MaxDiffV:E3} V = {d.MaxDiffPct:F3} % of the swing");
         }
     }
+
+    [Fact]
+    public void The_comparison_tells_frequency_dependent_from_constant_loss()
+    {
+        // The agreement above is not automatic: the same microstrip with the constant-R/G model (R_dc, G at 0.35/t_r) differs
+        // from the exact frequency-dependent solution at the load by well over the 1 % tolerance (common practice, no source).
+        var exact = TestScenarios.Parse(LossScenarios.Microstrip());
+        var constant = TestScenarios.Run(LossScenarios.Microstrip(loss: "constant"));
+        var fd = WaveSim.Core.FrequencyDomain.FrequencyDomainSolver.TimeResponse(exact, constant.Time).Probe("rx").Volts;
+        var rx = constant.Probe("rx").Volts;
+        double diff = rx.Zip(fd, (a, b) => Math.Abs(a - b)).Max(), swing = rx.Max() - rx.Min();
+        Console.WriteLine($"constant-loss model vs exact: {100 * diff / swing:F2} % of the swing");
+        Assert.True(diff > 0.03 * swing, $"only {100 * diff / swing:F2} % apart");
+    }
 }
