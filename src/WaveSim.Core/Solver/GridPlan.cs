@@ -67,6 +67,8 @@ public sealed record GridPlan
         if ((rows - 1) * h < scenario.Simulation.Duration * (1 - RoundingTolerance)) rows++;
         long cells = plans.Sum(p => (long)p.Cells);
         long memory = cells * 2 * sizeof(double) + rows * (1 + 2L * scenario.Probes.Count) * sizeof(double);
+        // Frequency-dependent segments hold one state per cell per pole on each side (at most 12 poles each).
+        memory += plans.Where(p => p.Segment.Loss is not null).Sum(p => (long)p.Cells) * 2 * 12 * sizeof(double);
         return new GridPlan { Dt = dt, DtLimit = limit, Steps = steps, Segments = plans, OutputRows = rows, MemoryBytes = memory };
     }
 

@@ -20,6 +20,11 @@ public class CausalityAndPassivityTests
         Assert.True(front < seg.Delay);
         var td = WaveSim.Core.Simulate.Run(scenario);
         double dt = td.Plan.Dt;
+        // The fit the run used (band 1/duration to 1/rise) is reported with its error; project target 0.1 % (no source).
+        var fits = WaveSim.Core.Simulate.LossFits(scenario, td.Plan);
+        Assert.Single(fits);
+        Assert.Equal("line[0]", fits[0].Where);
+        Assert.True(fits[0].Fit.InternalMaxError < 1e-3 && fits[0].Fit.DispersionMaxError < 1e-3);
         var rx = td.Probe("rx").Volts;
         double swing = rx.Max() - rx.Min();
         for (int k = 0; k < td.Time.Length && td.Time[k] < start + front - 2 * dt; k++)
