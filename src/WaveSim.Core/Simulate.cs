@@ -22,6 +22,14 @@ public static class Simulate
         return new LeapfrogSolver(scenario, plan).Run(options, ct);
     }
 
+    /// <summary>
+    /// The pole-residue fits a run of <paramref name="scenario"/> on <paramref name="plan"/> uses for its segments with
+    /// frequency-dependent loss, with their place ("line[0]") and their largest errors over the band.
+    /// </summary>
+    public static IReadOnlyList<(string Where, Lines.RationalLoss Fit)> LossFits(Scenario scenario, GridPlan plan) =>
+        plan.Segments.Where(s => s.Segment.Loss is not null)
+            .Select(s => (s.Where, DispersiveKernel.FitFor(s.Segment, scenario, plan.Dt))).ToList();
+
     /// <summary>Throws when the plan is beyond the limits a run accepts without --force.</summary>
     public static void CheckLimits(GridPlan plan)
     {

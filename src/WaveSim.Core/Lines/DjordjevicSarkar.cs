@@ -65,6 +65,13 @@ public sealed class DjordjevicSarkar
     public Complex Permittivity(double frequency) =>
         EpsInfinity + DeltaEps / (M2 - M1) * Log10Ratio(2 * Math.PI * frequency, M1, M2);
 
+    /// <summary>
+    /// The permittivity as a function of the complex frequency s (rad/s), eps_inf + d_eps/(m2 - m1) log10((omega2 + s)/(omega1 + s));
+    /// at s = j omega it equals <see cref="Permittivity(double)"/>. Analytic for Re s &gt; -omega1, so the model is causal.
+    /// </summary>
+    public Complex Permittivity(Complex s) =>
+        EpsInfinity + DeltaEps / (M2 - M1) * Complex.Log10((Math.Pow(10, M2) + s) / (Math.Pow(10, M1) + s));
+
     /// <summary>Loss tangent eps''/eps' at <paramref name="frequency"/> (Hz).</summary>
     public double LossTangent(double frequency)
     {

@@ -14,6 +14,22 @@ public sealed record Segment(double Length, double R, double L, double G, double
     /// <summary>The cross-section figures this segment was derived from, when it was given by geometry.</summary>
     public Lines.LineParameters? Derived { get; init; }
 
+    /// <summary>
+    /// Frequency-dependent conductor and dielectric loss, when given; null keeps the constant R and G. With it, R is R_dc
+    /// (when a conductor model is given), L is the external inductance L∞, C the capacitance at the dielectric's reference
+    /// frequency and G is 0 (when a dielectric model is given).
+    /// </summary>
+    public Lines.FrequencyLoss? Loss { get; init; }
+
+    /// <summary>Series impedance per length at complex frequency s, ohm/m: R + sL, or the exact frequency-dependent form.</summary>
+    public System.Numerics.Complex SeriesImpedance(System.Numerics.Complex s) => Loss is { } f ? f.SeriesImpedance(s, R, L) : R + s * L;
+
+    /// <summary>Shunt admittance per length at complex frequency s, S/m: G + sC, or the exact frequency-dependent form.</summary>
+    public System.Numerics.Complex ShuntAdmittance(System.Numerics.Complex s) => Loss is { } f ? f.ShuntAdmittance(s, G, C) : G + s * C;
+
+    /// <summary>The one-way delay of the fastest wave the segment carries, s: <see cref="Delay"/> scaled by √κ(∞) with a wideband dielectric.</summary>
+    public double FrontDelay => Loss is { } f ? Delay * Math.Sqrt(f.HighFrequencyRatio) : Delay;
+
     /// <summary>Characteristic impedance of the lossless part, √(L/C), ohm.</summary>
     public double Z0 => Math.Sqrt(L / C);
     /// <summary>Propagation velocity 1/√(LC), m/s.</summary>

@@ -17,7 +17,7 @@ public static class ScenarioLoader
     /// <summary>The keys accepted under <c>source</c>.</summary>
     public static readonly string[] SourceKeys = ["waveform", "low", "high", "rise", "fall", "delay", "width", "period", "frequency", "bit_time", "pattern", "prbs", "file", "resistance"];
     /// <summary>The keys accepted under <c>segment</c>.</summary>
-    public static readonly string[] SegmentKeys = ["length", "z0", "delay", "velocity", "eps_eff", "r", "l", "g", "c", "geometry"];
+    public static readonly string[] SegmentKeys = ["length", "z0", "delay", "velocity", "eps_eff", "r", "l", "g", "c", "geometry", "loss"];
     /// <summary>The keys accepted under <c>shunt</c> and <c>series</c>.</summary>
     public static readonly string[] LumpedKeys = ["r", "l", "c"];
     /// <summary>The keys accepted under <c>branch</c>.</summary>
@@ -254,7 +254,7 @@ public static class ScenarioLoader
                 if (ee < 1) throw m.Error(m.Node("eps_eff")!, m.Join("eps_eff"), $"must be at least 1 (got {ee})");
                 perLength = Math.Sqrt(ee) / Quantity.SpeedOfLight;
             }
-            return Segment.FromZ0(length, z0, perLength, r, g);
+            return SegmentLoss.Apply(m, Segment.FromZ0(length, z0, perLength, r, g), rGiven is not null, gGiven is not null);
         }
         if (m.Has("l") && m.Has("c"))
         {
@@ -264,7 +264,7 @@ public static class ScenarioLoader
             double c = m.Positive("c", Dimension.CapacitancePerLength)!.Value;
             if (1 / Math.Sqrt(l * c) > Quantity.SpeedOfLight * (1 + 1e-6))
                 throw m.Error(m.Node("c")!, m.Join("c"), "l and c give a velocity faster than light");
-            return new Segment(length, r, l, g, c);
+            return SegmentLoss.Apply(m, new Segment(length, r, l, g, c), rGiven is not null, gGiven is not null);
         }
         throw m.Error($"a segment needs z0 with one of delay, velocity or eps_eff, or l and c per length");
     }

@@ -13,6 +13,9 @@ namespace WaveSim.Core.Scenarios;
 /// frequency (a constant-R model must choose one; DC keeps the settled levels right). G = ωC·tan δ at <c>at</c>, or at the
 /// source edge's bandwidth 0.35/t_r (exact for one pole, ln 9/2π; common practice) when <c>at</c> is not given.
 /// An explicit <c>r</c> or <c>g</c> beside the geometry overrides the derived value.
+/// With <c>loss: frequency</c> the segment instead carries the cross-section's frequency-dependent loss
+/// (<see cref="FrequencyLoss"/>: skin effect R_dc·√(1 + s/ω0) and the Djordjevic-Sarkar dielectric fitted to er and tan δ at
+/// <c>at</c>, or at 1 GHz without it); <c>loss: constant</c> (the default) keeps the constant R and G.
 /// </remarks>
 internal static class SegmentGeometry
 {
@@ -32,6 +35,22 @@ internal static class SegmentGeometry
         string context = $"{m.File}:{node.Start.Line}:{node.Start.Column}: {m.Join("geometry")}";
         var spec = CrossSection.FromDictionary(raw, context);
         var p = CrossSection.Compute(spec);
+        if (m.Node("loss") is { } lossNode)
+        {
+            string? mode = (lossNode as YamlScalarNode)?.Value;
+            if (mode == "frequency")
+            {
+                foreach (string k in new[] { "r", "g" })
+                    if (m.Has(k)) throw m.Error(m.Node(k)!, m.Join(k), "with 'loss: frequency' the resistance and conductance come from the geometry: remove this key");
+                double er = spec.Dimensions.TryGetValue("er", out double e) ? e : 1;
+                double tand = spec.Dimensions.TryGetValue("tand", out double td) ? td : 0;
+                var loss = SegmentLoss.FromGeometry(p, er, tand)
+                    ?? throw m.Error(lossNode, m.Join("loss"), "the geometry has neither a conductor thickness nor a tand, so there is no loss to make frequency-dependent");
+                return new Segment(length, loss.SkinCorner is null ? 0 : p.RDc, p.L, 0, p.C) { Derived = p, Loss = loss };
+            }
+            if (mode != "constant")
+                throw m.Error(lossNode, m.Join("loss"), "beside a geometry, expected 'frequency' (skin effect and wideband dielectric from the cross-section) or 'constant'");
+        }
         double at = p.FrequencyHz ?? (rise > 0 ? 0.35 / rise : 0);
         double rDerived = p.FrequencyHz is { } f ? p.ResistanceAt(f) : p.RDc;
         return new Segment(length, r ?? rDerived, p.L, g ?? p.ConductanceAt(at), p.C) { Derived = p };

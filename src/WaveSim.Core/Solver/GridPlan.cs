@@ -19,6 +19,8 @@ public sealed record SegmentPlan(string Where, Segment Segment, int Cells, doubl
 /// dt is picked, within the resolution's bound, to bring every Courant number as close to 1 as it can: at exactly 1
 /// the lossless leapfrog is free of numerical dispersion (the "magic time step", Taflove and Hagness,
 /// Computational Electrodynamics, 3rd ed. 2005, ch. 2).
+/// A segment with a wideband dielectric is planned by its fastest wave (<see cref="Segment.FrontDelay"/>, from ε∞), which keeps
+/// the dispersive update stable; for every other segment that is its delay.
 /// </remarks>
 public sealed record GridPlan
 {
@@ -51,13 +53,13 @@ public sealed record GridPlan
     public static GridPlan For(Scenario scenario)
     {
         var segs = AllSegments(scenario.Line, "line").ToList();
-        double tMin = segs.Min(s => s.Seg.Delay);
+        double tMin = segs.Min(s => s.Seg.FrontDelay);
         double limit = Math.Min(tMin, scenario.Source.ShortestFeature) / scenario.Simulation.Resolution;
-        double dt = ChooseDt(segs.Select(s => s.Seg.Delay).ToArray(), limit);
+        double dt = ChooseDt(segs.Select(s => s.Seg.FrontDelay).ToArray(), limit);
         var plans = segs.Select(s =>
         {
-            int n = CellsFor(s.Seg.Delay, dt);
-            return new SegmentPlan(s.Where, s.Seg, n, n * dt / s.Seg.Delay);
+            int n = CellsFor(s.Seg.FrontDelay, dt);
+            return new SegmentPlan(s.Where, s.Seg, n, n * dt / s.Seg.FrontDelay);
         }).ToList();
         long steps = (long)Math.Ceiling(scenario.Simulation.Duration / dt * (1 - RoundingTolerance));
         double h = scenario.Simulation.OutputStep ?? dt;
@@ -65,6 +67,8 @@ public sealed record GridPlan
         if ((rows - 1) * h < scenario.Simulation.Duration * (1 - RoundingTolerance)) rows++;
         long cells = plans.Sum(p => (long)p.Cells);
         long memory = cells * 2 * sizeof(double) + rows * (1 + 2L * scenario.Probes.Count) * sizeof(double);
+        // Frequency-dependent segments hold one state per cell per pole on each side (at most 12 poles each).
+        memory += plans.Where(p => p.Segment.Loss is not null).Sum(p => (long)p.Cells) * 2 * 12 * sizeof(double);
         return new GridPlan { Dt = dt, DtLimit = limit, Steps = steps, Segments = plans, OutputRows = rows, MemoryBytes = memory };
     }
 

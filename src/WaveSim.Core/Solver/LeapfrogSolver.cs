@@ -10,6 +10,7 @@ internal sealed class LeapfrogSolver
     readonly GridPlan _plan;
     readonly Network _net;
     readonly SegmentKernel[] _kernels;
+    readonly DispersiveKernel?[] _dispersive;
     readonly JunctionSystem _junctions;
     readonly double[] _jv;
     readonly double[][] _segV, _segI;
@@ -25,6 +26,7 @@ internal sealed class LeapfrogSolver
         _kernels = _net.Segments.Select(s => new SegmentKernel(s, plan.Dt)).ToArray();
         _segV = _net.Segments.Select(s => s.V).ToArray();
         _segI = _net.Segments.Select(s => s.I).ToArray();
+        _dispersive = _net.Segments.Select(s => s.Dispersion is null ? null : new DispersiveKernel(s, plan.Dt)).ToArray();
         _junctions = new JunctionSystem(_net, plan.Dt);
         _junctions.Bind(_jv);
     }
@@ -53,7 +55,15 @@ internal sealed class LeapfrogSolver
             if (energy is null)
             {
                 // A segment's voltage pass reads only its own currents, so both passes fuse per segment.
-                for (int s = 0; s < _kernels.Length; s++) _kernels[s].Step(_segV[s], _segI[s]);
+                for (int s = 0; s < _kernels.Length; s++)
+                {
+                    if (_dispersive[s] is { } dk)
+                    {
+                        dk.UpdateCurrents(_segV[s], _segI[s]);
+                        dk.UpdateVoltages(_segV[s], _segI[s]);
+                    }
+                    else _kernels[s].Step(_segV[s], _segI[s]);
+                }
             }
             else
             {
@@ -61,10 +71,14 @@ internal sealed class LeapfrogSolver
                 for (int s = 0; s < _kernels.Length; s++)
                 {
                     var seg = _net.Segments[s];
-                    product += seg.Plan.Segment.L * seg.Dz * _kernels[s].UpdateCurrentsTrackingProduct(seg.V, seg.I);
+                    product += seg.Plan.Segment.L * seg.Dz * (_dispersive[s] is { } dk
+                        ? dk.UpdateCurrents(seg.V, seg.I)
+                        : _kernels[s].UpdateCurrentsTrackingProduct(seg.V, seg.I));
                 }
                 energy[n] = 0.5 * product + ElectricEnergy();
-                for (int s = 0; s < _kernels.Length; s++) _kernels[s].UpdateVoltages(_segV[s], _segI[s]);
+                for (int s = 0; s < _kernels.Length; s++)
+                    if (_dispersive[s] is { } dk) dk.UpdateVoltages(_segV[s], _segI[s]);
+                    else _kernels[s].UpdateVoltages(_segV[s], _segI[s]);
             }
             _junctions.Solve(src.Value(t), src.Value(t + dt));
             var x = _junctions.Voltages;

@@ -29,6 +29,8 @@ internal sealed class GridSegment
     /// <summary>I[0..n-1]: half-cell currents, positive from start to end, at the latest half step.</summary>
     public double[] I = [];
     public double CurrentA, CurrentB, VoltA, VoltB;
+    /// <summary>The pole-residue fit of the segment's frequency-dependent loss; null for constant R and G.</summary>
+    public Lines.RationalLoss? Dispersion;
 }
 
 /// <summary>What a lumped branch stands for, so probes can find the driver's and the load's currents.</summary>

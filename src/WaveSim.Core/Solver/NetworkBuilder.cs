@@ -14,7 +14,7 @@ internal static class NetworkBuilder
         {
             Role = BranchRole.Source, Label = "driver", A = -1, B = source, R = scenario.Source.Resistance, DrivenA = true,
         });
-        BuildLine(net, plan, ref planIndex, scenario.Line, scenario.Load, source, "", "");
+        BuildLine(net, scenario, plan, ref planIndex, scenario.Line, scenario.Load, source, "", "");
         return net;
     }
 
@@ -30,7 +30,7 @@ internal static class NetworkBuilder
         return net.Branches.Count - 1;
     }
 
-    static void BuildLine(Network net, GridPlan plan, ref int planIndex, IReadOnlyList<LineElement> line, LoadSpec load,
+    static void BuildLine(Network net, Scenario scenario, GridPlan plan, ref int planIndex, IReadOnlyList<LineElement> line, LoadSpec load,
         int start, string path, string where)
     {
         var nodes = new LineNodes { StartJunction = start };
@@ -54,8 +54,26 @@ internal static class NetworkBuilder
                     var gs = new GridSegment { Plan = sp, Start = node, End = end, StartPosition = pos, LinePath = path };
                     net.Segments.Add(gs);
                     double dz = gs.Dz;
-                    net.Junctions[node].C += s.C * dz / 2; net.Junctions[node].G += s.G * dz / 2;
-                    net.Junctions[end].C += s.C * dz / 2; net.Junctions[end].G += s.G * dz / 2;
+                    if (s.Loss is not null)
+                    {
+                        // The end half cells: C∞ on the junction and each shunt term as a lumped R-C branch to ground.
+                        var fit = gs.Dispersion = DispersiveKernel.FitFor(s, scenario, plan.Dt);
+                        foreach (int j in new[] { node, end })
+                        {
+                            net.Junctions[j].C += fit.InstantCapacitance * dz / 2; net.Junctions[j].G += fit.G * dz / 2;
+                            for (int k = 0; k < fit.ShuntPoles.Length; k++)
+                            {
+                                double b = fit.ShuntResidues[k] * dz / 2;
+                                if (b > 0)
+                                    AddBranch(net, new LumpedBranch { Role = BranchRole.Shunt, Label = $"{at} dielectric {k}", A = j, B = -1, R = 1 / b, C = b / fit.ShuntPoles[k] });
+                            }
+                        }
+                    }
+                    else
+                    {
+                        net.Junctions[node].C += s.C * dz / 2; net.Junctions[node].G += s.G * dz / 2;
+                        net.Junctions[end].C += s.C * dz / 2; net.Junctions[end].G += s.G * dz / 2;
+                    }
                     // The start junction node: its downstream edge is this segment's first half cell.
                     nodes.Nodes.Add((pos, NodeRef.OnJunction(node), pendingUp.ToArray(), [new EdgeRef(si, 0, -1)]));
                     nodes.Nodes.AddInterior(si, sp.Cells, pos, dz);
@@ -79,7 +97,7 @@ internal static class NetworkBuilder
                 case Branch br:
                 {
                     string sub = path.Length == 0 ? br.Name : path + "/" + br.Name;
-                    BuildLine(net, plan, ref planIndex, br.Line, br.Load, node, sub, at);
+                    BuildLine(net, scenario, plan, ref planIndex, br.Line, br.Load, node, sub, at);
                     break;
                 }
             }

@@ -23,7 +23,8 @@ simulation: { duration: 27 ns, resolution: 10 }
     [Fact]
     public void Report_with_terminations_writes_one_page_and_prints_the_verdict_counts()
     {
-        string dir = CliRunner.TempDir();
+        using var cli = new CliRunner();
+        string dir = cli.Dir;
         try
         {
             string file = Path.Combine(dir, "ringing.yaml");
@@ -49,7 +50,8 @@ simulation: { duration: 27 ns, resolution: 10 }
     [Fact]
     public void Report_of_a_bit_pattern_shows_eyes_and_judges_the_receiver_on_its_eye()
     {
-        string dir = CliRunner.TempDir();
+        using var cli = new CliRunner();
+        string dir = cli.Dir;
         try
         {
             string file = Path.Combine(dir, "bits.yaml");

@@ -1,0 +1,84 @@
+using WaveSim.Core.Lines;
+using WaveSim.Core.Model;
+using WaveSim.Core.Units;
+using YamlDotNet.RepresentationModel;
+
+namespace WaveSim.Core.Scenarios;
+
+/// <summary>
+/// Reads a segment's frequency-dependent loss: <c>loss: { r_dc, skin_at, r_skin, tand, er, at }</c> beside z0/delay or l/c,
+/// or <c>loss: frequency</c> beside a geometry (the cross-section's own skin-effect and wideband dielectric models).
+/// </summary>
+internal static class SegmentLoss
+{
+    /// <summary>The keys accepted under a segment's <c>loss</c> mapping.</summary>
+    public static readonly string[] Keys = ["r_dc", "skin_at", "r_skin", "tand", "er", "at"];
+
+    /// <summary>Default reference frequency of a geometry's er and tan δ when it gives no <c>at</c>, Hz (common practice, no source).</summary>
+    public const double DefaultReferenceFrequency = 1e9;
+
+    /// <summary>The segment with its <c>loss</c> mapping applied; unchanged when there is none.</summary>
+    public static Segment Apply(YamlMap m, Segment seg, bool rGiven, bool gGiven)
+    {
+        var node = m.Node("loss");
+        if (node is null) return seg;
+        if (node is not YamlMappingNode)
+            throw m.Error(node, m.Join("loss"), "expected a mapping such as { r_dc: 5 ohm/m, skin_at: 1 GHz, r_skin: 40 ohm/m, tand: 0.02, er: 4.3, at: 1 GHz } ('loss: frequency' is for geometry segments)");
+        var l = m.Map("loss", Keys)!;
+        string[] skin = ["r_dc", "skin_at", "r_skin"], diel = ["tand", "er", "at"];
+        bool hasSkin = skin.Any(l.Has), hasDiel = diel.Any(l.Has);
+        if (!hasSkin && !hasDiel) throw l.Error("give the conductor part (r_dc, skin_at, r_skin), the dielectric part (tand, er, at), or both");
+        var loss = new FrequencyLoss();
+        double r = seg.R, g = seg.G;
+        if (hasSkin)
+        {
+            foreach (string k in skin)
+                if (!l.Has(k)) throw l.Error($"missing '{l.Join(k)}': the conductor part needs all of r_dc, skin_at and r_skin");
+            if (rGiven) throw m.Error(m.Node("r")!, m.Join("r"), "give the resistance either as 'r' or in 'loss' (r_dc, r_skin), not both");
+            double rdc = l.Positive("r_dc", Dimension.ResistancePerLength)!.Value;
+            double f = l.Positive("skin_at", Dimension.Frequency)!.Value;
+            double rs = l.Positive("r_skin", Dimension.ResistancePerLength)!.Value;
+            if (!(rs > rdc * (1 + 1e-9)))
+                throw l.Error(l.Node("r_skin")!, l.Join("r_skin"), $"must be greater than r_dc ({Quantity.Format(rdc, "Ω")}/m): the skin effect raises the resistance");
+            loss = loss with { RDc = rdc, SkinCorner = FrequencyLoss.CornerFromResistance(rdc, rs, f) };
+            r = rdc;
+        }
+        if (hasDiel)
+        {
+            foreach (string k in diel)
+                if (!l.Has(k)) throw l.Error($"missing '{l.Join(k)}': the dielectric part needs all of tand, er and at");
+            if (gGiven) throw m.Error(m.Node("g")!, m.Join("g"), "give the dielectric loss either as 'g' or in 'loss' (tand, er, at), not both");
+            double tand = l.NonNegative("tand", Dimension.Number)!.Value;
+            double er = l.Positive("er", Dimension.Number)!.Value;
+            double at = l.Positive("at", Dimension.Frequency)!.Value;
+            if (er < 1) throw l.Error(l.Node("er")!, l.Join("er"), $"must be at least 1 (got {er})");
+            if (tand >= 1) throw l.Error(l.Node("tand")!, l.Join("tand"), $"must be below 1 (got {tand})");
+            loss = loss with { Dielectric = DjordjevicSarkar.Fit(er, tand, at), ReferencePermittivity = er, Filling = 1 };
+            g = 0;
+        }
+        return seg with { R = r, G = g, Loss = loss };
+    }
+
+    /// <summary>The frequency-dependent loss of a cross-section (its skin-effect corner and a wideband dielectric); null when it has neither.</summary>
+    /// <param name="p">The cross-section's parameters.</param>
+    /// <param name="er">The substrate's er.</param>
+    /// <param name="tand">The substrate's tan δ.</param>
+    public static FrequencyLoss? FromGeometry(LineParameters p, double er, double tand)
+    {
+        bool skin = p.RDc > 0 && p.SkinFactor > 0, diel = tand > 0;
+        if (!skin && !diel) return null;
+        var loss = new FrequencyLoss();
+        if (skin) loss = loss with { RDc = p.RDc, SkinCorner = FrequencyLoss.CornerFromGeometry(p) };
+        if (diel)
+        {
+            // The filling factor q from the cross-section's own effective loss tangent, tan δ_eff = tan δ·er·q/ε_eff.
+            double q = Math.Min(1, p.LossTangent * p.EpsEff / (tand * er));
+            loss = loss with
+            {
+                Dielectric = DjordjevicSarkar.Fit(er, tand, p.FrequencyHz ?? DefaultReferenceFrequency),
+                ReferencePermittivity = er, Filling = q,
+            };
+        }
+        return loss;
+    }
+}
