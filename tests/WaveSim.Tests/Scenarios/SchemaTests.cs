@@ -92,6 +92,7 @@ public class SchemaTests
         Assert.Equal(ScenarioLoader.ReceiverKeys.Order(), Keys(defs["load"]!["anyOf"]![1]!["properties"]!["receiver"]));
         Assert.Equal(ScenarioLoader.ProbeKeys.Order(), Keys(s["properties"]!["probes"]!["items"]));
         Assert.Equal(ScenarioLoader.SimulationKeys.Order(), Keys(s["properties"]!["simulation"]));
+        Assert.Equal(SegmentLoss.Keys.Order(), Keys(item["segment"]!["properties"]!["loss"]!["anyOf"]![1]));
         var geometry = item["segment"]!["properties"]!["geometry"]!;
         Assert.Equal(CrossSectionCatalog.AllKeys.Select(k => k.Name).Append("kind").Order(), Keys(geometry));
         Assert.Equal(CrossSectionCatalog.Kinds.Select(k => k.Name).Order(), geometry["properties"]!["kind"]!["enum"]!.AsArray().Select(x => x!.GetValue<string>()).Order());
