@@ -66,7 +66,7 @@ public static class EyePlot
         AxisPainter.Grid(canvas, g);
 
         // Opacity falls with the trace count so a dense eye still shows where traces crowd (floor keeps rare paths visible).
-        byte alpha = (byte)Math.Clamp(900.0 / Math.Max(1, traces.Count), 14, 220);
+        byte alpha = (byte)Math.Clamp(3000.0 / Math.Max(1, traces.Count), 40, 230);
         canvas.Save();
         canvas.ClipRect(g.PlotArea);
         using (SKPaint stroke = Ink.Stroke(TraceColour.WithAlpha(alpha), 1.25f))
