@@ -22,8 +22,10 @@ internal static class ImageOutput
             ?? throw new InvalidOperationException($"Could not create a {width}×{height} drawing surface.");
         draw(surface.Canvas);
         surface.Canvas.Flush();
-        using SKImage image = surface.Snapshot();
-        using SKData png = image.Encode(SKEncodedImageFormat.Png, 100);
+        // Charts are flat colour: a light zlib level with the Sub filter is several times faster than the default and about as small.
+        using SKPixmap pixels = surface.PeekPixels();
+        using SKData png = pixels.Encode(new SKPngEncoderOptions(SKPngEncoderFilterFlags.Sub, 3))
+            ?? throw new InvalidOperationException("Could not encode the PNG.");
         return png.ToArray();
     }
 

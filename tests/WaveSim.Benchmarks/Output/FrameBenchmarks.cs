@@ -1,0 +1,55 @@
+using BenchmarkDotNet.Attributes;
+using WaveSim.Core;
+using WaveSim.Core.Output;
+using WaveSim.Core.Rendering;
+using WaveSim.Core.Scenarios;
+using WaveSim.Core.Solver;
+
+namespace WaveSim.Benchmarks.Output;
+
+/// <summary>
+/// A run with 200 frames of a 1000-cell line: the simulation with its snapshots, then the frames rendered in parallel at
+/// 1280x720. Target: a few seconds in all.
+/// </summary>
+public class FrameBenchmarks
+{
+    const int Frames = 200;
+    SimulationResult _result = null!;
+    string _dir = "";
+
+    /// <summary>Runs the scenario once with the frame snapshots, outside the timing of <see cref="RenderFrames"/>.</summary>
+    [GlobalSetup]
+    public void Setup()
+    {
+        _result = RunWithSnapshots();
+        _dir = Directory.CreateTempSubdirectory("wavesim-frames-").FullName;
+    }
+
+    static SimulationResult RunWithSnapshots()
+    {
+        // 5 ns line at dt = 100 ps / 20 = 5 ps: 1000 cells.
+        var s = ScenarioLoader.Parse(@"
+source: { waveform: pulse, high: 1 V, rise: 100 ps, width: 1 ns, delay: 0.5 ns, resistance: 20 ohm }
+line: [ { segment: { length: 1 m, z0: 50 ohm, delay: 5 ns } } ]
+load: open
+simulation: { duration: 30 ns }
+", "frames.yaml");
+        return Simulate.Run(s, new SimulationOptions { SnapshotTimes = RunPictures.SnapshotTimes(s, Frames) });
+    }
+
+    /// <summary>The simulation with 200 frame snapshots and the space-time rows.</summary>
+    [Benchmark]
+    public int SimulateWithSnapshots() => RunWithSnapshots().Snapshots.Count;
+
+    /// <summary>Rendering and writing the 200 frames (in parallel).</summary>
+    [Benchmark]
+    public int RenderFrames()
+    {
+        var (lo, hi) = RunPictures.VoltageRange(_result);
+        return FrameSequence.WriteAll(_dir, RunPictures.Layout(_result), RunPictures.Frames(_result, Frames), lo, hi, 1280, 720).Count;
+    }
+
+    /// <summary>Removes the frames.</summary>
+    [GlobalCleanup]
+    public void Cleanup() => Directory.Delete(_dir, recursive: true);
+}
