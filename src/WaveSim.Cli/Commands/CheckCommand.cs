@@ -31,6 +31,8 @@ public static class CheckCommand
             {
                 o.WriteLine($"{s.Title}");
                 PrintPlan(o, plan);
+                foreach (var (where, fit) in Simulate.LossFits(s, plan))
+                    o.WriteLine($"  {where}: frequency-dependent loss fitted with {fit.SeriesPoles.Length} series and {fit.ShuntPoles.Length} shunt poles; largest error over the band: internal impedance {100 * fit.InternalMaxError:F3} %, permittivity {100 * fit.PermittivityMaxError:F3} %");
                 foreach (var p in problems) o.WriteLine("problem: " + p);
                 if (problems.Count == 0) o.WriteLine("no problems found");
             }
@@ -48,6 +50,8 @@ public static class CheckCommand
         {
             o.WriteLine($"  {sp.Where,-22} {Quantity.Format(sp.Segment.Length, "m"),10} {Quantity.Format(sp.Segment.Z0, "Ω", 3),10} {Quantity.Format(sp.Segment.Delay, "s"),10} {sp.Cells,8} {sp.Courant,9:F6}");
             var s = sp.Segment;
+            if (s.Loss is not null)
+                o.WriteLine($"    frequency-dependent loss: cells sized by the front delay {Quantity.Format(s.FrontDelay, "s")} (the fastest, high-frequency wave); in-band delay {Quantity.Format(s.Delay, "s")}");
             if (s.Derived is { } d)
                 o.WriteLine($"    from {d.Kind} geometry: Z0 {Quantity.Format(d.Z0, "Ω")}, eps_eff {d.EpsEff:G4}, {Quantity.Format(d.DelayPerLength, "s")}/m, L {Quantity.Format(s.L, "H")}/m, C {Quantity.Format(s.C, "F")}/m, R {Quantity.Format(s.R, "Ω")}/m, G {Quantity.Format(s.G, "S")}/m");
         }
