@@ -100,6 +100,19 @@ simulation: { duration: 3 ns, output_step: 10 ps }
     }
 
     [Fact]
+    public void A_plan_beyond_the_limits_is_refused_with_its_estimate_and_writes_nothing()
+    {
+        // 100 cells at 5 ps for 10 s: 2e12 steps, 2e14 cell updates and 1e12 output rows, over the 2 GB and 1e11 limits (the README's rule).
+        using var cli = new CliRunner();
+        string outDir = Path.Combine(cli.Dir, "out");
+        var (code, _, err) = CliRunner.Run("run", cli.Write("big.yaml", Good.Replace("duration: 3 ns", "duration: 10 s")), "--out", outDir);
+        Assert.Equal(2, code);
+        Assert.Matches(@"the run needs about [\d.]+ [kMGTP]?B of memory \(limit 2 GB\)", err);
+        Assert.Contains("--force", err);
+        Assert.False(Directory.Exists(outDir));
+    }
+
+    [Fact]
     public void A_missing_scenario_file_is_a_one_line_error()
     {
         var (code, _, err) = CliRunner.Run("run", "/nonexistent/x.yaml");
