@@ -8,6 +8,22 @@ namespace WaveSim.Tests;
 /// <summary>Builds scenarios from YAML text and runs them, for tests.</summary>
 internal static class TestScenarios
 {
+    /// <summary>
+    /// PRBS7 (ITU-T O.150) through a matched lossless line: 50 ohm driver, 50 ohm line, 50 ohm load. The line only delays and
+    /// halves the waveform (Pozar, Microwave Engineering, 4th ed., eq. 2.35 with Γ = 0 at both ends), so the eye at the load opens
+    /// to the full 0.5 V swing, and against Vih 0.35 V / Vil 0.15 V it is open.
+    /// </summary>
+    public const string MatchedBits = @"title: bits net
+source: { waveform: bits, prbs: 7, bit_time: 200 ps, low: 0 V, high: 1 V, rise: 40 ps, resistance: 50 ohm }
+line:
+  - segment: { length: 200 mm, z0: 50 ohm, delay: 5 ns/m }
+load: { r: 50 ohm, receiver: { vih: 0.35 V, vil: 0.15 V } }
+probes:
+  - { name: drv, at: source }
+  - { name: rx, at: load }
+simulation: { duration: 27 ns, resolution: 10 }
+";
+
     public static Scenario Parse(string yaml) => ScenarioLoader.Parse(yaml, "test.yaml");
 
     public static SimulationResult Run(string yaml, SimulationOptions? options = null) => Simulate.Run(Parse(yaml), options);

@@ -28,9 +28,7 @@ public class ExitCodeTests
     [Fact]
     public void About_reports_the_version_set_in_Directory_Build_props()
     {
-        var dir = new DirectoryInfo(AppContext.BaseDirectory);
-        while (!File.Exists(Path.Combine(dir!.FullName, "Directory.Build.props"))) dir = dir.Parent;
-        string props = File.ReadAllText(Path.Combine(dir.FullName, "Directory.Build.props"));
+        string props = File.ReadAllText(Repository.PathOf("Directory.Build.props"));
         string version = System.Text.RegularExpressions.Regex.Match(props, "<Version>([^<]+)</Version>").Groups[1].Value;
         var (code, json, _) = CliRunner.Run("about", "--json");
         Assert.Equal(0, code);

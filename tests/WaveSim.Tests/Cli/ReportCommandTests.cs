@@ -7,18 +7,6 @@ namespace WaveSim.Tests.Cli;
 /// <summary>`wavesim report`: writes report.html, prints the JSON summary, adds terminations and eyes when asked or applicable.</summary>
 public class ReportCommandTests
 {
-    // PRBS7 (ITU-T O.150) through a matched lossless line; the eye at the load opens to the 0.5 V swing
-    // (Pozar eq. 2.35 with Gamma = 0 at both ends), so against Vih 0.35 V / Vil 0.15 V it is open: pass.
-    const string Bits = @"title: bits net
-source: { waveform: bits, prbs: 7, bit_time: 200 ps, low: 0 V, high: 1 V, rise: 40 ps, resistance: 50 ohm }
-line:
-  - segment: { length: 200 mm, z0: 50 ohm, delay: 5 ns/m }
-load: { r: 50 ohm, receiver: { vih: 0.35 V, vil: 0.15 V } }
-probes:
-  - { name: drv, at: source }
-  - { name: rx, at: load }
-simulation: { duration: 27 ns, resolution: 10 }
-";
 
     [Fact]
     public void Report_with_terminations_writes_one_page_and_prints_the_verdict_counts()
@@ -55,7 +43,7 @@ simulation: { duration: 27 ns, resolution: 10 }
         try
         {
             string file = Path.Combine(dir, "bits.yaml");
-            File.WriteAllText(file, Bits);
+            File.WriteAllText(file, TestScenarios.MatchedBits);
             var (code, stdout, err) = CliRunner.Run("report", file, "--out", Path.Combine(dir, "out"));
             Assert.True(code == 0, err);
             Assert.Contains("1 probe(s) pass, 0 fail", stdout);

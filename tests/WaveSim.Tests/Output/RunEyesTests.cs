@@ -6,24 +6,12 @@ namespace WaveSim.Tests.Output;
 /// <summary>Eye diagrams of bit-pattern runs.</summary>
 public class RunEyesTests
 {
-    // PRBS7 (ITU-T O.150) driven through a matched lossless line: 50 ohm driver, 50 ohm line, 50 ohm load.
-    const string Matched = @"title: eye test
-source: { waveform: bits, prbs: 7, bit_time: 200 ps, low: 0 V, high: 1 V, rise: 40 ps, resistance: 50 ohm }
-line:
-  - segment: { length: 200 mm, z0: 50 ohm, delay: 5 ns/m }
-load: { r: 50 ohm, receiver: { vih: 0.35 V, vil: 0.15 V } }
-probes:
-  - { name: drv, at: source }
-  - { name: rx, at: load }
-simulation: { duration: 27 ns, resolution: 10 }
-";
-
     [Fact]
     public void A_matched_lossless_line_delivers_an_eye_as_tall_as_the_swing()
     {
         // By construction: a matched lossless line only delays and halves the waveform (Pozar, Microwave Engineering,
         // 4th ed., eq. 2.35 with Γ = 0 at both ends), so every bit centre sits at 0 or 0.5 V: eye height = swing = 0.5 V.
-        var r = TestScenarios.Run(Matched);
+        var r = TestScenarios.Run(TestScenarios.MatchedBits);
         var eyes = RunEyes.Compute(r);
         Assert.Equal(2, eyes.Count);
         var rx = eyes.Single(e => e.Probe.Name == "rx");
@@ -41,7 +29,7 @@ simulation: { duration: 27 ns, resolution: 10 }
     public void Run_writes_an_eye_picture_per_probe_and_an_eye_object_in_the_summary()
     {
         using var cli = new CliRunner();
-        string file = cli.Write("eye.yaml", Matched);
+        string file = cli.Write("eye.yaml", TestScenarios.MatchedBits);
         string outDir = Path.Combine(cli.Dir, "out");
         var (code, _, err) = CliRunner.Run("run", file, "--out", outDir);
         Assert.True(code == 0, err);

@@ -14,14 +14,7 @@ namespace WaveSim.Tests.Scenarios;
 /// </summary>
 public class SchemaTests
 {
-    static readonly string Root = FindRoot();
-
-    static string FindRoot()
-    {
-        var d = new DirectoryInfo(AppContext.BaseDirectory);
-        while (d is not null && !File.Exists(Path.Combine(d.FullName, "WaveSim.sln"))) d = d.Parent;
-        return d?.FullName ?? throw new InvalidOperationException("WaveSim.sln not found above the test folder");
-    }
+    static readonly string Root = Repository.Root;
 
     static JsonNode SchemaNode() => JsonNode.Parse(File.ReadAllText(Path.Combine(Root, "scenarios", "scenario.schema.json")))!;
 
@@ -49,7 +42,7 @@ public class SchemaTests
     }
 
     public static IEnumerable<object[]> Examples() =>
-        Directory.GetFiles(Path.Combine(FindRoot(), "scenarios"), "*.yaml").Select(f => new object[] { Path.GetFileName(f) });
+        Directory.GetFiles(Repository.PathOf("scenarios"), "*.yaml").Select(f => new object[] { Path.GetFileName(f) });
 
     [Theory]
     [MemberData(nameof(Examples))]
