@@ -2,6 +2,7 @@ using System.CommandLine;
 using WaveSim.Core;
 using WaveSim.Core.Model;
 using WaveSim.Core.Scenarios;
+using WaveSim.Core.Units;
 
 namespace WaveSim.Cli;
 
@@ -27,7 +28,19 @@ public static class CommonOptions
         return ScenarioLoader.Load(path);
     }
 
-    /// <summary>The output folder: the option's value, or out/&lt;scenario file name without extension&gt;.</summary>
-    public static string OutputDir(string? option, string scenarioPath) =>
-        option ?? Path.Combine("out", Path.GetFileNameWithoutExtension(scenarioPath));
+    /// <summary>The output folder: the option's value, or out/&lt;scenario file name without extension&gt;&lt;suffix&gt;.</summary>
+    public static string OutputDir(string? option, string scenarioPath, string suffix = "") =>
+        option ?? Path.Combine("out", Path.GetFileNameWithoutExtension(scenarioPath) + suffix);
+
+    /// <summary>--settle-band: the settling band of the signal-quality figures.</summary>
+    public static Option<string> SettleBand() =>
+        new("--settle-band") { Description = "Settling band as a fraction or percentage of the swing", DefaultValueFactory = _ => "5 %" };
+
+    /// <summary>Reads a settling band: "5 %" or "0.05".</summary>
+    public static double ParseBand(string text)
+    {
+        var (v, _) = Quantity.ParseAny(text, Dimension.Percent, Dimension.Number);
+        if (!(v > 0 && v < 0.5)) throw new InputException($"--settle-band: expected a band between 0 and 50 % of the swing, got '{text}'");
+        return v;
+    }
 }

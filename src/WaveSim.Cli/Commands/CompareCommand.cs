@@ -38,7 +38,7 @@ public static class CompareCommand
                 result = CaptureComparison.Run(s, cap, probeName, ParseAlign(pr.GetValue(align)!),
                     new SimulationOptions { Force = pr.GetValue(force), Progress = bar }, ct);
 
-            string dir = pr.GetValue(outDir) ?? Path.Combine("out", Path.GetFileNameWithoutExtension(path) + "-compare");
+            string dir = CommonOptions.OutputDir(pr.GetValue(outDir), path, "-compare");
             var summary = CompareOutputs.Json(result);
             using (var output = new OutputFolder(dir))
             {

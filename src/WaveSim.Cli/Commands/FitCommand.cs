@@ -50,7 +50,7 @@ public static class FitCommand
                     Force = pr.GetValue(force),
                 }, ct);
 
-            string dir = pr.GetValue(outDir) ?? Path.Combine("out", Path.GetFileNameWithoutExtension(path) + "-fit");
+            string dir = CommonOptions.OutputDir(pr.GetValue(outDir), path, "-fit");
             var summary = FitOutputs.Json(result);
             using (var output = new OutputFolder(dir))
             {

@@ -22,13 +22,13 @@ public static class ReportCommand
         var json = CommonOptions.Json();
         var force = CommonOptions.Force();
         var terminations = new Option<bool>("--terminations") { Description = "Add the termination comparison (runs every strategy)" };
-        var settle = new Option<string>("--settle-band") { Description = "Settling band as a fraction or percentage of the swing", DefaultValueFactory = _ => "5 %" };
+        var settle = CommonOptions.SettleBand();
         var cmd = new Command("report", "Simulate a scenario and write one self-contained HTML report (report.html)")
         { scenario, outDir, json, force, terminations, settle };
         cmd.SetAction((pr, ct) => Task.FromResult(CommandGuard.Run(pr.InvocationConfiguration.Error, () =>
         {
             string path = pr.GetValue(scenario)!;
-            double band = RunCommand.ParseBand(pr.GetValue(settle)!);
+            double band = CommonOptions.ParseBand(pr.GetValue(settle)!);
             var s = CommonOptions.Load(path);
             string text = File.ReadAllText(path);
             var options = HtmlReport.RunOptions(s, pr.GetValue(force));

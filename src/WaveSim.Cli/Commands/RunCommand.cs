@@ -24,7 +24,7 @@ public static class RunCommand
         var currents = new Option<bool>("--currents") { Description = "Add a panel of probe currents to the waveform plot" };
         var frames = new Option<int>("--frames") { Description = "Write N frames of the voltage along the line to frames/", DefaultValueFactory = _ => 0 };
         var frameSize = new Option<string>("--frame-size") { Description = "Frame size WIDTHxHEIGHT in pixels", DefaultValueFactory = _ => "1280x720" };
-        var settle = new Option<string>("--settle-band") { Description = "Settling band as a fraction or percentage of the swing", DefaultValueFactory = _ => "5 %" };
+        var settle = CommonOptions.SettleBand();
         var fdCheck = new Option<bool>("--check-frequency-domain") { Description = "Cross-check against the frequency-domain solver; also write frequency.csv and frequency.png" };
         var cmd = new Command("run", "Simulate a scenario and write probes.csv, summary.json and pictures")
         { scenario, outDir, json, force, svg, currents, frames, frameSize, settle, fdCheck };
@@ -34,7 +34,7 @@ public static class RunCommand
             int nFrames = pr.GetValue(frames);
             if (nFrames < 0 || nFrames > 100_000) throw new InputException($"--frames: expected 0 to 100000, got {nFrames}");
             var (fw, fh) = ParseSize(pr.GetValue(frameSize)!);
-            double band = ParseBand(pr.GetValue(settle)!);
+            double band = CommonOptions.ParseBand(pr.GetValue(settle)!);
             var s = CommonOptions.Load(path);
             var options = new SimulationOptions { Force = pr.GetValue(force), SnapshotTimes = RunPictures.SnapshotTimes(s, nFrames) };
             SimulationResult result;
@@ -105,14 +105,6 @@ public static class RunCommand
             && int.TryParse(parts[1], NumberStyles.None, CultureInfo.InvariantCulture, out int h) && w >= 160 && h >= 120 && w <= 8192 && h <= 8192)
             return (w, h);
         throw new InputException($"--frame-size: expected WIDTHxHEIGHT between 160x120 and 8192x8192, e.g. 1280x720, got '{text}'");
-    }
-
-    /// <summary>Reads a settling band: "5 %" or "0.05".</summary>
-    public static double ParseBand(string text)
-    {
-        var (v, dim) = Quantity.ParseAny(text, Dimension.Percent, Dimension.Number);
-        if (!(v > 0 && v < 0.5)) throw new InputException($"--settle-band: expected a band between 0 and 50 % of the swing, got '{text}'");
-        return v;
     }
 
     static void PrintSummary(TextWriter o, SimulationResult r, IReadOnlyList<(ProbeTrace Probe, SignalFigures Figures)> figures, IReadOnlyList<ProbeEye> eyes, string dir)

@@ -23,7 +23,7 @@ public static class SweepCommand
         var goal = new Option<string?>("--goal") { Description = "Pick the best point: min:PROBE.FIGURE or max:PROBE.FIGURE (e.g. min:rx.settling)" };
         var limit = new Option<string[]>("--limit") { Description = "A bound the best point must meet, e.g. rx.overshoot<10% (repeatable)" };
         var serial = new Option<bool>("--serial") { Description = "Run the points one at a time on one core (same results)" };
-        var settle = new Option<string>("--settle-band") { Description = "Settling band as a fraction or percentage of the swing", DefaultValueFactory = _ => "5 %" };
+        var settle = CommonOptions.SettleBand();
         var outDir = CommonOptions.Out();
         var json = CommonOptions.Json();
         var force = CommonOptions.Force();
@@ -37,7 +37,7 @@ public static class SweepCommand
             var figures = (pr.GetValue(figure) ?? "").Split(',', StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries)
                 .Select(f => Figure(f)).Distinct().ToArray();
             if (figures.Length == 0) throw new InputException("--figure: give at least one figure, e.g. overshoot,settling");
-            double band = RunCommand.ParseBand(pr.GetValue(settle)!);
+            double band = CommonOptions.ParseBand(pr.GetValue(settle)!);
             var s = CommonOptions.Load(path);
             var probes = s.Probes.Select(p => p.Name).ToArray();
             var g = pr.GetValue(goal) is { } gt ? SweepGoal.Parse(gt, probes) : null;

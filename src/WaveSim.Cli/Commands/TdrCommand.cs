@@ -62,7 +62,7 @@ public static class TdrCommand
 
             string title = cap is null ? $"{s.Title}: simulated reflectometer" : $"{Path.GetFileName(cap.Source)}: reflectometer trace";
             string? yaml = pr.GetValue(toScenario) is null ? null : TdrScenarioWriter.Yaml(result, title);
-            string dir = pr.GetValue(outDir) ?? Path.Combine("out", Path.GetFileNameWithoutExtension(path) + "-tdr");
+            string dir = CommonOptions.OutputDir(pr.GetValue(outDir), path, "-tdr");
             var summary = TdrOutputs.Json(result);
             using (var output = new OutputFolder(dir))
             {

@@ -23,7 +23,7 @@ public static class TerminationsCommand
         var maxOvershoot = new Option<string>("--max-overshoot") { Description = "Largest acceptable overshoot at the receiver", DefaultValueFactory = _ => "10 %" };
         var maxSettling = new Option<string>("--max-settling") { Description = "Largest acceptable settling time at the receiver", DefaultValueFactory = _ => "5 ns" };
         var level = new Option<string?>("--thevenin-level") { Description = "Thevenin termination level (default: halfway between the source's low and high)" };
-        var settle = new Option<string>("--settle-band") { Description = "Settling band as a fraction or percentage of the swing", DefaultValueFactory = _ => "5 %" };
+        var settle = CommonOptions.SettleBand();
         var serial = new Option<bool>("--serial") { Description = "Run the strategies one at a time" };
         var cmd = new Command("terminations", "Compare termination strategies on the scenario's net and recommend part values")
         { scenario, outDir, json, series, maxOvershoot, maxSettling, level, settle, serial, force };
@@ -36,7 +36,7 @@ public static class TerminationsCommand
                 MaxOvershootPct = ParseOvershoot(pr.GetValue(maxOvershoot)!),
                 MaxSettlingS = Parse("--max-settling", pr.GetValue(maxSettling)!, Dimension.Time),
                 TheveninLevelV = pr.GetValue(level) is { } lv ? Parse("--thevenin-level", lv, Dimension.Voltage) : null,
-                SettleBand = RunCommand.ParseBand(pr.GetValue(settle)!),
+                SettleBand = CommonOptions.ParseBand(pr.GetValue(settle)!),
                 Serial = pr.GetValue(serial),
                 Force = pr.GetValue(force),
             };
