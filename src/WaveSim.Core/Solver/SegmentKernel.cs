@@ -35,7 +35,7 @@ internal sealed class SegmentKernel
     {
         double a = Ci1, b = Ci2;
         int n = i.Length;
-        for (int k = 0; k < n; k++) i[k] = a * i[k] + b * (v[k] - v[k + 1]);
+        for (int k = 0; k < n; k++) i[k] = LeapfrogKernel.Current(i[k], v[k], v[k + 1], a, b);
     }
 
     /// <summary>Like <see cref="UpdateCurrents"/>, also returning Σ I^{n−1/2}·I^{n+1/2} for the energy the staggered grid conserves.</summary>
@@ -45,7 +45,7 @@ internal sealed class SegmentKernel
         for (int k = 0; k < i.Length; k++)
         {
             double old = i[k];
-            i[k] = a * old + b * (v[k] - v[k + 1]);
+            i[k] = LeapfrogKernel.Current(old, v[k], v[k + 1], a, b);
             sum += old * i[k];
         }
         return sum;
@@ -56,6 +56,6 @@ internal sealed class SegmentKernel
     {
         double a = Cv1, b = Cv2;
         int n = i.Length;
-        for (int k = 1; k < n; k++) v[k] = a * v[k] + b * (i[k - 1] - i[k]);
+        for (int k = 1; k < n; k++) v[k] = LeapfrogKernel.Voltage(v[k], i[k - 1], i[k], a, b);
     }
 }
