@@ -40,12 +40,14 @@ public class BenchCommandTests
         Assert.Equal(0, code);
         Assert.Contains("lossless line, 300 cells x 50 steps", output);
         Assert.Contains("cell updates/s", output);
+        Assert.Contains("fastest of 3 repetitions", output);
     }
 
     [Theory]
     [InlineData("bench --cells 1", "--cells")]
     [InlineData("bench --steps 0", "--steps")]
     [InlineData("bench --cells many", "--cells")]
+    [InlineData("bench --repeat 0", "--repeat")]
     public void Bad_sizes_give_a_one_line_error_naming_the_option(string args, string option)
     {
         var (code, _, err) = Invoke(args);
