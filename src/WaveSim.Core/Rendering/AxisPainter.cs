@@ -9,7 +9,14 @@ internal static class AxisPainter
     {
         using SKPaint grid = Ink.Stroke(Palette.Grid, 1f);
         grid.IsAntialias = false;
+        using SKPaint minor = Ink.Stroke(Palette.GridMinor, 1f);
+        minor.IsAntialias = false;
         SKRect r = g.PlotArea;
+        // Minor lines first, so a major line drawn over the same column wins.
+        if (vertical)
+            foreach (double t in g.X.MinorTicks) { float px = Ink.Snap(g.XToPixel(t)); canvas.DrawLine(px, r.Top, px, r.Bottom, minor); }
+        if (horizontal)
+            foreach (double t in g.Y.MinorTicks) { float py = Ink.Snap(g.YToPixel(t)); canvas.DrawLine(r.Left, py, r.Right, py, minor); }
         if (vertical)
             foreach (double t in g.X.Ticks) { float px = Ink.Snap(g.XToPixel(t)); canvas.DrawLine(px, r.Top, px, r.Bottom, grid); }
         if (horizontal)
@@ -22,10 +29,17 @@ internal static class AxisPainter
         ink.IsAntialias = false;
         SKRect r = g.PlotArea;
         canvas.DrawRect(Ink.Snap(r.Left), Ink.Snap(r.Top), MathF.Round(r.Width) - 1, MathF.Round(r.Height) - 1, ink);
+        float minorLength = tickLength * 0.55f;
         if (xTicks)
+        {
             foreach (double t in g.X.Ticks) { float px = Ink.Snap(g.XToPixel(t)); canvas.DrawLine(px, r.Bottom, px, r.Bottom + tickLength, ink); }
+            foreach (double t in g.X.MinorTicks) { float px = Ink.Snap(g.XToPixel(t)); canvas.DrawLine(px, r.Bottom, px, r.Bottom + minorLength, ink); }
+        }
         if (yTicks)
+        {
             foreach (double t in g.Y.Ticks) { float py = Ink.Snap(g.YToPixel(t)); canvas.DrawLine(r.Left - tickLength, py, r.Left, py, ink); }
+            foreach (double t in g.Y.MinorTicks) { float py = Ink.Snap(g.YToPixel(t)); canvas.DrawLine(r.Left - minorLength, py, r.Left, py, ink); }
+        }
     }
 
     public static void YTickLabels(SKCanvas canvas, ChartGeometry g, SKFont font, float gap)

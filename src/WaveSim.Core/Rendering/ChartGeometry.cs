@@ -40,10 +40,10 @@ public sealed class ChartGeometry
         : (float)(PlotArea.Bottom - Y.Fraction(y) * PlotArea.Height);
 
     /// <summary>Data X, SI, at pixel column <paramref name="px"/>.</summary>
-    public double PixelToX(double px) => X.Min + (px - PlotArea.Left) / PlotArea.Width * (X.Max - X.Min);
+    public double PixelToX(double px) => X.ValueAt((px - PlotArea.Left) / PlotArea.Width);
 
     /// <summary>Data Y, SI, at pixel row <paramref name="py"/>.</summary>
     public double PixelToY(double py) => YDown
-        ? Y.Min + (py - PlotArea.Top) / PlotArea.Height * (Y.Max - Y.Min)
-        : Y.Min + (PlotArea.Bottom - py) / PlotArea.Height * (Y.Max - Y.Min);
+        ? Y.ValueAt((py - PlotArea.Top) / PlotArea.Height)
+        : Y.ValueAt((PlotArea.Bottom - py) / PlotArea.Height);
 }

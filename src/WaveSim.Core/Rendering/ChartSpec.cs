@@ -9,4 +9,10 @@ public sealed record ChartSpec(string Title, string XLabel, string XUnit, IReadO
 {
     /// <summary>Fixed X range; null spans the data exactly.</summary>
     public AxisRange? XRange { get; init; }
+
+    /// <summary>
+    /// How X values are placed. Default <see cref="AxisKind.Linear"/>; <see cref="AxisKind.Logarithmic"/> needs every
+    /// finite X value (series, markers, <see cref="XRange"/>) greater than 0.
+    /// </summary>
+    public AxisKind XKind { get; init; } = AxisKind.Linear;
 }

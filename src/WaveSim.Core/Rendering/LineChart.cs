@@ -65,7 +65,10 @@ public static class LineChart
         float plotWidth = right - left;
         if (plotWidth < 20 || heights.Any(h => h < 10))
             throw new ArgumentException($"A {width}×{height} px image is too small for {n} panel(s) with these labels (plot {plotWidth:F0} px wide, left {left:F0}, heights {string.Join(",", heights.Select(h => h.ToString("F0")))}, y {string.Join(";", yRanges.Select(r => r.ToString()))}).");
-        var xAxis = AxisScale.Exact(spec.XLabel, spec.XUnit, xMin, xMax, Math.Clamp((int)(plotWidth / (fs * 6.5f)), 2, 12));
+        int xIntervals = Math.Clamp((int)(plotWidth / (fs * 6.5f)), 2, 12);
+        var xAxis = spec.XKind == AxisKind.Logarithmic
+            ? AxisScale.Logarithmic(spec.XLabel, spec.XUnit, xMin, xMax, xIntervals)
+            : AxisScale.Exact(spec.XLabel, spec.XUnit, xMin, xMax, xIntervals);
         // The X prefix must agree across panels, so every panel uses this one axis.
         var panels = new List<PanelLayout>(n);
         float y = top;
@@ -219,7 +222,14 @@ public static class LineChart
             foreach (Series s in p.Series)
                 foreach (double x in s.X)
                     if (double.IsFinite(x)) { min = Math.Min(min, x); max = Math.Max(max, x); }
-        return Widened(min, max);
+        return spec.XKind == AxisKind.Logarithmic ? WidenedLog(min, max) : Widened(min, max);
+    }
+
+    /// <summary>A usable logarithmic range: no data → 1..10, one value v → v/2..2v (common practice, no source).</summary>
+    static (double, double) WidenedLog(double min, double max)
+    {
+        if (!double.IsFinite(min) || !double.IsFinite(max)) return (1, 10);
+        return max > min ? (min, max) : (min / 2, max * 2);
     }
 
     /// <summary>
@@ -256,13 +266,22 @@ public static class LineChart
         ArgumentNullException.ThrowIfNull(spec);
         if (spec.Panels is null || spec.Panels.Count == 0) throw new ArgumentException("A chart needs at least one panel.", nameof(spec));
         if (spec.XRange is { } xr && !(xr.Max > xr.Min)) throw new ArgumentException($"X range {xr.Min}..{xr.Max} must have max > min.", nameof(spec));
+        bool logX = spec.XKind == AxisKind.Logarithmic;
+        if (logX && spec.XRange is { } lr && !(lr.Min > 0))
+            throw new ArgumentException($"X range {lr.Min}..{lr.Max} is on a logarithmic axis and must start above 0.", nameof(spec));
         foreach (ChartPanel p in spec.Panels)
         {
             if (!(p.HeightWeight > 0)) throw new ArgumentException($"Panel '{p.YLabel}' height weight must be greater than 0.", nameof(spec));
             if (p.YRange is { } yr && !(yr.Max > yr.Min)) throw new ArgumentException($"Panel '{p.YLabel}' Y range {yr.Min}..{yr.Max} must have max > min.", nameof(spec));
             foreach (Series s in p.Series)
+            {
                 if (s.X.Length != s.Y.Length)
                     throw new ArgumentException($"Series '{s.Name}' has {s.X.Length} X values but {s.Y.Length} Y values.", nameof(spec));
+                if (logX && Array.FindIndex(s.X, x => x <= 0) is var i and >= 0)
+                    throw new ArgumentException($"Series '{s.Name}' has X = {s.X[i].ToString(System.Globalization.CultureInfo.InvariantCulture)} at point {i}; a logarithmic X axis needs values greater than 0.", nameof(spec));
+            }
+            if (logX && p.Markers.FirstOrDefault(m => m.X <= 0) is { } bad)
+                throw new ArgumentException($"Marker '{bad.Label}' has X = {bad.X.ToString(System.Globalization.CultureInfo.InvariantCulture)}; a logarithmic X axis needs values greater than 0.", nameof(spec));
         }
     }
 }

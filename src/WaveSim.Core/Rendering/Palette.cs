@@ -35,6 +35,9 @@ public static class Palette
     /// <summary>Grid lines inside the plot area.</summary>
     public static SKColor Grid { get; } = new(0xE3, 0xE3, 0xE3);
 
+    /// <summary>Minor grid lines (2..9 × each decade of a logarithmic axis), fainter than <see cref="Grid"/>.</summary>
+    public static SKColor GridMinor { get; } = new(0xF0, 0xF0, 0xF0);
+
     /// <summary>Axis frame, ticks and all text.</summary>
     public static SKColor Ink { get; } = new(0x26, 0x26, 0x26);
 

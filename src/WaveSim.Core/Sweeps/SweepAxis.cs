@@ -29,6 +29,24 @@ public sealed partial record SweepAxis(string KeyPath, Dimension Dimension, IRea
     [GeneratedRegex(@"^\s*([+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?)\s*(.*?)\s*$")]
     private static partial Regex NumberAndUnit();
 
+    /// <summary>How the values were given. Default <see cref="SweepSpacing.List"/> (values as listed).</summary>
+    public SweepSpacing Spacing { get; init; } = SweepSpacing.List;
+
+    /// <summary>Smallest ratio of largest to smallest value for which a list is charted on a logarithmic axis: two decades.</summary>
+    public const double LogListRatio = 100;
+
+    /// <summary>
+    /// True when charts against this axis use a logarithmic scale: for a <c>:log</c> range, and for a list whose values are
+    /// all greater than 0 and span at least two decades (largest / smallest ≥ <see cref="LogListRatio"/>, e.g. 1pF,10pF,100pF).
+    /// An evenly spaced range always charts linearly, as do lists with a value of 0 or less.
+    /// </summary>
+    public bool ChartsOnLogAxis => Spacing switch
+    {
+        SweepSpacing.Logarithmic => true,
+        SweepSpacing.List => Values.Count > 0 && Values.All(v => v > 0 && double.IsFinite(v)) && Values.Max() >= LogListRatio * Values.Min() * (1 - 1e-12),
+        _ => false,
+    };
+
     /// <summary>The SI unit symbol of the values as the scenario reader accepts it (e.g. "ohm", "F", "s/m"; "" for plain numbers).</summary>
     public string Unit => UnitOf(Dimension);
 
@@ -73,7 +91,7 @@ public sealed partial record SweepAxis(string KeyPath, Dimension Dimension, IRea
             double f = (double)i / (count - 1);
             list[i] = i == count - 1 ? b : log ? a * Math.Pow(b / a, f) : a + (b - a) * f;
         }
-        return new SweepAxis(key, dim, list);
+        return new SweepAxis(key, dim, list) { Spacing = log ? SweepSpacing.Logarithmic : SweepSpacing.Linear };
     }
 
     static SweepAxis ParseList(string text, string key, string range)
@@ -81,7 +99,7 @@ public sealed partial record SweepAxis(string KeyPath, Dimension Dimension, IRea
         var items = range.Split(',');
         if (items.Length > MaxCount) throw Bad(text, $"more than {MaxCount} values");
         var (values, dim) = ReadValues(text, items);
-        return new SweepAxis(key, dim, values);
+        return new SweepAxis(key, dim, values) { Spacing = SweepSpacing.List };
     }
 
     /// <summary>Reads number-with-unit texts; those without a unit take the unit of the last one.</summary>

@@ -3,7 +3,11 @@ using WaveSim.Core.Units;
 
 namespace WaveSim.Core.Sweeps;
 
-/// <summary>Charts of a sweep: one figure against the first varied key, one panel per probe, one line per value of the other keys.</summary>
+/// <summary>
+/// Charts of a sweep: one figure against the first varied key, one panel per probe, one line per value of the other keys.
+/// The X axis is logarithmic when the first key charts on one (<see cref="SweepAxis.ChartsOnLogAxis"/>); the other keys
+/// only name the lines, so their spacing does not matter here.
+/// </summary>
 public static class SweepPictures
 {
     /// <summary>The chart of <paramref name="figure"/> (a <see cref="Analysis.SignalFigures.FigureNames"/> entry); a figure that does not apply leaves a gap.</summary>
@@ -27,7 +31,10 @@ public static class SweepPictures
                 Markers = series.SelectMany(IsolatedPoints).ToList(),
             });
         }
-        return new ChartSpec($"{FigureSelector.Stem(figure).Replace('_', ' ')} against {first.KeyPath}", first.KeyPath, first.DisplayUnit, panels);
+        return new ChartSpec($"{FigureSelector.Stem(figure).Replace('_', ' ')} against {first.KeyPath}", first.KeyPath, first.DisplayUnit, panels)
+        {
+            XKind = first.ChartsOnLogAxis ? AxisKind.Logarithmic : AxisKind.Linear,
+        };
     }
 
     /// <summary>Points whose neighbours are gaps (the figure does not apply there): a line cannot show them, so they get a ring.</summary>
