@@ -43,8 +43,8 @@ public static class CoupledStripline
         return (z * RatioKPrimeOverK(t1 * t2, lnKeP), z * RatioKPrimeOverK(t1 / t2, lnKoP));
     }
 
-    /// <summary>1 - e^(-2y) = 2 e^-y sinh y, without cancellation for small y.</summary>
-    static double OneMinusExpMinus2(double y) => 2 * Math.Exp(-y) * Math.Sinh(y);
+    /// <summary>1 - e^(-2y), as 2 e^-y sinh y for small y (no cancellation) and directly for large y (no overflow).</summary>
+    static double OneMinusExpMinus2(double y) => y < 1 ? 2 * Math.Exp(-y) * Math.Sinh(y) : 1 - Math.Exp(-2 * y);
 
     /// <summary>K(k')/K(k) given k and ln k'.</summary>
     static double RatioKPrimeOverK(double k, double lnKPrime)
