@@ -10,7 +10,8 @@ namespace WaveSim.Cli.Commands;
 
 /// <summary>
 /// `wavesim xsection KIND --width 8mil ...`: per-length Z0, eps_eff, delay, L, C, R and G of a line cross-section,
-/// or, with --z0, the one dimension that gives that impedance.
+/// or, with --z0, the one dimension that gives that impedance. A coupled pair prints Z0 even/odd, eps_eff even/odd,
+/// Zdiff, Zcomm and the coupling coefficient, then the pair as a differential and as a common-mode line; --z0 targets Zdiff.
 /// </summary>
 public static class XSectionCommand
 {
@@ -20,7 +21,7 @@ public static class XSectionCommand
         var kind = new Argument<string>("kind") { Description = "Line kind: " + string.Join(", ", CrossSectionCatalog.Kinds.Select(k => k.Name)) };
         kind.AcceptOnlyFromAmong(CrossSectionCatalog.Kinds.Select(k => k.Name).ToArray());
         var dims = CrossSectionCatalog.AllKeys.Select(d => new Option<string>("--" + d.Name) { Description = Describe(d.Name), HelpName = "value" }).ToList();
-        var z0 = new Option<string>("--z0") { Description = "Target impedance for synthesis, e.g. \"50 ohm\"; leave one dimension out", HelpName = "ohm" };
+        var z0 = new Option<string>("--z0") { Description = "Target impedance for synthesis, e.g. \"50 ohm\" (Zdiff for a coupled pair); leave one dimension out", HelpName = "ohm" };
         var solve = new Option<string>("--solve") { Description = "The dimension to solve for with --z0 (default: the one left out)", HelpName = "key" };
         var json = new Option<bool>("--json") { Description = "Print one JSON object (SI units) instead of a table" };
 
@@ -80,6 +81,14 @@ public static class XSectionCommand
 
         CrossSectionSpec spec = CrossSection.FromDictionary(info.Name, raw, Context, "--", free);
         SynthesisResult? solved = free is null ? null : CrossSection.Solve(spec, free, target);
+        if (info.Pair)
+        {
+            CoupledLineParameters pair = CrossSection.ComputePair(solved is null ? spec : spec.With(solved.Dimension, solved.Value));
+            foreach (string w in pair.Warnings) error.WriteLine("warning: " + w);
+            if (asJson) WritePairJson(pair, solved, output);
+            else WritePairTable(pair, solved, output);
+            return ExitCodes.Ok;
+        }
         LineParameters line = solved?.Line ?? CrossSection.Compute(spec);
 
         foreach (string w in line.Warnings) error.WriteLine("warning: " + w);
@@ -88,23 +97,97 @@ public static class XSectionCommand
         return ExitCodes.Ok;
     }
 
-    static void WriteJson(LineParameters p, SynthesisResult? solved, TextWriter output)
+    static JsonObject LineJson(LineParameters p)
     {
-        var o = new JsonObject { ["kind"] = p.Kind };
-        if (solved is not null)
-            o[solved.Dimension == "er" ? "er" : solved.Dimension + "_m"] = solved.Value;
-        o["z0_ohm"] = p.Z0;
-        o["eps_eff"] = p.EpsEff;
-        o["delay_s_per_m"] = p.DelayPerLength;
-        o["l_h_per_m"] = p.L;
-        o["c_f_per_m"] = p.C;
-        o["r_dc_ohm_per_m"] = p.RDc;
+        var o = new JsonObject
+        {
+            ["z0_ohm"] = p.Z0, ["eps_eff"] = p.EpsEff, ["delay_s_per_m"] = p.DelayPerLength,
+            ["l_h_per_m"] = p.L, ["c_f_per_m"] = p.C, ["r_dc_ohm_per_m"] = p.RDc,
+        };
         if (p.FrequencyHz is double f)
         {
             o["frequency_hz"] = f;
             o["r_ac_ohm_per_m"] = p.RAc;
             o["g_s_per_m"] = p.G;
         }
+        return o;
+    }
+
+    static void WritePairJson(CoupledLineParameters p, SynthesisResult? solved, TextWriter output)
+    {
+        var o = new JsonObject { ["kind"] = p.Kind };
+        if (solved is not null)
+            o[solved.Dimension == "er" ? "er" : solved.Dimension + "_m"] = solved.Value;
+        o["z0_even_ohm"] = p.Z0Even;
+        o["z0_odd_ohm"] = p.Z0Odd;
+        o["eps_eff_even"] = p.Even.EpsEff;
+        o["eps_eff_odd"] = p.Odd.EpsEff;
+        o["z_diff_ohm"] = p.Zdiff;
+        o["z_comm_ohm"] = p.Zcomm;
+        o["coupling"] = p.Coupling;
+        o["differential"] = LineJson(p.Differential);
+        o["common"] = LineJson(p.Common);
+        o["warnings"] = new JsonArray(p.Warnings.Select(w => (JsonNode?)JsonValue.Create(w)).ToArray());
+        output.WriteLine(o.ToJsonString(new JsonSerializerOptions { WriteIndented = true }));
+    }
+
+    static void WritePairTable(CoupledLineParameters p, SynthesisResult? solved, TextWriter output)
+    {
+        var rows = new List<(string Name, string Value)>();
+        if (solved is not null) rows.Add(SolvedRow(solved));
+        rows.Add(("Z0 even", Quantity.Format(p.Z0Even, "Ω")));
+        rows.Add(("Z0 odd", Quantity.Format(p.Z0Odd, "Ω")));
+        rows.Add(("eps_eff even", p.Even.EpsEff.ToString("G5", CultureInfo.InvariantCulture)));
+        rows.Add(("eps_eff odd", p.Odd.EpsEff.ToString("G5", CultureInfo.InvariantCulture)));
+        rows.Add(("Zdiff", Quantity.Format(p.Zdiff, "Ω") + "  (2 Z0 odd)"));
+        rows.Add(("Zcomm", Quantity.Format(p.Zcomm, "Ω") + "  (Z0 even / 2)"));
+        rows.Add(("coupling k", p.Coupling.ToString("0.0000", CultureInfo.InvariantCulture)));
+        foreach (var (name, line) in new[] { ("differential", p.Differential), ("common", p.Common) })
+        {
+            rows.Add(($"{name} delay", DelayText(line)));
+            rows.AddRange(LossRows(line).Select(r => ($"{name} {r.Name}", r.Value)));
+        }
+        Print(p.Kind, rows, output);
+    }
+
+    static (string, string) SolvedRow(SynthesisResult solved)
+    {
+        string v = CrossSection.FormatValue(solved.Dimension, solved.Value);
+        if (solved.Dimension != "er")
+            v += $"  ({(solved.Value / 25.4e-6).ToString("0.###", CultureInfo.InvariantCulture)} mil)";
+        return ($"{solved.Dimension} (solved)", v);
+    }
+
+    static string DelayText(LineParameters p) =>
+        $"{Quantity.Format(p.DelayPerLength, "s/m")}  ({Quantity.Format(p.DelayPerLength * 0.0254, "s/in")})";
+
+    static IEnumerable<(string Name, string Value)> LossRows(LineParameters p)
+    {
+        yield return ("L", Quantity.Format(p.L, "H/m"));
+        yield return ("C", Quantity.Format(p.C, "F/m"));
+        yield return ("R dc", Quantity.Format(p.RDc, "Ω/m"));
+        if (p.FrequencyHz is double f)
+        {
+            string at = " at " + Quantity.Format(f, "Hz");
+            yield return ("R" + at, Quantity.Format(p.RAc, "Ω/m"));
+            yield return ("G" + at, Quantity.Format(p.G, "S/m"));
+        }
+    }
+
+    static void Print(string kind, List<(string Name, string Value)> rows, TextWriter output)
+    {
+        int width = rows.Max(r => r.Name.Length) + 2;
+        output.WriteLine(kind);
+        foreach (var (name, value) in rows) output.WriteLine("  " + name.PadRight(width) + value);
+    }
+
+    static void WriteJson(LineParameters p, SynthesisResult? solved, TextWriter output)
+    {
+        var o = new JsonObject { ["kind"] = p.Kind };
+        if (solved is not null)
+            o[solved.Dimension == "er" ? "er" : solved.Dimension + "_m"] = solved.Value;
+        foreach (var (key, value) in LineJson(p).ToList())
+            o[key] = value?.DeepClone();
         o["warnings"] = new JsonArray(p.Warnings.Select(w => (JsonNode?)JsonValue.Create(w)).ToArray());
         output.WriteLine(o.ToJsonString(new JsonSerializerOptions { WriteIndented = true }));
     }
@@ -112,27 +195,11 @@ public static class XSectionCommand
     static void WriteTable(LineParameters p, SynthesisResult? solved, TextWriter output)
     {
         var rows = new List<(string Name, string Value)>();
-        if (solved is not null)
-        {
-            string v = CrossSection.FormatValue(solved.Dimension, solved.Value);
-            if (solved.Dimension != "er")
-                v += $"  ({(solved.Value / 25.4e-6).ToString("0.###", CultureInfo.InvariantCulture)} mil)";
-            rows.Add(($"{solved.Dimension} (solved)", v));
-        }
+        if (solved is not null) rows.Add(SolvedRow(solved));
         rows.Add(("Z0", Quantity.Format(p.Z0, "Ω")));
         rows.Add(("eps_eff", p.EpsEff.ToString("G5", CultureInfo.InvariantCulture)));
-        rows.Add(("delay", $"{Quantity.Format(p.DelayPerLength, "s/m")}  ({Quantity.Format(p.DelayPerLength * 0.0254, "s/in")})"));
-        rows.Add(("L", Quantity.Format(p.L, "H/m")));
-        rows.Add(("C", Quantity.Format(p.C, "F/m")));
-        rows.Add(("R dc", Quantity.Format(p.RDc, "Ω/m")));
-        if (p.FrequencyHz is double f)
-        {
-            string at = " at " + Quantity.Format(f, "Hz");
-            rows.Add(("R" + at, Quantity.Format(p.RAc, "Ω/m")));
-            rows.Add(("G" + at, Quantity.Format(p.G, "S/m")));
-        }
-        int width = rows.Max(r => r.Name.Length) + 2;
-        output.WriteLine(p.Kind);
-        foreach (var (name, value) in rows) output.WriteLine("  " + name.PadRight(width) + value);
+        rows.Add(("delay", DelayText(p)));
+        rows.AddRange(LossRows(p));
+        Print(p.Kind, rows, output);
     }
 }

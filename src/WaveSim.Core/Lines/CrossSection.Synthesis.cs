@@ -14,7 +14,7 @@ public static partial class CrossSection
     /// </summary>
     /// <param name="spec">The cross-section; the free key may be absent (any value given is ignored).</param>
     /// <param name="freeDimension">A key from the kind's <see cref="LineKindInfo.Solvable"/> list.</param>
-    /// <param name="targetZ0">Target impedance, ohm, &gt; 0.</param>
+    /// <param name="targetZ0">Target impedance, ohm, &gt; 0; for a coupled pair, the differential impedance Zdiff.</param>
     /// <param name="frequencyHz">Frequency for R_ac and G of the result; null as in <see cref="Compute"/>.</param>
     /// <exception cref="InputException">The key cannot be solved for, or no value in the range gives the target.</exception>
     public static SynthesisResult Solve(CrossSectionSpec spec, string freeDimension, double targetZ0, double? frequencyHz = null)
@@ -25,6 +25,7 @@ public static partial class CrossSection
         if (!(targetZ0 > 0) || !double.IsFinite(targetZ0))
             throw new InputException($"{spec.Context}: {spec.Label("z0")} must be > 0 ohm (got {targetZ0} ohm)");
 
+        string what = kind.Pair ? "Zdiff" : "Z0";
         (double lo, double hi) = SearchRange(spec, kind.Name, free);
         // Checks every other value (and their relations) once, with the user's key names.
         Compute(spec.With(free, lo), frequencyHz);
@@ -44,8 +45,8 @@ public static partial class CrossSection
             }
             (prevX, prevG) = (x, g);
         }
-        throw new InputException($"{spec.Context}: no {spec.Label(free)} between {FormatValue(free, lo)} and {FormatValue(free, hi)} gives Z0 = {Quantity.Format(targetZ0, "ohm")}; "
-                                 + $"Z0 there spans {Quantity.Format(zMin * targetZ0, "ohm")} to {Quantity.Format(zMax * targetZ0, "ohm")}");
+        throw new InputException($"{spec.Context}: no {spec.Label(free)} between {FormatValue(free, lo)} and {FormatValue(free, hi)} gives {what} = {Quantity.Format(targetZ0, "ohm")}; "
+                                 + $"{what} there spans {Quantity.Format(zMin * targetZ0, "ohm")} to {Quantity.Format(zMax * targetZ0, "ohm")}");
     }
 
     static (double Lo, double Hi) SearchRange(CrossSectionSpec spec, string kind, string free)
@@ -64,6 +65,9 @@ public static partial class CrossSection
         {
             (CrossSectionCatalog.Microstrip, "width") => (Get("height") / Wide, Get("height") * Wide),
             (CrossSectionCatalog.Microstrip, "height") => (Get("width") / Wide, Get("width") * Wide),
+            // Kirschning and Jansen's formulas stay finite for u = w/h in 0.01..100 (their stated range is 0.1..10).
+            (CrossSectionCatalog.CoupledMicrostrip, "width") => (Get("height") / 100, Get("height") * 100),
+            (CrossSectionCatalog.CoupledStripline, "width") => (Get("spacing") / Wide, Get("spacing") * Wide),
             (CrossSectionCatalog.Stripline, "width") => (Get("spacing") / Wide, Get("spacing") * Wide),
             (CrossSectionCatalog.Stripline, "spacing") =>
                 (Math.Max(Get("width") / Wide, (Get("thickness", 0) + 2 * Math.Abs(Get("offset", 0))) * (1 + 1e-6)), Get("width") * Wide),

@@ -6,7 +6,8 @@ namespace WaveSim.Core.Lines;
 /// <summary>
 /// The cross-section calculator: turns a <see cref="CrossSectionSpec"/> into per-length R, L, G, C with the
 /// closed-form formula of its kind (see <see cref="Microstrip"/>, <see cref="Stripline"/>, <see cref="CoaxialLine"/>,
-/// <see cref="ParallelWires"/>, <see cref="TwistedPair"/>), reads specs from text and solves for a target Z0.
+/// <see cref="ParallelWires"/>, <see cref="TwistedPair"/>, and the coupled pairs <see cref="CoupledMicrostrip"/> and
+/// <see cref="CoupledStripline"/>), reads specs from text and solves for a target Z0.
 /// </summary>
 /// <remarks>
 /// Loss model: R_dc from the copper cross-section (strip w t, round wire pi d^2/4 each, coax inner conductor);
@@ -17,7 +18,7 @@ namespace WaveSim.Core.Lines;
 /// </remarks>
 public static partial class CrossSection
 {
-    /// <summary>Analyses the cross-section.</summary>
+    /// <summary>Analyses the cross-section; a coupled pair gives its differential line (<see cref="ComputePair"/> has both modes).</summary>
     /// <param name="spec">The kind and its SI values.</param>
     /// <param name="frequencyHz">Frequency for R_ac and G, Hz; null uses the spec's "at" value, or DC only without it.</param>
     /// <returns>The per-length parameters and any range warnings.</returns>
@@ -25,6 +26,7 @@ public static partial class CrossSection
     /// <exception cref="NumericalException">The formula broke down for extreme (but valid) values.</exception>
     public static LineParameters Compute(CrossSectionSpec spec, double? frequencyHz = null)
     {
+        if (CrossSectionCatalog.Find(spec.Kind, spec.Context).Pair) return ComputePair(spec, frequencyHz).Differential;
         try
         {
             return ComputeChecked(spec, frequencyHz);

@@ -19,6 +19,10 @@ public static class CrossSectionCatalog
     public const string Wires = "wires";
     /// <summary>Twisted pair (Lefferson 1971).</summary>
     public const string Twisted = "twisted";
+    /// <summary>Edge-coupled pair of surface microstrips (Kirschning and Jansen 1984).</summary>
+    public const string CoupledMicrostrip = "coupled-microstrip";
+    /// <summary>Edge-coupled pair of striplines centred between two planes (Cohn 1955).</summary>
+    public const string CoupledStripline = "coupled-stripline";
 
     static DimensionInfo Len(string name, bool required, string text) => new(name, Dimension.Length, required, text);
     static DimensionInfo Er(string text) => new("er", Dimension.Number, true, text);
@@ -68,6 +72,22 @@ public static class CrossSectionCatalog
             Er("insulation relative permittivity"),
             Len("pitch", false, "length of one full twist (default: untwisted)"),
         ], ["diameter", "spacing", "er"]),
+        new(CoupledMicrostrip, "edge-coupled pair of surface microstrips (Kirschning and Jansen 1984); synthesis targets Zdiff",
+        [
+            Len("width", true, "strip width w (each strip)"),
+            Len("gap", true, "edge-to-edge gap s between the strips"),
+            Len("height", true, "substrate height h (strip to plane)"),
+            Len("thickness", false, "strip thickness t (default 0: no conductor loss; impedances are for t = 0)"),
+            Er("substrate relative permittivity"),
+        ], ["width"]) { Pair = true },
+        new(CoupledStripline, "edge-coupled pair centred between two planes (Cohn 1955 exact, thick-strip correction); synthesis targets Zdiff",
+        [
+            Len("width", true, "strip width w (each strip)"),
+            Len("gap", true, "edge-to-edge gap s between the strips"),
+            Len("spacing", true, "plane-to-plane spacing b"),
+            Len("thickness", false, "strip thickness t (default 0: no conductor loss)"),
+            Er("relative permittivity"),
+        ], ["width"]) { Pair = true },
     ];
 
     /// <summary>Every key any kind accepts, each once, in catalogue order (for building command-line options).</summary>

@@ -7,6 +7,9 @@ namespace WaveSim.Core.Lines;
 /// <param name="Solvable">The keys that synthesis may solve for (Z0 is monotonic in each).</param>
 public sealed record LineKindInfo(string Name, string Description, IReadOnlyList<DimensionInfo> Dimensions, IReadOnlyList<string> Solvable)
 {
+    /// <summary>True for an edge-coupled pair (two strips, even and odd modes; see <see cref="CoupledLineParameters"/>).</summary>
+    public bool Pair { get; init; }
+
     /// <summary>The kind's keys followed by the common keys.</summary>
     public IEnumerable<DimensionInfo> AllKeys => Dimensions.Concat(CrossSectionCatalog.Common);
 }

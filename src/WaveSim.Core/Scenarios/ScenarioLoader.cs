@@ -17,7 +17,7 @@ public static class ScenarioLoader
     /// <summary>The keys accepted under <c>source</c>.</summary>
     public static readonly string[] SourceKeys = ["waveform", "low", "high", "rise", "fall", "delay", "width", "period", "frequency", "bit_time", "pattern", "prbs", "file", "resistance"];
     /// <summary>The keys accepted under <c>segment</c>.</summary>
-    public static readonly string[] SegmentKeys = ["length", "z0", "delay", "velocity", "eps_eff", "r", "l", "g", "c", "geometry", "loss"];
+    public static readonly string[] SegmentKeys = ["length", "z0", "delay", "velocity", "eps_eff", "r", "l", "g", "c", "geometry", "loss", "mode"];
     /// <summary>The keys accepted under <c>shunt</c> and <c>series</c>.</summary>
     public static readonly string[] LumpedKeys = ["r", "l", "c"];
     /// <summary>The keys accepted under <c>branch</c>.</summary>
@@ -224,6 +224,7 @@ public static class ScenarioLoader
         double? rGiven = m.NonNegative("r", Dimension.ResistancePerLength);
         double? gGiven = m.NonNegative("g", Dimension.ConductancePerLength);
         if (m.Has("geometry")) return SegmentGeometry.Read(m, length, rGiven, gGiven, rise);
+        if (m.Has("mode")) throw m.Error(m.Node("mode")!, m.Join("mode"), "only a segment with a coupled-pair geometry has a mode: remove this key or add a geometry");
         double r = rGiven ?? 0;
         double g = gGiven ?? 0;
         if (m.Has("z0"))

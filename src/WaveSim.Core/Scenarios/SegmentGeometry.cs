@@ -16,6 +16,9 @@ namespace WaveSim.Core.Scenarios;
 /// With <c>loss: frequency</c> the segment instead carries the cross-section's frequency-dependent loss
 /// (<see cref="FrequencyLoss"/>: skin effect R_dc·√(1 + s/ω0) and the Djordjevic-Sarkar dielectric fitted to er and tan δ at
 /// <c>at</c>, or at 1 GHz without it); <c>loss: constant</c> (the default) keeps the constant R and G.
+/// A coupled pair (<c>kind: coupled-microstrip</c> or <c>coupled-stripline</c>) stands as one line in the mode given by
+/// <c>mode</c>: <c>differential</c> (the default; Z0 = Zdiff = 2 Z0o, odd-mode eps_eff, R of both strips in series) or
+/// <c>common</c> (Z0 = Zcomm = Z0e/2, even-mode eps_eff, the strips in parallel); see <see cref="CoupledLineParameters"/>.
 /// </remarks>
 internal static class SegmentGeometry
 {
@@ -34,7 +37,7 @@ internal static class SegmentGeometry
         }
         string context = $"{m.File}:{node.Start.Line}:{node.Start.Column}: {m.Join("geometry")}";
         var spec = CrossSection.FromDictionary(raw, context);
-        var p = CrossSection.Compute(spec);
+        var p = ReadPairMode(m, spec) is PairMode pairMode ? CrossSection.ComputePair(spec).For(pairMode) : CrossSection.Compute(spec);
         if (m.Node("loss") is { } lossNode)
         {
             string? mode = (lossNode as YamlScalarNode)?.Value;
@@ -54,5 +57,20 @@ internal static class SegmentGeometry
         double at = p.FrequencyHz ?? (rise > 0 ? 0.35 / rise : 0);
         double rDerived = p.FrequencyHz is { } f ? p.ResistanceAt(f) : p.RDc;
         return new Segment(length, r ?? rDerived, p.L, g ?? p.ConductanceAt(at), p.C) { Derived = p };
+    }
+
+    /// <summary>The segment's <c>mode</c> for a coupled-pair geometry (default differential); null for a single line.</summary>
+    static PairMode? ReadPairMode(YamlMap m, CrossSectionSpec spec)
+    {
+        bool pair = CrossSectionCatalog.Find(spec.Kind, spec.Context).Pair;
+        if (m.Node("mode") is not { } node) return pair ? PairMode.Differential : null;
+        if (!pair)
+            throw m.Error(node, m.Join("mode"), $"'{spec.Kind}' is a single line; only the coupled kinds ({string.Join(", ", CrossSectionCatalog.Kinds.Where(k => k.Pair).Select(k => k.Name))}) take a mode");
+        return (node as YamlScalarNode)?.Value switch
+        {
+            "differential" => PairMode.Differential,
+            "common" => PairMode.Common,
+            _ => throw m.Error(node, m.Join("mode"), "expected 'differential' (Z0 = 2 Z0 odd, odd-mode delay; the default) or 'common' (Z0 = Z0 even/2, even-mode delay)"),
+        };
     }
 }

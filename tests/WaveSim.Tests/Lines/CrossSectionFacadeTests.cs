@@ -75,7 +75,7 @@ public class CrossSectionFacadeTests
         var missing = Assert.Throws<InputException>(() => CrossSection.FromDictionary("coax", Geometry(("inner", "1mm"), ("er", "2")), "xsection", "--"));
         Assert.Equal("xsection: missing '--outer' for coax (required: --inner, --outer, --er)", missing.Message);
         var kind = Assert.Throws<InputException>(() => CrossSection.FromDictionary(Geometry(("kind", "waveguide")), "g"));
-        Assert.Equal("g: unknown line kind 'waveguide'; expected one of microstrip, stripline, coax, wires, twisted", kind.Message);
+        Assert.Equal("g: unknown line kind 'waveguide'; expected one of microstrip, stripline, coax, wires, twisted, coupled-microstrip, coupled-stripline", kind.Message);
         var unit = Assert.Throws<InputException>(() => CrossSection.FromDictionary("coax", Geometry(("inner", "1 GHz"), ("outer", "3mm"), ("er", "2")), "g"));
         Assert.StartsWith("g: inner: '1 GHz' is a frequency, not a length", unit.Message);
         Assert.DoesNotContain('\n', unit.Message);
