@@ -4,7 +4,7 @@ namespace WaveSim.Core.Analysis;
 
 /// <summary>
 /// Openings of an eye diagram (SI units; null where they do not apply). Definitions:
-/// <see cref="EyeAnalysis.Compute"/> and FIGURES.md.
+/// <see cref="EyeAnalysis.Compute"/> and the README's "Eye figures" section.
 /// </summary>
 public sealed record EyeFigures
 {

@@ -58,6 +58,13 @@ public sealed record SourceSpec
     /// <summary>The shortest time feature of the waveform (edge, width, period or table spacing), used to choose the solver's step.</summary>
     public double ShortestFeature => SourceWaveform.ShortestFeature(this);
 
+    /// <summary>
+    /// The level the first edge goes to and would stay at: <see cref="High"/> for a step, pulse, trapezoid or bit pattern;
+    /// null for shapes that never hold a level (Gaussian, sine, table).
+    /// </summary>
+    public double? FirstEdgeLevel => Waveform is WaveformKind.Step or WaveformKind.Pulse or WaveformKind.Trapezoid or WaveformKind.Bits
+        ? High : null;
+
     /// <summary>The instant the first edge crosses the 50 % level between low and high, s.</summary>
     public double FirstEdgeMidpoint => SourceWaveform.FirstEdgeMidpoint(this);
 }

@@ -24,6 +24,7 @@ public static class RunSummary
                 VihV = rx?.Vih,
                 VilV = rx?.Vil,
                 SourceEdgeTimeS = src.FirstEdgeMidpoint,
+                FinalLevelV = r.Probes[i].SettledVolts,
             };
             list.Add((r.Probes[i], SignalQuality.Compute(r.Time, r.Probes[i].Volts, options)));
         }

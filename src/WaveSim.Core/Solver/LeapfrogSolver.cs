@@ -13,6 +13,7 @@ internal sealed class LeapfrogSolver
     readonly DispersiveKernel?[] _dispersive;
     readonly JunctionSystem _junctions;
     readonly double[] _jv;
+    readonly double[]? _settled;
     readonly double[][] _segV, _segI;
 
     public LeapfrogSolver(Scenario scenario, GridPlan plan)
@@ -20,9 +21,10 @@ internal sealed class LeapfrogSolver
         _scenario = scenario; _plan = plan;
         _net = NetworkBuilder.Build(scenario, plan);
         foreach (var s in _net.Segments) { s.V = new double[s.Cells + 1]; s.I = new double[s.Cells]; }
-        DcOperatingPoint.Apply(_net, scenario.Source.InitialLevel);
         _jv = new double[_net.Junctions.Count];
-        foreach (var s in _net.Segments) { _jv[s.Start] = s.V[0]; _jv[s.End] = s.V[^1]; }
+        _settled = SettledLevels(scenario);
+        DcOperatingPoint.Apply(_net, scenario.Source.InitialLevel);
+        CopyEndVoltages();
         _kernels = _net.Segments.Select(s => new SegmentKernel(s, plan.Dt)).ToArray();
         _segV = _net.Segments.Select(s => s.V).ToArray();
         _segI = _net.Segments.Select(s => s.I).ToArray();
@@ -99,12 +101,33 @@ internal sealed class LeapfrogSolver
         }
         options.Progress?.Report(1);
         CheckFinite(steps + 1);
-        var probes = _scenario.Probes.Select((p, k) => new ProbeTrace(p.Name, p.Describe(), positions[k], sampler.Volts[k], sampler.Amps[k])).ToList();
+        var probes = _scenario.Probes.Select((p, k) => new ProbeTrace(p.Name, p.Describe(), positions[k], sampler.Volts[k], sampler.Amps[k])
+        {
+            SettledVolts = _settled?[k],
+        }).ToList();
         return new SimulationResult
         {
             Scenario = _scenario, Plan = _plan, Time = sampler.Times, Probes = probes,
             Lines = profiles.Select(p => p.Profile).ToList(), Snapshots = snapshots, Elapsed = clock.Elapsed, Energy = energy,
         };
+    }
+
+    /// <summary>
+    /// Each probe's DC level with the driver held at the level its first edge goes to, or null for sources without one (or
+    /// where that level has no DC solution). This is the level the edge settles to however long the record or the pulse is.
+    /// </summary>
+    double[]? SettledLevels(Scenario scenario)
+    {
+        if (scenario.Source.FirstEdgeLevel is not { } level) return null;
+        try { DcOperatingPoint.Apply(_net, level); }
+        catch (InputException) { return null; }   // an ideal loop that only the edge drives: the figures estimate the level
+        CopyEndVoltages();
+        return ProbeSampler.VoltagesNow(_net, scenario, _jv);
+    }
+
+    void CopyEndVoltages()
+    {
+        foreach (var s in _net.Segments) { _jv[s.Start] = s.V[0]; _jv[s.End] = s.V[^1]; }
     }
 
     double ElectricEnergy()

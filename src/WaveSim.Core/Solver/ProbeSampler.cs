@@ -20,8 +20,24 @@ internal sealed class ProbeSampler
     public ProbeSampler(Network net, Scenario scenario, GridPlan plan, double[] junctionV, out double[] positions)
     {
         _net = net; _dt = plan.Dt; _junctionV = junctionV;
+        _refs = Pick(net, scenario, out positions);
+        int n = _refs.Length;
+        _prevHalf = new double[n]; _prevV = new double[n]; _prevI = new double[n]; _lastV = new double[n];
+        _outTime = OutputTimes(scenario, plan);
+        _v = new double[n][]; _i = new double[n][];
+        for (int p = 0; p < n; p++) { _v[p] = new double[_outTime.Length]; _i[p] = new double[_outTime.Length]; }
+        for (int p = 0; p < n; p++) { _prevHalf[p] = HalfStepCurrent(p); _lastV[p] = Voltage(p); }
+    }
+
+    /// <summary>Every probe's voltage in the network's present state (e.g. a DC operating point), without recording anything.</summary>
+    public static double[] VoltagesNow(Network net, Scenario scenario, double[] junctionV) =>
+        Pick(net, scenario, out _).Select(r => VoltageAt(net, junctionV, r.Node)).ToArray();
+
+    /// <summary>The grid node each probe reads and the edges whose currents it averages, with its snapped position.</summary>
+    static (NodeRef Node, EdgeRef[] Edges, double Weight)[] Pick(Network net, Scenario scenario, out double[] positions)
+    {
         int n = scenario.Probes.Count;
-        _refs = new (NodeRef, EdgeRef[], double)[n];
+        var refs = new (NodeRef, EdgeRef[], double)[n];
         positions = new double[n];
         for (int p = 0; p < n; p++)
         {
@@ -52,13 +68,9 @@ internal sealed class ProbeSampler
                 pick = (e.Position, e.Node, both ? [.. e.Upstream, .. e.Downstream] : [.. e.Upstream, .. e.Downstream], both ? 0.5 : 1);
             }
             positions[p] = pick.pos;
-            _refs[p] = (pick.node, pick.edges, pick.w);
+            refs[p] = (pick.node, pick.edges, pick.w);
         }
-        _prevHalf = new double[n]; _prevV = new double[n]; _prevI = new double[n]; _lastV = new double[n];
-        _outTime = OutputTimes(scenario, plan);
-        _v = new double[n][]; _i = new double[n][];
-        for (int p = 0; p < n; p++) { _v[p] = new double[_outTime.Length]; _i[p] = new double[_outTime.Length]; }
-        for (int p = 0; p < n; p++) { _prevHalf[p] = HalfStepCurrent(p); _lastV[p] = Voltage(p); }
+        return refs;
     }
 
     readonly double[] _junctionV;
@@ -77,11 +89,10 @@ internal sealed class ProbeSampler
         return t;
     }
 
-    double Voltage(int p)
-    {
-        var node = _refs[p].Node;
-        return node.Junction >= 0 ? _junctionV[node.Junction] : _net.Segments[node.Segment].V[node.Index];
-    }
+    double Voltage(int p) => VoltageAt(_net, _junctionV, _refs[p].Node);
+
+    static double VoltageAt(Network net, double[] junctionV, NodeRef node) =>
+        node.Junction >= 0 ? junctionV[node.Junction] : net.Segments[node.Segment].V[node.Index];
 
     double HalfStepCurrent(int p)
     {

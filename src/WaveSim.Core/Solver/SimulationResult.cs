@@ -8,7 +8,14 @@ namespace WaveSim.Core.Solver;
 /// <param name="Position">Its position along its line after snapping to the nearest grid node, m.</param>
 /// <param name="Volts">Voltage at each output instant, V.</param>
 /// <param name="Amps">Current at each output instant, A, positive from source toward load.</param>
-public sealed record ProbeTrace(string Name, string Location, double Position, double[] Volts, double[] Amps);
+public sealed record ProbeTrace(string Name, string Location, double Position, double[] Volts, double[] Amps)
+{
+    /// <summary>
+    /// The probe's DC level with the driver held at the level of its first edge (<see cref="SourceSpec.FirstEdgeLevel"/>), V:
+    /// where the edge settles however short the record or the pulse. Null for sources without such a level.
+    /// </summary>
+    public double? SettledVolts { get; init; }
+}
 
 /// <summary>The node positions of one line (the main line or a branch), for pictures of the whole line.</summary>
 /// <param name="Path">"" for the main line, else the branch names joined by '/'.</param>
