@@ -16,14 +16,7 @@ public static partial class CrossSection
     /// <exception cref="NumericalException">The formula broke down for extreme (but valid) values.</exception>
     public static CoupledLineParameters ComputePair(CrossSectionSpec spec, double? frequencyHz = null)
     {
-        try
-        {
-            return ComputePairChecked(spec, frequencyHz);
-        }
-        catch (ArgumentOutOfRangeException ex)
-        {
-            throw new NumericalException($"{spec.Context}: the {spec.Kind} formula broke down for these dimensions ({ex.Message.ReplaceLineEndings(" ")})");
-        }
+        return Guarded(spec, () => ComputePairChecked(spec, frequencyHz));
     }
 
     static CoupledLineParameters ComputePairChecked(CrossSectionSpec spec, double? frequencyHz)

@@ -27,9 +27,15 @@ public static partial class CrossSection
     public static LineParameters Compute(CrossSectionSpec spec, double? frequencyHz = null)
     {
         if (CrossSectionCatalog.Find(spec.Kind, spec.Context).Pair) return ComputePair(spec, frequencyHz).Differential;
+        return Guarded(spec, () => ComputeChecked(spec, frequencyHz));
+    }
+
+    /// <summary>Runs a formula, reporting a math routine's range failure on extreme (but valid) dimensions as a numerical error.</summary>
+    static T Guarded<T>(CrossSectionSpec spec, Func<T> compute)
+    {
         try
         {
-            return ComputeChecked(spec, frequencyHz);
+            return compute();
         }
         catch (ArgumentOutOfRangeException ex)
         {

@@ -1,6 +1,4 @@
-using System.CommandLine;
 using System.Text.Json;
-using WaveSim.Cli;
 using WaveSim.Core;
 using WaveSim.Core.Lines;
 
@@ -99,20 +97,12 @@ public class CoupledPairTests
         Assert.Empty(CrossSection.ComputePair(Stripline(("width", "0.12mm"), ("thickness", "17um"))).Warnings);
     }
 
-    static (int Code, string Out, string Err) Run(params string[] args)
-    {
-        var sw = new StringWriter();
-        var ew = new StringWriter();
-        int code = Program.BuildRoot().Parse(args).Invoke(new InvocationConfiguration { Output = sw, Error = ew });
-        return (code, sw.ToString(), ew.ToString());
-    }
-
     [Fact]
     public void Xsection_json_of_the_Pozar_coupler_pair()
     {
         // Pozar, Microwave Engineering, 4th ed., Sec. 7.6, 20 dB stripline coupler (from memory): b = 0.32 cm, er = 2.20,
         // W/b = 0.809, S/b = 0.306 for Z0e = 55.28 and Z0o = 45.23 ohm, read from a graph (1 %).
-        var (code, output, err) = Run("xsection", "coupled-stripline", "--width", "2.589mm", "--gap", "0.9792mm", "--spacing", "3.2mm", "--er", "2.2", "--json");
+        var (code, output, err) = CliRunner.Run("xsection", "coupled-stripline", "--width", "2.589mm", "--gap", "0.9792mm", "--spacing", "3.2mm", "--er", "2.2", "--json");
         Assert.Equal(0, code);
         Assert.Contains("perfect conductors", err);
         var root = JsonDocument.Parse(output).RootElement;
@@ -132,19 +122,19 @@ public class CoupledPairTests
     [Fact]
     public void Xsection_solves_the_width_for_Zdiff_and_prints_a_table()
     {
-        var (code, output, _) = Run("xsection", "coupled-microstrip", "--gap", "6mil", "--height", "4mil", "--er", "4.2", "--z0", "100 ohm", "--json");
+        var (code, output, _) = CliRunner.Run("xsection", "coupled-microstrip", "--gap", "6mil", "--height", "4mil", "--er", "4.2", "--z0", "100 ohm", "--json");
         Assert.Equal(0, code);
         var root = JsonDocument.Parse(output).RootElement;
         Assert.True(root.GetProperty("width_m").GetDouble() > 0);
         Assert.InRange(root.GetProperty("z_diff_ohm").GetDouble(), 100 - 1e-6, 100 + 1e-6);
         Assert.True(root.GetProperty("eps_eff_even").GetDouble() > root.GetProperty("eps_eff_odd").GetDouble());
 
-        var (code2, table, _) = Run("xsection", "coupled-microstrip", "--width", "5mil", "--gap", "6mil", "--height", "4mil", "--er", "4.2");
+        var (code2, table, _) = CliRunner.Run("xsection", "coupled-microstrip", "--width", "5mil", "--gap", "6mil", "--height", "4mil", "--er", "4.2");
         Assert.Equal(0, code2);
         foreach (string row in new[] { "Z0 even", "Z0 odd", "eps_eff even", "eps_eff odd", "Zdiff", "Zcomm", "coupling k", "differential delay", "common C" })
             Assert.Contains(row, table);
 
-        var (bad, _, err) = Run("xsection", "coupled-stripline", "--width", "0.1mm", "--gap", "-1mm", "--spacing", "0.3mm", "--er", "4");
+        var (bad, _, err) = CliRunner.Run("xsection", "coupled-stripline", "--width", "0.1mm", "--gap", "-1mm", "--spacing", "0.3mm", "--er", "4");
         Assert.NotEqual(0, bad);
         Assert.Contains("--gap must be > 0 (got -1mm)", err);
         Assert.Single(err.Trim().Split('\n'));

@@ -1,4 +1,3 @@
-using System.CommandLine;
 using System.Text.Json;
 using WaveSim.Cli;
 
@@ -7,18 +6,10 @@ namespace WaveSim.Tests.Lines;
 /// <summary>The `xsection` command, run in-process.</summary>
 public class XSectionCommandTests
 {
-    static (int Code, string Out, string Err) Run(params string[] args)
-    {
-        var sw = new StringWriter();
-        var ew = new StringWriter();
-        int code = Program.BuildRoot().Parse(args).Invoke(new InvocationConfiguration { Output = sw, Error = ew });
-        return (code, sw.ToString(), ew.ToString());
-    }
-
     [Fact]
     public void Coax_json_matches_Pozar_Table_2_1()
     {
-        var (code, output, err) = Run("xsection", "coax", "--inner", "0.81mm", "--outer", "2.95mm", "--er", "2.25", "--json");
+        var (code, output, err) = CliRunner.Run("xsection", "coax", "--inner", "0.81mm", "--outer", "2.95mm", "--er", "2.25", "--json");
         Assert.Equal(0, code);
         Assert.Equal("", err);
         using var doc = JsonDocument.Parse(output);
@@ -38,7 +29,7 @@ public class XSectionCommandTests
     {
         // C2 (M): RG-58, MIL-C-17 nominal dimensions from common cable tables: d = 0.032 in, D = 0.116 in,
         // er = 2.25: Z0 = 51.48 ohm. Tol 0.1 % on the formula.
-        var (code, output, _) = Run("xsection", "coax", "--inner", "0.032 in", "--outer", "0.116in", "--er", "2.25", "--at", "100MHz", "--json");
+        var (code, output, _) = CliRunner.Run("xsection", "coax", "--inner", "0.032 in", "--outer", "0.116in", "--er", "2.25", "--at", "100MHz", "--json");
         Assert.Equal(0, code);
         var root = JsonDocument.Parse(output).RootElement;
         Close.Rel(51.48, root.GetProperty("z0_ohm").GetDouble(), 1e-3);
@@ -50,12 +41,12 @@ public class XSectionCommandTests
     public void Synthesis_prints_the_solved_width_in_metres()
     {
         // Round trip through the command line: the width found for 50 ohm analyses back to 50 ohm.
-        var (code, output, _) = Run("xsection", "microstrip", "--height", "5mil", "--er", "4.2", "--thickness", "0.7mil", "--z0", "50 ohm", "--json");
+        var (code, output, _) = CliRunner.Run("xsection", "microstrip", "--height", "5mil", "--er", "4.2", "--thickness", "0.7mil", "--z0", "50 ohm", "--json");
         Assert.Equal(0, code);
         var root = JsonDocument.Parse(output).RootElement;
         double w = root.GetProperty("width_m").GetDouble();
         Assert.InRange(root.GetProperty("z0_ohm").GetDouble(), 50 - 1e-6, 50 + 1e-6);
-        var (code2, output2, _) = Run("xsection", "microstrip", "--width", w.ToString("R", System.Globalization.CultureInfo.InvariantCulture) + " m",
+        var (code2, output2, _) = CliRunner.Run("xsection", "microstrip", "--width", w.ToString("R", System.Globalization.CultureInfo.InvariantCulture) + " m",
                                       "--height", "5mil", "--er", "4.2", "--thickness", "0.7mil", "--json");
         Assert.Equal(0, code2);
         Assert.InRange(JsonDocument.Parse(output2).RootElement.GetProperty("z0_ohm").GetDouble(), 50 - 1e-6, 50 + 1e-6);
@@ -64,7 +55,7 @@ public class XSectionCommandTests
     [Fact]
     public void Table_output_and_warnings_on_stderr()
     {
-        var (code, output, err) = Run("xsection", "microstrip", "--width", "8mil", "--height", "5mil", "--er", "4.2", "--thickness", "1.4mil", "--tand", "0.02", "--at", "1GHz");
+        var (code, output, err) = CliRunner.Run("xsection", "microstrip", "--width", "8mil", "--height", "5mil", "--er", "4.2", "--thickness", "1.4mil", "--tand", "0.02", "--at", "1GHz");
         Assert.Equal(0, code);
         Assert.Contains("Z0", output);
         Assert.Contains("R at 1 GHz", output);
@@ -78,7 +69,7 @@ public class XSectionCommandTests
     [InlineData("xsection: --width: '8 parsecs' has an unknown unit", "xsection", "microstrip", "--width", "8 parsecs", "--height", "5mil", "--er", "4")]
     public void Bad_input_is_one_line_and_exit_2(string start, params string[] args)
     {
-        var (code, output, err) = Run(args);
+        var (code, output, err) = CliRunner.Run(args);
         Assert.Equal(ExitCodes.BadInput, code);
         Assert.Equal("", output);
         Assert.StartsWith("error: " + start, err);
