@@ -12,7 +12,7 @@ public sealed record SignalFigures
     /// <summary>JSON / CSV names of the figures, in output order. Sweep CSV columns are "&lt;probe&gt;.&lt;name&gt;".</summary>
     public static IReadOnlyList<string> FigureNames { get; } =
     [
-        "low_V", "high_V", "overshoot_pct", "undershoot_pct", "ringback_V", "rise_10_90_s", "fall_90_10_s",
+        "low_V", "high_V", "overshoot_pct", "undershoot_pct", "above_high_V", "below_low_V", "ringback_V", "rise_10_90_s", "fall_90_10_s",
         "delay_50_s", "settling_s", "monotonic", "threshold_crossings", "noise_margin_high_V", "noise_margin_low_V",
     ];
 
@@ -33,6 +33,15 @@ public sealed record SignalFigures
 
     /// <summary>Largest excursion back past the final level (against the edge direction) after the overshoot peak, % of swing (≥ 0).</summary>
     public double? UndershootPct { get; init; }
+
+    /// <summary>
+    /// How far the whole record rises above <see cref="HighV"/> [V] (≥ 0): the worst excursion over every edge, not only the
+    /// first, which is what a part's absolute maximum rating is checked against.
+    /// </summary>
+    public double? AboveHighV { get; init; }
+
+    /// <summary>How far the whole record falls below <see cref="LowV"/> [V] (≥ 0), over every edge.</summary>
+    public double? BelowLowV { get; init; }
 
     /// <summary>Largest peak-to-following-trough drop against the edge direction after the first threshold crossing [V] (≥ 0).</summary>
     public double? RingbackV { get; init; }
@@ -84,7 +93,8 @@ public sealed record SignalFigures
         var pairs = new List<KeyValuePair<string, object?>>
         {
             new("low_V", LowV), new("high_V", HighV), new("overshoot_pct", OvershootPct),
-            new("undershoot_pct", UndershootPct), new("ringback_V", RingbackV), new("rise_10_90_s", Rise1090S),
+            new("undershoot_pct", UndershootPct), new("above_high_V", AboveHighV), new("below_low_V", BelowLowV),
+            new("ringback_V", RingbackV), new("rise_10_90_s", Rise1090S),
             new("fall_90_10_s", Fall9010S), new("delay_50_s", Delay50S), new("settling_s", SettlingS),
             new("monotonic", Monotonic), new("threshold_crossings", ThresholdCrossings),
         };
@@ -122,6 +132,8 @@ public sealed record SignalFigures
         "high_V" => HighV,
         "overshoot_pct" => OvershootPct,
         "undershoot_pct" => UndershootPct,
+        "above_high_V" => AboveHighV,
+        "below_low_V" => BelowLowV,
         "ringback_V" => RingbackV,
         "rise_10_90_s" => Rise1090S,
         "fall_90_10_s" => Fall9010S,

@@ -82,6 +82,7 @@ public static class SignalQuality
             return new SignalFigures
             {
                 LowV = tailMean, HighV = tailMean, ThresholdCrossings = options.HasThresholds ? crossings : 0,
+                AboveHighV = Math.Max(0, vmax - tailMean), BelowLowV = Math.Max(0, tailMean - vmin),
                 HasThresholds = thresholdsGiven,
             };
 
@@ -95,6 +96,8 @@ public static class SignalQuality
         {
             LowV = low,
             HighV = high,
+            AboveHighV = Math.Max(0, vmax - high),
+            BelowLowV = Math.Max(0, low - vmin),
             Rising = rising,
             IsPulse = pulse,
             Monotonic = MonotonicThroughBand(volts, low + Low * swing, low + High * swing, options.MonotonicTolerance * swing),

@@ -265,8 +265,8 @@ public class SignalQualityTests
         var without = SignalQuality.Compute(t, v).ToJsonObject();
 
         Assert.Equal(SignalFigures.FigureNames, with.Select(p => p.Key));
-        Assert.Equal(SignalFigures.FigureNames.Take(11), without.Select(p => p.Key));
-        Assert.Equal(13, SignalFigures.FigureNames.Count);
+        Assert.Equal(SignalFigures.FigureNames.Take(13), without.Select(p => p.Key));
+        Assert.Equal(15, SignalFigures.FigureNames.Count);
         Assert.Null(without["delay_50_s"]);
         Assert.Equal(1, (int)with["threshold_crossings"]!);
         Assert.True((bool)with["monotonic"]!);
