@@ -110,7 +110,8 @@ public static class HtmlReport
     {
         bool bits = input.Eyes.Count > 0;
         w.El("h2", "Signal quality");
-        var head = new List<string> { "probe", "at", "final", "min", "max", "overshoot", "undershoot", "ringback", "rise 10-90", "fall 90-10",
+        var head = new List<string> { "probe", "at", "final", "min", "max", "overshoot", "undershoot", "above high", "below low", "ringback",
+            "rise 10-90", "fall 90-10",
             "delay 50 %", "settling", "threshold crossings", "noise margin high", "noise margin low" };
         if (bits) head.AddRange(["eye height vs thresholds", "eye width vs thresholds"]);
         head.Add("verdict");
@@ -123,7 +124,7 @@ public static class HtmlReport
             var cells = new List<(string, string?)>
             {
                 (p.Name, null), (p.Location, null), (V(p.Volts[^1]), null), (V(p.Volts.Min()), null), (V(p.Volts.Max()), null),
-                (Pct(f.OvershootPct), null), (Pct(f.UndershootPct), null), (V(f.RingbackV), null), (T(f.Rise1090S), null), (T(f.Fall9010S), null),
+                (Pct(f.OvershootPct), null), (Pct(f.UndershootPct), null), (V(f.AboveHighV), null), (V(f.BelowLowV), null), (V(f.RingbackV), null), (T(f.Rise1090S), null), (T(f.Fall9010S), null),
                 (T(f.Delay50S), null), (T(f.SettlingS), null), (crossings, Cls(c.CrossingsOk)),
                 // A bit stream has no single settled level: its margins are in the eye columns.
                 (bits ? "-" : V(f.NoiseMarginHighV), Cls(c.MarginHighOk)), (bits ? "-" : V(f.NoiseMarginLowV), Cls(c.MarginLowOk)),
@@ -142,7 +143,8 @@ public static class HtmlReport
         foreach (var c in withRx)
             w.El("p", $"{c.Probe}: receiver thresholds Vih {V(c.Thresholds!.Vih)}, Vil {V(c.Thresholds.Vil)}.", ("class", "note"));
         w.El("p", "Pass/fail rule: " + ReceiverCheck.Rule, ("id", "rule"));
-        w.El("p", "Figures refer to the first edge and the level it settles to; a dash means the figure does not apply. " +
+        w.El("p", "Figures refer to the first edge and the level it settles to, except above high and below low, the worst " +
+            "excursions beyond those levels over the whole record; a dash means the figure does not apply. " +
             "Noise margin high = settled high level − Vih; noise margin low = Vil − settled low level.", ("class", "note"));
     }
 

@@ -90,6 +90,8 @@ public class HtmlReportTests
         var crossings = rx[Column(table, "threshold crossings")];
         Assert.Equal("fail", (string?)crossings.Attribute("class"));
         Assert.Equal("3 (expected 1)", crossings.Value);
+        // The same lattice: the first arrival of 1.667 V is the worst excursion, 0.667 V above the settled 1 V.
+        Assert.Equal("667 mV", rx[Column(table, "above high")].Value);
         Assert.Equal("pass", (string?)rx[Column(table, "noise margin high")].Attribute("class"));
         Assert.Equal("pass", (string?)rx[Column(table, "noise margin low")].Attribute("class"));
         Assert.Equal("fail", (string?)rx[Column(table, "verdict")].Attribute("class"));
