@@ -70,6 +70,10 @@ public sealed class CaptureArguments
         return CaptureReader.Read(path, options);
     }
 
+    /// <summary>The required --probe option: the scenario probe a capture was taken at.</summary>
+    public static Option<string> ProbeOption() =>
+        new("--probe") { Description = "The scenario probe the capture was taken at", Required = true, HelpName = "NAME" };
+
     /// <summary>Prints the capture's warnings (dropped rows) on <paramref name="error"/>.</summary>
     /// <param name="capture">The capture.</param>
     /// <param name="error">Standard error.</param>

@@ -17,7 +17,7 @@ public static class CompareCommand
     {
         var scenario = CommonOptions.Scenario();
         var capture = new CaptureArguments(required: true);
-        var probe = new Option<string>("--probe") { Description = "The scenario probe the capture was taken at", Required = true, HelpName = "NAME" };
+        var probe = CaptureArguments.ProbeOption();
         var align = AlignOption("edge", "edge", "xcorr", "none");
         var outDir = new Option<string?>("--out", "-o") { Description = "Output folder (default: out/<scenario>-compare)" };
         var json = CommonOptions.Json();

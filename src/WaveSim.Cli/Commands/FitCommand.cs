@@ -16,7 +16,7 @@ public static class FitCommand
     {
         var scenario = CommonOptions.Scenario();
         var capture = new CaptureArguments(required: true);
-        var probe = new Option<string>("--probe") { Description = "The scenario probe the capture was taken at", Required = true, HelpName = "NAME" };
+        var probe = CaptureArguments.ProbeOption();
         var free = new Option<string[]>("--free")
         {
             Description = "A key path to fit, with optional bounds: line[0].segment.z0, load.c=0.5pF..5pF (repeat for each)",
