@@ -26,19 +26,11 @@ internal sealed class SegmentKernel
 
     /// <summary>
     /// A whole step n → n+1 of this segment's interior: currents to n+1/2, then voltages to n+1, in one fused vectorised sweep
-    /// (<see cref="LeapfrogKernel"/>); bit for bit the same as <see cref="UpdateCurrents"/> followed by <see cref="UpdateVoltages"/>.
+    /// (<see cref="LeapfrogKernel"/>); bit for bit the same as <see cref="UpdateCurrentsTrackingProduct"/> followed by <see cref="UpdateVoltages"/>.
     /// </summary>
     public void Step(double[] v, double[] i) => LeapfrogKernel.Step(v, i, Ci1, Ci2, Cv1, Cv2);
 
-    /// <summary>Currents from n−1/2 to n+1/2 using the voltages at n.</summary>
-    public void UpdateCurrents(double[] v, double[] i)
-    {
-        double a = Ci1, b = Ci2;
-        int n = i.Length;
-        for (int k = 0; k < n; k++) i[k] = LeapfrogKernel.Current(i[k], v[k], v[k + 1], a, b);
-    }
-
-    /// <summary>Like <see cref="UpdateCurrents"/>, also returning Σ I^{n−1/2}·I^{n+1/2} for the energy the staggered grid conserves.</summary>
+    /// <summary>Currents from n−1/2 to n+1/2 using the voltages at n, returning Σ I^{n−1/2}·I^{n+1/2} for the energy the staggered grid conserves.</summary>
     public double UpdateCurrentsTrackingProduct(double[] v, double[] i)
     {
         double a = Ci1, b = Ci2, sum = 0;
