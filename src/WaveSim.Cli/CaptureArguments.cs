@@ -81,4 +81,14 @@ public sealed class CaptureArguments
     {
         foreach (string w in capture.Warnings) error.WriteLine("warning: " + w);
     }
+
+    /// <summary>Prints the capture's warnings and, when its time span is wildly out of scale with the scenario's duration, that too.</summary>
+    /// <param name="capture">The capture.</param>
+    /// <param name="simulationDuration">The scenario's simulated duration, s.</param>
+    /// <param name="error">Standard error.</param>
+    public static void Warn(Capture capture, double simulationDuration, TextWriter error)
+    {
+        Warn(capture, error);
+        foreach (string w in CaptureTimeSpan.Warnings(capture, simulationDuration)) error.WriteLine("warning: " + w);
+    }
 }

@@ -18,7 +18,7 @@ public static class CompareCommand
         var scenario = CommonOptions.Scenario();
         var capture = new CaptureArguments(required: true);
         var probe = CaptureArguments.ProbeOption();
-        var align = AlignOption("edge", "edge", "xcorr", "none");
+        var align = AlignOption("xcorr", "xcorr", "edge", "none");
         var outDir = new Option<string?>("--out", "-o") { Description = "Output folder (default: out/<scenario>-compare)" };
         var json = CommonOptions.Json();
         var force = CommonOptions.Force();
@@ -32,7 +32,7 @@ public static class CompareCommand
             string probeName = pr.GetValue(probe)!;
             CaptureComparison.RequireProbe(s, probeName);
             Capture cap = capture.Read(pr)!;
-            CaptureArguments.Warn(cap, pr.InvocationConfiguration.Error);
+            CaptureArguments.Warn(cap, s.Simulation.Duration, pr.InvocationConfiguration.Error);
             CaptureComparisonResult result;
             using (var bar = new ProgressBar(pr.InvocationConfiguration.Error, "simulating"))
                 result = CaptureComparison.Run(s, cap, probeName, ParseAlign(pr.GetValue(align)!),
@@ -61,7 +61,7 @@ public static class CompareCommand
     {
         var o = new Option<string>("--align")
         {
-            Description = "Time alignment of the capture: edge (first 50 % crossings), xcorr (cross-correlation) or none",
+            Description = "Time alignment of the capture: xcorr (cross-correlation), edge (first 50 % crossings) or none",
             DefaultValueFactory = _ => defaultValue,
         };
         o.AcceptOnlyFromAmong(choices);
@@ -72,8 +72,8 @@ public static class CompareCommand
     internal static AlignMode ParseAlign(string text) => text switch
     {
         "none" => AlignMode.None,
-        "xcorr" => AlignMode.CrossCorrelation,
-        _ => AlignMode.Edge50,
+        "edge" => AlignMode.Edge50,
+        _ => AlignMode.CrossCorrelation,
     };
 
     static void Print(TextWriter o, CaptureComparisonResult r, string dir)

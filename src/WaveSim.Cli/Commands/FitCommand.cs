@@ -1,4 +1,5 @@
 using System.CommandLine;
+using System.Globalization;
 using WaveSim.Core;
 using WaveSim.Core.Fitting;
 using WaveSim.Core.Measurements;
@@ -22,8 +23,8 @@ public static class FitCommand
             Description = "A key path to fit, with optional bounds: line[0].segment.z0, load.c=0.5pF..5pF (repeat for each)",
             Required = true, HelpName = "KEY[=MIN..MAX]", AllowMultipleArgumentsPerToken = false,
         };
-        var align = CompareCommand.AlignOption("edge", "edge", "xcorr", "none");
-        align.Description = "Capture time axis: edge or xcorr (aligned once with the start, then the offset is fitted too) or none (taken as it is)";
+        var align = CompareCommand.AlignOption("xcorr", "xcorr", "edge", "none");
+        align.Description = "Capture time axis: xcorr or edge (aligned once with the start, searched over the window, then the offset is fitted too) or none (taken as it is)";
         var maxSims = new Option<int>("--max-sims") { Description = "Budget of simulations", DefaultValueFactory = _ => ScenarioFitOptions.DefaultMaxSimulations, HelpName = "N" };
         var outDir = new Option<string?>("--out", "-o") { Description = "Output folder (default: out/<scenario>-fit)" };
         var json = CommonOptions.Json();
@@ -39,7 +40,7 @@ public static class FitCommand
             CaptureComparison.RequireProbe(s, probeName);
             var parameters = pr.GetValue(free)!.Select(f => FreeParameter.Parse(s, f)).ToList();
             Capture cap = capture.Read(pr)!;
-            CaptureArguments.Warn(cap, pr.InvocationConfiguration.Error);
+            CaptureArguments.Warn(cap, s.Simulation.Duration, pr.InvocationConfiguration.Error);
             ScenarioFitResult result;
             using (var bar = new ProgressBar(pr.InvocationConfiguration.Error, "fitting"))
                 result = ScenarioFit.Run(s, cap, probeName, parameters, new ScenarioFitOptions
@@ -86,6 +87,10 @@ public static class FitCommand
             o.WriteLine($"  {"capture time offset".PadRight(width)} {Quantity.Format(r.OffsetSeconds, "s"),12} ± {sigma}");
         }
         o.WriteLine($"RMS error {Quantity.Format(r.RmsV, "V", 3)} (start {Quantity.Format(r.StartRmsV, "V", 3)})");
+        var b = r.Basis;
+        o.WriteLine($"± is one standard deviation: residual standard error {Quantity.Format(b.StandardErrorV, "V", 3)} over {b.Samples} samples, " +
+            $"widened ×{b.Widening.ToString("G3", CultureInfo.InvariantCulture)} for their correlation (lag-1 {b.Lag1.ToString("F3", CultureInfo.InvariantCulture)}, " +
+            $"about {b.EffectiveSamples.ToString("F0", CultureInfo.InvariantCulture)} independent)");
         o.WriteLine($"wrote {Path.Combine(dir, "fitted.yaml")}, fit.json, fit.png");
     }
 

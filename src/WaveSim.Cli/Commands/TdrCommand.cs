@@ -53,7 +53,7 @@ public static class TdrCommand
             }
             else
             {
-                CaptureArguments.Warn(cap, pr.InvocationConfiguration.Error);
+                CaptureArguments.Warn(cap, s.Simulation.Duration, pr.InvocationConfiguration.Error);
                 double? inc = pr.GetValue(incident) is { } i ? Positive(i, Dimension.Voltage, "--incident") : null;
                 trace = Reflectometer.FromCapture(cap, sourceOhms, inc, riseS ?? Quantity.Parse(DefaultRise, Dimension.Time));
                 if (riseS is { } given) trace = trace with { RampS = 1.25 * given };

@@ -13,11 +13,19 @@ namespace WaveSim.Core.Fitting;
 /// <para>Residual: the simulated probe, linearly interpolated at each capture sample time t_i + offset, minus the captured
 /// value. Before 0 the simulation holds its first value (nothing has happened yet), after its end its last. The capture
 /// samples used are fixed at the start: those that fall inside the simulated record with the starting offset.</para>
-/// <para>Alignment: the capture is aligned once, with the starting scenario (50 % crossings or cross-correlation). Aligning
-/// again at every evaluation would undo a fitted delay: moving the edge would be cancelled by moving the capture. Instead the
-/// offset joins the fit as one more parameter, bounded to ±10 % of the simulated duration around its start; so a delay is
-/// judged by where the edges and reflections fall relative to each other. With no alignment the capture's time axis is taken
-/// as the scenario's (t = 0 at the source's time 0) and nothing is shifted.</para>
+/// <para>Alignment: the capture is aligned once, with the starting scenario: by cross-correlation (the default) or the 50 %
+/// crossings, then by a least-squares search over offsets within ±10 % of the simulated duration around that
+/// (<see cref="OffsetSearch"/>: the offset the fitter starts from is the best the starting scenario allows, not a 50 % crossing
+/// that a slowed or reflected edge can pull off by tens of picoseconds). Aligning again at every evaluation would undo a fitted
+/// delay: moving the edge would be cancelled by moving the capture. Instead the offset joins the fit as one more parameter,
+/// bounded to ±10 % of the simulated duration around its start; so a delay is judged by where the edges and reflections fall
+/// relative to each other. With no alignment the capture's time axis is taken as the scenario's (t = 0 at the source's time 0)
+/// and nothing is shifted. Either way at least half of the capture's time span must lie inside the simulated record
+/// (<see cref="CaptureTimeSpan"/>).</para>
+/// <para>Uncertainty: cov = s²·(JᵀJ)⁻¹ with s² = SSR/(n − p) from the Jacobian at the solution (W. H. Press et al., Numerical
+/// Recipes, 3rd ed., §15.5-15.6; D. M. Bates and D. G. Watts, Nonlinear Regression Analysis and Its Applications, 1988; from
+/// memory), then every standard deviation is widened by √(n/n_eff) for the residual's lag-1 autocorrelation
+/// (<see cref="ResidualCorrelation"/>).</para>
 /// <para>Method: <see cref="BoundedLeastSquares"/> (Levenberg-Marquardt with bounds by change of variables); every residual
 /// evaluation is one simulation of an edited copy of the scenario text (<see cref="ScenarioEditor.With"/>). The simulations
 /// run one after another: the fitter asks for its Jacobian columns one at a time.</para>
@@ -71,11 +79,17 @@ public static class ScenarioFit
             return result;
         }
 
+        CaptureTimeSpan.RequireFits(capture, scenario.Simulation.Duration);
         double[] start = parameters.Select(p => p.Start).ToArray();
         var (t0, v0) = Probe(start);
-        double offset0 = fitOffset
-            ? WaveformComparison.Compare(t0, v0, capture.Time, capture.Volts, options.Align).OffsetSeconds
-            : 0.0;
+        double window = ScenarioFitOptions.OffsetWindowFraction * scenario.Simulation.Duration;
+        double offset0 = 0.0;
+        if (fitOffset)
+        {
+            double aligned = WaveformComparison.Compare(t0, v0, capture.Time, capture.Volts, options.Align).OffsetSeconds;
+            offset0 = OffsetSearch.Best(t0, v0, capture.Time, capture.Volts, aligned, window);
+        }
+        CaptureTimeSpan.RequireOverlap(capture, offset0, t0[0], t0[^1]);
 
         // The capture samples used, fixed for the whole fit so the residual keeps its length.
         var use = Enumerable.Range(0, capture.Time.Length)
@@ -87,7 +101,6 @@ public static class ScenarioFit
         double[] capT = use.Select(i => capture.Time[i]).ToArray();
         double[] capV = use.Select(i => capture.Volts[i]).ToArray();
 
-        double window = ScenarioFitOptions.OffsetWindowFraction * scenario.Simulation.Duration;
         double[] lower = parameters.Select(p => p.Lower).ToArray();
         double[] upper = parameters.Select(p => p.Upper).ToArray();
         double[] first = start;
@@ -111,17 +124,31 @@ public static class ScenarioFit
 
         double[] best = fitOffset ? fit.Values[..^1] : fit.Values;
         double offset = fitOffset ? fit.Values[^1] : 0.0;
-        var fitted = parameters.Select((p, j) => new FittedParameter(p, best[j], fit.Uncertainty[j])).ToList();
+        var (tf, vf) = Probe(best);
+        double[] residual = Difference(tf, vf, capT, capV, offset);
+        UncertaintyBasis basis = Basis(residual, n);
+        double[] sigma = fit.Uncertainty.Select(u => u * basis.Widening).ToArray();
+
+        var fitted = parameters.Select((p, j) => new FittedParameter(p, best[j], sigma[j])).ToList();
         string text = ScenarioEditor.EditedText(scenario, Changes(parameters, best));
         Scenario fittedScenario = ScenarioLoader.Parse(text, scenario.FilePath ?? "scenario.yaml");
 
-        var (tf, vf) = Probe(best);
         double[] startSim = Difference(t0, v0, capT, capV, offset0).Select((r, i) => r + capV[i]).ToArray();
-        double[] fittedSim = Difference(tf, vf, capT, capV, offset).Select((r, i) => r + capV[i]).ToArray();
+        double[] fittedSim = residual.Select((r, i) => r + capV[i]).ToArray();
         double startRms = Rms(startSim.Select((s, i) => s - capV[i]));
-        double rms = Rms(fittedSim.Select((s, i) => s - capV[i]));
-        return new ScenarioFitResult(fitted, offset, fitOffset ? fit.Uncertainty[^1] : double.NaN, fitOffset, rms, startRms,
-            simulations, fit.Converged, text, fittedScenario, capT.Select(t => t + offset).ToArray(), capV, startSim, fittedSim);
+        double rms = Rms(residual);
+        return new ScenarioFitResult(fitted, offset, fitOffset ? sigma[^1] : double.NaN, fitOffset, rms, startRms,
+            simulations, fit.Converged, text, fittedScenario, capT.Select(t => t + offset).ToArray(), capV, startSim, fittedSim, basis);
+    }
+
+    /// <summary>The residual standard error and the widening for correlation, from the residual at the solution.</summary>
+    static UncertaintyBasis Basis(double[] residual, int p)
+    {
+        int m = residual.Length;
+        double ssr = residual.Sum(r => r * r);
+        double s = m > p ? Math.Sqrt(ssr / (m - p)) : double.NaN;
+        double rho = ResidualCorrelation.Lag1(residual);
+        return new UncertaintyBasis(m, p, s, rho, ResidualCorrelation.EffectiveSamples(m, rho), ResidualCorrelation.Widening(rho));
     }
 
     /// <summary>The scenario with the parameters set to <paramref name="values"/> (SI), read back from the edited text.</summary>

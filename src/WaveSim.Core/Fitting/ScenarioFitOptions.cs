@@ -13,10 +13,11 @@ public sealed record ScenarioFitOptions
 
     /// <summary>
     /// How the capture's time axis is placed on the simulation's. <see cref="AlignMode.None"/>: as it is, nothing fitted.
-    /// <see cref="AlignMode.Edge50"/> (default) or <see cref="AlignMode.CrossCorrelation"/>: aligned once with the starting
-    /// scenario, then the offset is fitted along with the parameters. Default Edge50.
+    /// <see cref="AlignMode.CrossCorrelation"/> (default) or <see cref="AlignMode.Edge50"/>: aligned once with the starting
+    /// scenario and refined by a least-squares search over the offset window, then the offset is fitted along with the
+    /// parameters. Default CrossCorrelation.
     /// </summary>
-    public AlignMode Align { get; init; } = AlignMode.Edge50;
+    public AlignMode Align { get; init; } = AlignMode.CrossCorrelation;
 
     /// <summary>Budget of simulations, including those for the Jacobians and the uncertainties. Default 200; at least 2n + 2.</summary>
     public int MaxSimulations { get; init; } = DefaultMaxSimulations;

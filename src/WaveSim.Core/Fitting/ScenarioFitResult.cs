@@ -5,7 +5,8 @@ namespace WaveSim.Core.Fitting;
 /// <summary>The outcome of <see cref="ScenarioFit.Run"/>.</summary>
 /// <param name="Parameters">The fitted values, in the order given.</param>
 /// <param name="OffsetSeconds">Shift added to the capture's time axis, s (fitted unless the alignment was None, then 0).</param>
-/// <param name="OffsetUncertaintySeconds">One standard deviation of the fitted offset, s; NaN when it was not fitted.</param>
+/// <param name="OffsetUncertaintySeconds">One standard deviation of the fitted offset, s, on the same basis as the parameters'
+/// (see <see cref="FittedParameter.Uncertainty"/>); NaN when it was not fitted.</param>
 /// <param name="OffsetFitted">True when the offset was a fitted parameter (any alignment but None).</param>
 /// <param name="RmsV">RMS of simulated minus captured at the capture's samples, with the fitted values, V.</param>
 /// <param name="StartRmsV">The same with the starting values, V.</param>
@@ -17,6 +18,8 @@ namespace WaveSim.Core.Fitting;
 /// <param name="Captured">The capture's values at <paramref name="Time"/>, V.</param>
 /// <param name="StartSimulated">The starting scenario's probe at <paramref name="Time"/>, V (aligned with the starting offset).</param>
 /// <param name="FittedSimulated">The fitted scenario's probe at <paramref name="Time"/>, V.</param>
+/// <param name="Basis">What the uncertainties rest on: samples, residual standard error, lag-1 autocorrelation and the widening
+/// applied to every standard deviation.</param>
 public sealed record ScenarioFitResult(
     IReadOnlyList<FittedParameter> Parameters,
     double OffsetSeconds,
@@ -31,4 +34,5 @@ public sealed record ScenarioFitResult(
     double[] Time,
     double[] Captured,
     double[] StartSimulated,
-    double[] FittedSimulated);
+    double[] FittedSimulated,
+    UncertaintyBasis Basis);

@@ -78,7 +78,10 @@ public static class BoundedLeastSquares
             return x;
         }
 
-        var typical = u.Map(v => Math.Abs(v) > 0 ? Math.Abs(v) : 1.0);
+        // The difference step's scale in u. A bounded variable's u is an angle or a ratio of order one, so its step is
+        // √(2ε) whatever u is: scaled by |u| instead, a start at the centre of symmetric bounds (u = asin(≈1e-16)) got a step of
+        // 1e-24, its Jacobian column came out zero and the variable never moved. An unbounded u is the parameter itself.
+        var typical = Vector<double>.Build.Dense(n, j => transforms[j].Bounded ? 1.0 : Math.Abs(u[j]) > 0 ? Math.Abs(u[j]) : 1.0);
         Vector<double> res = Evaluate(External(u));
         double ssr = res.DotProduct(res);
         if (!double.IsFinite(ssr))

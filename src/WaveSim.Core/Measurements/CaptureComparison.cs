@@ -16,7 +16,8 @@ public static class CaptureComparison
     /// <param name="options">Simulation options (progress, force); null for the defaults.</param>
     /// <param name="ct">Cancels the simulation.</param>
     /// <returns>The comparison and the figures of both waveforms.</returns>
-    /// <exception cref="InputException">No such probe, or the waveforms cannot be compared (see <see cref="WaveformComparison.Compare"/>).</exception>
+    /// <exception cref="InputException">No such probe, too little overlap (see <see cref="CaptureTimeSpan"/>), or the waveforms cannot
+    /// be compared (see <see cref="WaveformComparison.Compare"/>).</exception>
     public static CaptureComparisonResult Run(Scenario scenario, Capture capture, string probe, AlignMode mode,
         SimulationOptions? options = null, CancellationToken ct = default)
     {
@@ -33,10 +34,14 @@ public static class CaptureComparison
     /// <param name="probe">Probe name.</param>
     /// <param name="mode">How to find the capture's time offset.</param>
     /// <returns>The comparison and the figures of both waveforms.</returns>
+    /// <exception cref="InputException">Less than half of the capture's time span overlaps the simulated record after alignment
+    /// (see <see cref="CaptureTimeSpan"/>), or the waveforms cannot be compared.</exception>
     public static CaptureComparisonResult Compare(SimulationResult sim, Capture capture, string probe, AlignMode mode)
     {
         ProbeTrace trace = sim.Probe(probe);
+        CaptureTimeSpan.RequireFits(capture, sim.Time[^1] - sim.Time[0]);
         ComparisonResult c = WaveformComparison.Compare(sim.Time, trace.Volts, capture.Time, capture.Volts, mode);
+        CaptureTimeSpan.RequireOverlap(capture, c.OffsetSeconds, sim.Time[0], sim.Time[^1]);
         // Both sets of figures on the same grid and with the same options, so that their difference is the capture's doing.
         SignalQualityOptions figureOptions = FigureOptions(sim.Scenario, probe);
         SignalFigures simulated = SignalQuality.Compute(c.Time, c.Simulated, figureOptions);

@@ -117,7 +117,13 @@ public static partial class CaptureReader
             warnings.Add($"{name}: dropped {droppedLines.Count} row(s) with a blank or NaN cell (line(s) {shown}{more})");
         }
 
-        return new Capture(time.ToArray(), volts.ToArray(), source) { DroppedRows = droppedLines.Count, Warnings = warnings };
+        string timeLabel = header is not null && timeCol < header.Length && header[timeCol].Trim().Length > 0
+            ? $"'{header[timeCol].Trim()}'"
+            : (timeCol + 1).ToString(CultureInfo.InvariantCulture);
+        return new Capture(time.ToArray(), volts.ToArray(), source)
+        {
+            DroppedRows = droppedLines.Count, Warnings = warnings, TimeColumn = timeLabel,
+        };
     }
 
     static void ValidateOptions(CaptureOptions o, string name)

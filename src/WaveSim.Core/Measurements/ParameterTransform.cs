@@ -18,6 +18,9 @@ internal readonly struct ParameterTransform
         _scale = Math.Abs(fromBound) > 0 ? Math.Abs(fromBound) : Math.Abs(start) > 0 ? Math.Abs(start) : 1.0;
     }
 
+    /// <summary>True when either bound is finite: u is then a dimensionless angle or ratio of order one.</summary>
+    public bool Bounded => _hasLo || _hasHi;
+
     public double ToExternal(double u)
     {
         if (_hasLo && _hasHi)

@@ -7,7 +7,9 @@ namespace WaveSim.Core.Output;
 /// <summary>The files of <c>wavesim fit</c>: fit.json and the overlay chart (fitted.yaml is <see cref="ScenarioFitResult.FittedText"/>).</summary>
 public static class FitOutputs
 {
-    /// <summary>fit.json: parameters {key: {value, uncertainty, start, lower, upper, unit}}, capture_offset_s, rms_V, start_rms_V, simulations, converged (SI).</summary>
+    /// <summary>fit.json: parameters {key: {value, uncertainty, start, lower, upper, unit}}, capture_offset_s, rms_V, start_rms_V,
+    /// uncertainty_basis {samples, fitted_values, standard_error_V, lag1_autocorrelation, effective_samples, widening}, simulations,
+    /// converged (SI).</summary>
     /// <param name="r">The fit.</param>
     /// <returns>The JSON object.</returns>
     public static JsonObject Json(ScenarioFitResult r)
@@ -35,6 +37,15 @@ public static class FitOutputs
             },
             ["rms_V"] = r.RmsV,
             ["start_rms_V"] = r.StartRmsV,
+            ["uncertainty_basis"] = new JsonObject
+            {
+                ["samples"] = r.Basis.Samples,
+                ["fitted_values"] = r.Basis.Parameters,
+                ["standard_error_V"] = CompareOutputs.Finite(r.Basis.StandardErrorV),
+                ["lag1_autocorrelation"] = r.Basis.Lag1,
+                ["effective_samples"] = r.Basis.EffectiveSamples,
+                ["widening"] = r.Basis.Widening,
+            },
             ["simulations"] = r.Simulations,
             ["converged"] = r.Converged,
         };

@@ -84,6 +84,19 @@ public class BoundedLeastSquaresTests
     }
 
     [Fact]
+    public void A_start_at_the_centre_of_symmetric_bounds_still_moves()
+    {
+        // Regression: the fit's time offset starts at the centre of [start - w, start + w], where asin(2(x - lo)/(hi - lo) - 1)
+        // rounds to about 1e-16 instead of 0. The difference step used to be scaled by that |u|, so it was 1e-24 in u, the
+        // Jacobian column came out zero and the parameter never moved. The start and window are the values of a fit that stuck
+        // (1.0105 ns, 1 ns). Known answer: the least-squares solution of the linear residual x - target is target.
+        const double centre = 1.0105240531393502e-09, window = 1e-9, target = centre + 0.29e-9;
+        FitResult r = BoundedLeastSquares.Fit(p => [p[0] - target, 2 * (p[0] - target)], [centre], [centre - window], [centre + window], 100, default);
+
+        Assert.Equal(target, r.Values[0], 1e-18);
+    }
+
+    [Fact]
     public void A_start_outside_its_bounds_is_an_input_error()
     {
         var ex = Assert.Throws<InputException>(() => BoundedLeastSquares.Fit(Misra1a, [500, 1e-4], [0, 0], [400, 1], 100, default));

@@ -56,6 +56,16 @@ simulation: { duration: 10 ns, output_step: 10 ps, resolution: 10 }
         Assert.InRange(sims, 5, 120);
         // The noise is 5 mV RMS, so a fit at the right values leaves about that much.
         Assert.InRange(root.GetProperty("rms_V").GetDouble(), 0.004, 0.006);
+        // The basis of the ± values: s = sqrt(SSR/(n - p)) is the same 5 mV, and the white noise barely widens them; n_eff and
+        // the widening follow n(1 - rho)/(1 + rho) and sqrt((1 + rho)/(1 - rho)) with rho held to [0, 1) (Bartlett 1946, from memory).
+        var basis = root.GetProperty("uncertainty_basis");
+        int n = basis.GetProperty("samples").GetInt32();
+        double rho = Math.Max(0, basis.GetProperty("lag1_autocorrelation").GetDouble());
+        Assert.Equal(4, basis.GetProperty("fitted_values").GetInt32());
+        Assert.InRange(basis.GetProperty("standard_error_V").GetDouble(), 0.004, 0.006);
+        Assert.Equal(n * (1 - rho) / (1 + rho), basis.GetProperty("effective_samples").GetDouble(), 1e-9);
+        Assert.Equal(Math.Sqrt((1 + rho) / (1 - rho)), basis.GetProperty("widening").GetDouble(), 1e-12);
+        Assert.InRange(basis.GetProperty("widening").GetDouble(), 1.0, 1.15);
 
         // fitted.yaml keeps the comment and reads back with the fitted values.
         string fittedText = File.ReadAllText(Path.Combine(outDir, "fitted.yaml"));
