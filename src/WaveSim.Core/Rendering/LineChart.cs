@@ -151,12 +151,12 @@ public static class LineChart
     internal static void DrawReferenceLines(SKCanvas canvas, ChartGeometry g, IReadOnlyList<ReferenceLine> lines, SKFont font)
     {
         if (lines.Count == 0) return;
-        using SKPaint line = Ink.Stroke(Palette.Muted, 1f, [5f, 4f]);
-        using SKPaint text = Ink.Fill(Palette.Muted);
         SKRect r = g.PlotArea;
         foreach (ReferenceLine rl in lines)
         {
             if (!double.IsFinite(rl.Y) || rl.Y < g.Y.Min || rl.Y > g.Y.Max) continue;
+            using SKPaint line = rl.Colour is { } c ? Ink.Stroke(c, 1.5f, [9f, 4f]) : Ink.Stroke(Palette.Muted, 1f, [5f, 4f]);
+            using SKPaint text = Ink.Fill(rl.Colour ?? Palette.Muted);
             float py = Ink.Snap(g.YToPixel(rl.Y));
             canvas.DrawLine(r.Left, py, r.Right, py, line);
             if (!string.IsNullOrEmpty(rl.Label))
@@ -169,16 +169,44 @@ public static class LineChart
         if (markers.Count == 0) return;
         using SKPaint ring = Ink.Stroke(Palette.Ink, 1.25f);
         using SKPaint text = Ink.Fill(Palette.Ink);
-        foreach (Marker m in markers)
+        // Highlighted points last, so nothing covers them.
+        foreach (Marker m in markers.OrderBy(m => m.Style == MarkerStyle.Highlight ? 1 : 0))
         {
             if (!double.IsFinite(m.X) || !double.IsFinite(m.Y)) continue;
             float px = g.XToPixel(m.X), py = g.YToPixel(m.Y);
-            canvas.DrawCircle(px, py, font.Size * 0.35f, ring);
             bool leftSide = px > g.PlotArea.MidX;
             float tx = leftSide ? px - font.Size * 0.6f : px + font.Size * 0.6f;
             float ty = py < g.PlotArea.Top + font.Size * 1.5f ? py + font.Size * 1.2f : py - font.Size * 0.5f;
+            if (m.Style == MarkerStyle.Highlight) { Highlight(canvas, g, m.Label, px, py, font); continue; }
+            canvas.DrawCircle(px, py, font.Size * 0.35f, ring);
             canvas.DrawText(m.Label, tx, ty, leftSide ? SKTextAlign.Right : SKTextAlign.Left, font, text);
         }
+    }
+
+    /// <summary>A filled diamond in <see cref="Palette.Highlight"/> with a paper rim, and its label in a box beside it.</summary>
+    static void Highlight(SKCanvas canvas, ChartGeometry g, string label, float px, float py, SKFont font)
+    {
+        float s = font.Size * 0.6f;
+        var b = new SKPathBuilder();
+        b.MoveTo(px, py - s); b.LineTo(px + s, py); b.LineTo(px, py + s); b.LineTo(px - s, py); b.Close();
+        using SKPath diamond = b.Detach();
+        using SKPaint fill = Ink.Fill(Palette.Highlight);
+        using SKPaint rim = Ink.Stroke(Palette.Background, 2f);
+        canvas.DrawPath(diamond, rim);
+        canvas.DrawPath(diamond, fill);
+        if (string.IsNullOrEmpty(label)) return;
+        float w = Ink.Width(font, label), pad = font.Size * 0.35f, h = font.Size * 1.35f;
+        bool leftSide = px > g.PlotArea.MidX;
+        float boxLeft = leftSide ? px - s - pad - w - 2 * pad : px + s + pad;
+        // Above the point unless that leaves the plot; then below it.
+        float boxTop = py - s - h < g.PlotArea.Top ? py + s * 0.5f : py - s * 0.5f - h;
+        var box = new SKRect(boxLeft, boxTop, boxLeft + w + 2 * pad, boxTop + h);
+        using SKPaint paper = Ink.Fill(Palette.Background);
+        using SKPaint edge = Ink.Stroke(Palette.Highlight, 1.25f);
+        using SKPaint ink = Ink.Fill(Palette.Ink);
+        canvas.DrawRoundRect(box, pad, pad, paper);
+        canvas.DrawRoundRect(box, pad, pad, edge);
+        Ink.TextCentredV(canvas, label, box.Left + pad, box.MidY, SKTextAlign.Left, font, ink);
     }
 
     static (int Rows, List<(float X, float Right, int Row, int Series)> Entries) LegendRows(ChartPanel panel, SKFont font, float left, float right, float swatch, float fs)
@@ -209,6 +237,11 @@ public static class LineChart
         for (int i = 0; i < axes.Length; i++)
         {
             int intervals = Math.Clamp((int)(heights[i] / 36f), 2, 10);
+            if (spec.Panels[i].YTicks is { } fixedTicks)
+            {
+                axes[i] = new AxisScale(spec.Panels[i].YLabel, spec.Panels[i].YUnit, ranges[i].Min, ranges[i].Max, fixedTicks);
+                continue;
+            }
             axes[i] = AxisScale.Exact(spec.Panels[i].YLabel, spec.Panels[i].YUnit, ranges[i].Min, ranges[i].Max, intervals);
         }
         return axes;
@@ -273,6 +306,8 @@ public static class LineChart
         {
             if (!(p.HeightWeight > 0)) throw new ArgumentException($"Panel '{p.YLabel}' height weight must be greater than 0.", nameof(spec));
             if (p.YRange is { } yr && !(yr.Max > yr.Min)) throw new ArgumentException($"Panel '{p.YLabel}' Y range {yr.Min}..{yr.Max} must have max > min.", nameof(spec));
+            if (p.YTicks is not null && (p.YRange is not { } tr || p.YTicks.Any(t => !(t >= tr.Min && t <= tr.Max))))
+                throw new ArgumentException($"Panel '{p.YLabel}' has fixed Y ticks: they need a Y range that holds them all.", nameof(spec));
             foreach (Series s in p.Series)
             {
                 if (s.X.Length != s.Y.Length)
