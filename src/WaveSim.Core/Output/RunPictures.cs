@@ -71,7 +71,8 @@ public static class RunPictures
         };
         var panels = new List<ChartPanel> { voltages };
         if (options.Currents) panels.Add(new ChartPanel("Current", "A", probes.Select(p => new Rendering.Series(p.Name, time, Cut(p.Amps))).ToList()));
-        int shown = edges.Count(e => e >= window.Start && e <= window.Stop);
+        double reach = specs.Count == 0 ? 0 : specs.Max(p => RunEyes.DelayTo(s.Line, p, 0));
+        int shown = edges.Count(e => e >= window.Start && e + reach <= window.Stop);
         string title = limited ? $"{s.Title} (first {shown} of {edges.Length} source edges)" : s.Title;
         var chart = new ChartSpec(title, "Time", "s", panels) { XRange = new AxisRange(window.Start, window.Stop) };
         return new WaveformPicture(chart, window, limited, edges.Length, shown);

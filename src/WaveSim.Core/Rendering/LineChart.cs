@@ -114,8 +114,8 @@ public static class LineChart
             ChartGeometry g = pl.Geometry;
             bool isBottom = p == layout.Panels.Count - 1;
             AxisPainter.Grid(canvas, g);
-            DrawReferenceLines(canvas, g, pl.Panel.ReferenceLines, small);
             DrawTraces(canvas, g, pl.Panel.Series);
+            DrawReferenceLines(canvas, g, pl.Panel.ReferenceLines, small); // over the traces: a threshold must stay visible
             DrawMarkers(canvas, g, pl.Panel.Markers, small);
             AxisPainter.Frame(canvas, g, tick, xTicks: true, yTicks: true);
             AxisPainter.YTickLabels(canvas, g, font, tick + fs * 0.3f);
@@ -159,8 +159,12 @@ public static class LineChart
             using SKPaint text = Ink.Fill(rl.Colour ?? Palette.Muted);
             float py = Ink.Snap(g.YToPixel(rl.Y));
             canvas.DrawLine(r.Left, py, r.Right, py, line);
-            if (!string.IsNullOrEmpty(rl.Label))
-                canvas.DrawText(rl.Label, r.Right - font.Size * 0.4f, py - font.Size * 0.3f, SKTextAlign.Right, font, text);
+            if (string.IsNullOrEmpty(rl.Label)) continue;
+            // On a paper patch above the line, so neither the dashes nor a trace strike through the words.
+            float w = Ink.Width(font, rl.Label), pad = font.Size * 0.25f, baseline = py - font.Size * 0.45f;
+            var patch = new SKRect(r.Right - font.Size * 0.4f - w - pad, baseline + font.Metrics.Ascent - pad * 0.5f, r.Right - font.Size * 0.4f + pad, baseline + font.Metrics.Descent);
+            using (SKPaint paper = Ink.Fill(Palette.Background.WithAlpha(0xE0))) canvas.DrawRect(patch, paper);
+            canvas.DrawText(rl.Label, r.Right - font.Size * 0.4f, baseline, SKTextAlign.Right, font, text);
         }
     }
 

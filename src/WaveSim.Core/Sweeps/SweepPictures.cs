@@ -46,7 +46,11 @@ public static class SweepPictures
     {
         if (best is null || r.Value(best, target) is not { } y) yield break;
         string at = string.Join(", ", r.Axes.Select((a, k) => $"{a.KeyPath} {Quantity.Format(best.Values[k], a.DisplayUnit, 3)}"));
-        yield return new Marker(best.Values[0], y, $"best{(goal is null ? "" : " by " + goal)}: {at}") { Style = MarkerStyle.Highlight };
+        // The full label where the goal's own figure is charted; elsewhere the same point, named briefly.
+        string label = goal is null ? $"best point: {at}"
+            : goal.Target == target ? $"{(goal.Maximise ? "highest" : "lowest")} {goal.Target.Probe} {FigureSelector.Stem(goal.Target.Figure).Replace('_', ' ')}: {at}"
+            : "best point";
+        yield return new Marker(best.Values[0], y, label) { Style = MarkerStyle.Highlight };
     }
 
     /// <summary>Points whose neighbours are gaps (the figure does not apply there): a line cannot show them, so they get a ring.</summary>
