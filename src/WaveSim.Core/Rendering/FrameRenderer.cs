@@ -68,7 +68,7 @@ public static class FrameRenderer
         float mainH = available - branchRows * branchH;
         if (mainH < fs * 4)
             throw new ArgumentException($"A {width}×{height} px frame is too small for the main line and {plans.Count} branch(es) in {branchRows} row(s).");
-        var yAxis = AxisScale.Exact("Voltage", "V", vMin, vMax, Math.Clamp((int)(mainH / 36f), 2, 10));
+        var yAxis = AxisScale.Exact("Voltage", "V", vMin, vMax, Math.Clamp((int)(mainH / 30f), 3, 10));
         var geometry = new ChartGeometry(new SKRect(left, top, right, top + mainH), xAxis, yAxis);
 
         var placed = new List<BranchAxis>();
@@ -78,7 +78,7 @@ public static class FrameRenderer
             float rowTop = rowsTop + b.Row * (nameH + branchH + branchFoot + rowGap);
             var rect = new SKRect(b.Left, rowTop + nameH, b.Right, rowTop + nameH + branchH);
             var bx = ElementPainter.PositionAxis(layout, 0, b.Length, Math.Clamp((int)(rect.Width / (fs * 4.5f)), 1, 6));
-            var by = AxisScale.Exact("Voltage", "V", vMin, vMax, Math.Clamp((int)(branchH / 28f), 2, 4));
+            var by = AxisScale.Exact("Voltage", "V", vMin, vMax, Math.Clamp((int)(branchH / 25f), 3, 5));
             var g = new ChartGeometry(rect, bx, by);
             ChartGeometry parent = b.Parent == 0 ? geometry : placed.First(p => p.Piece == b.Parent).Geometry;
             double parentOffset = b.Parent == 0 ? 0 : placed.First(p => p.Piece == b.Parent).Junction;
