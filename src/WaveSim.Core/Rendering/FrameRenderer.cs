@@ -44,8 +44,9 @@ public static class FrameRenderer
         double[] mainX = layout.MainX;
         var (xMin, xMax) = mainX[^1] > mainX[0] ? (mainX[0], mainX[^1]) : layout.Extent();
         float pad = fs * 0.8f, tick = fs * 0.35f;
-        var probeAxis = AxisScale.Exact("Voltage", "V", vMin, vMax, Math.Clamp((int)(height / 60f), 2, 10));
-        float left = pad + fs * 1.6f + AxisPainter.WidestTick(probeAxis, font) + tick + fs * 0.3f;
+        // The main axis's tick count depends on the heights found below, so the margin holds the widest of any count.
+        float widest = Enumerable.Range(2, 9).Max(n => AxisPainter.WidestTick(AxisScale.Exact("Voltage", "V", vMin, vMax, n), font));
+        float left = pad + fs * 1.6f + widest + tick + fs * 0.3f;
         float right = width - pad * 1.5f;
         float headerH = fs * 1.8f, rowH = small.Size * 1.35f;
 
@@ -54,7 +55,7 @@ public static class FrameRenderer
         const float mainFootEm = 3.1f; // tick numbers and the axis title below the main plot
         // Label rows depend on the X mapping only, so place them on a provisional geometry first.
         var xAxis = ElementPainter.PositionAxis(layout, xMin, xMax, Math.Clamp((int)((right - left) / (fs * 6.5f)), 2, 12));
-        var provisional = new ChartGeometry(new SKRect(left, headerH, right, bottom - fs * mainFootEm), xAxis, probeAxis);
+        var provisional = new ChartGeometry(new SKRect(left, headerH, right, bottom - fs * mainFootEm), xAxis, AxisScale.Exact("Voltage", "V", vMin, vMax, 2));
         int[] rowOf = ElementPainter.LabelRows(layout.MainMarks, provisional, small, MaxLabelRows, out int rows);
         float top = headerH + rows * rowH + (rows > 0 ? fs * 0.3f : 0);
 
@@ -66,8 +67,14 @@ public static class FrameRenderer
         // The main line keeps the larger share (about 2.2 branch rows' worth), a branch at least three text lines.
         float branchH = branchRows == 0 ? 0 : Math.Max(fs * 3f, available / (2.2f + branchRows));
         float mainH = available - branchRows * branchH;
+        if (mainH < fs * 4 && branchRows > 0)
+        {
+            // A small frame with many branch rows: the branch axes give way first, down to a line and a half of text.
+            branchH = Math.Max(fs * 1.5f, (available - fs * 4) / branchRows);
+            mainH = available - branchRows * branchH;
+        }
         if (mainH < fs * 4)
-            throw new ArgumentException($"A {width}×{height} px frame is too small for the main line and {plans.Count} branch(es) in {branchRows} row(s).");
+            throw new ArgumentException($"A {width}×{height} px frame is too small for the main line and {plans.Count} branch(es) in {branchRows} row(s); choose a larger frame size.");
         var yAxis = AxisScale.Exact("Voltage", "V", vMin, vMax, Math.Clamp((int)(mainH / 30f), 3, 10));
         var geometry = new ChartGeometry(new SKRect(left, top, right, top + mainH), xAxis, yAxis);
 

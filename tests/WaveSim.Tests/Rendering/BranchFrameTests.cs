@@ -62,6 +62,17 @@ public class BranchFrameTests
     }
 
     [Fact]
+    public void A_small_frame_still_fits_the_branch_axis_below_the_main_one()
+    {
+        var snap = new LineSnapshot(0, [new double[MainX.Length], new double[StubX.Length]]);
+        using SKBitmap bmp = PngProbe.Decode(FrameRenderer.RenderPng(Stubbed, snap, -0.5, 1.5, 320, 240));
+        Assert.Equal((320, 240), (bmp.Width, bmp.Height));
+        FrameLayout fl = FrameRenderer.Layout(Stubbed, -0.5, 1.5, 320, 240);
+        Assert.True(fl.Branches[0].Geometry.PlotArea.Top > fl.Geometry.PlotArea.Bottom);
+        Assert.True(fl.Branches[0].Geometry.PlotArea.Bottom < 240);
+    }
+
+    [Fact]
     public void The_marks_have_a_legend_naming_each_kind_drawn()
     {
         FrameLayout fl = FrameRenderer.Layout(Stubbed, -0.5, 1.5, 1280, 720);
