@@ -26,8 +26,10 @@ public static class RunCommand
         var frameSize = new Option<string>("--frame-size") { Description = "Frame size WIDTHxHEIGHT in pixels", DefaultValueFactory = _ => "1280x720" };
         var settle = CommonOptions.SettleBand();
         var fdCheck = new Option<bool>("--check-frequency-domain") { Description = "Cross-check against the frequency-domain solver; also write frequency.csv and frequency.png" };
+        var window = new Option<string?>("--window") { Description = "Time span of waveforms.png: START..STOP (e.g. 10ns..20ns) or all; default: all, or the first edges of a source with more than 50" };
+        var plot = new Option<string?>("--plot") { Description = "Probes drawn in waveforms.png, comma-separated (e.g. rx,mid); default: every probe" };
         var cmd = new Command("run", "Simulate a scenario and write probes.csv, summary.json and pictures")
-        { scenario, outDir, json, force, svg, currents, frames, frameSize, settle, fdCheck };
+        { scenario, outDir, json, force, svg, currents, frames, frameSize, settle, fdCheck, window, plot };
         cmd.SetAction((pr, ct) => Task.FromResult(CommandGuard.Run(pr.InvocationConfiguration.Error, () =>
         {
             string path = pr.GetValue(scenario)!;
@@ -36,6 +38,7 @@ public static class RunCommand
             var (fw, fh) = ParseSize(pr.GetValue(frameSize)!);
             double band = CommonOptions.ParseBand(pr.GetValue(settle)!);
             var s = CommonOptions.Load(path);
+            var pictureOptions = PictureOptions(s, pr.GetValue(window), pr.GetValue(plot), pr.GetValue(currents));
             var options = new SimulationOptions { Force = pr.GetValue(force), SnapshotTimes = RunPictures.SnapshotTimes(s, nFrames) };
             SimulationResult result;
             using (var bar = new ProgressBar(pr.InvocationConfiguration.Error, "simulating"))
@@ -53,12 +56,13 @@ public static class RunCommand
                 var (f0, f1) = FrequencyBand(s);
                 response = FrequencySweep.Compute(s, f0, f1, 200, log: true);
             }
+            var picture = RunPictures.Waveforms(result, pictureOptions);
             string dir = CommonOptions.OutputDir(pr.GetValue(outDir), path);
             using (var output = new OutputFolder(dir))
             {
                 ProbesCsv.Write(result, output.File("probes.csv"));
                 File.WriteAllText(output.File("summary.json"), RunSummary.Text(summary));
-                var chart = RunPictures.Waveforms(result, pr.GetValue(currents));
+                var chart = picture.Chart;
                 File.WriteAllBytes(output.File("waveforms.png"), LineChart.RenderPng(chart, 1200, pr.GetValue(currents) ? 900 : 600));
                 if (pr.GetValue(svg)) File.WriteAllText(output.File("waveforms.svg"), LineChart.RenderSvg(chart, 1200, pr.GetValue(currents) ? 900 : 600));
                 File.WriteAllBytes(output.File("spacetime.png"), RunPictures.SpaceTime(result, 1000, 800));
@@ -79,6 +83,8 @@ public static class RunCommand
             else
             {
                 PrintSummary(o, result, figures, eyes, dir);
+                if (picture.Limited)
+                    o.WriteLine($"  waveforms.png shows {picture.Shown.Describe()}: the start-up and the first {picture.EdgesShown} of {picture.SourceEdges} source edges; --window all draws the whole record, --window START..STOP another part");
                 if (fd is not null)
                     foreach (var d in fd)
                         o.WriteLine($"  frequency-domain check {d.Probe}: largest difference {Quantity.Format(d.MaxDiffV, "V", 3)} ({d.MaxDiffPct:F3} % of the swing)");
@@ -95,6 +101,30 @@ public static class RunCommand
         double feature = s.Source.ShortestFeature;
         double f1 = double.IsFinite(feature) ? 3 / feature : 1 / Simulate.Plan(s).Dt / 4;
         return (f0, Math.Clamp(f1, f0 * 10, 100e9));
+    }
+
+    /// <summary>Reads --window and --plot into the picture options, checked against the scenario before anything runs.</summary>
+    public static WaveformOptions PictureOptions(WaveSim.Core.Model.Scenario s, string? window, string? plot, bool currents)
+    {
+        TimeWindow? w = window is null ? null : ParseWindow(window);
+        try { w?.CheckAgainst(s.Simulation.Duration); }
+        catch (InputException ex) { throw new InputException("--window: " + ex.Message); }
+        string[]? probes = plot?.Split(',', StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries);
+        try { if (probes is not null) RunPictures.ProbeIndices(s, probes); }
+        catch (InputException ex) { throw new InputException("--plot: " + ex.Message); }
+        return new WaveformOptions { Currents = currents, Window = w, Probes = probes };
+    }
+
+    /// <summary>Reads "10ns..20ns" (each end with its time unit) or "all".</summary>
+    public static TimeWindow ParseWindow(string text)
+    {
+        const string Expected = "expected START..STOP with time units and START before STOP (e.g. 10ns..20ns), or all";
+        if (text.Trim().Equals("all", StringComparison.OrdinalIgnoreCase)) return TimeWindow.Whole;
+        string[] ends = text.Split("..");
+        if (ends.Length != 2 || !Quantity.TryParse(ends[0].Trim(), Dimension.Time, out double a) || !Quantity.TryParse(ends[1].Trim(), Dimension.Time, out double b))
+            throw new InputException($"--window: {Expected}, got '{text}'");
+        if (!(b > a)) throw new InputException($"--window: {Expected}; '{text}' ends before it starts");
+        return new TimeWindow(a, b);
     }
 
     /// <summary>Reads "1280x720".</summary>

@@ -50,12 +50,13 @@ public static class SweepCommand
                 result = SweepRunner.Run(grid, new SweepRunOptions { Serial = pr.GetValue(serial), SettleBand = band, Force = pr.GetValue(force), Progress = bar }, ct);
 
             string dir = CommonOptions.OutputDir(pr.GetValue(outDir), path);
+            var best = g is null ? null : result.Best(g, limits);
             using (var output = new OutputFolder(dir))
             {
                 SweepCsv.Write(result, output.File("sweep.csv"));
                 foreach (string f in figures)
                 {
-                    var chart = SweepPictures.Chart(result, f);
+                    var chart = SweepPictures.Chart(result, f, best, g);
                     File.WriteAllBytes(output.File($"sweep_{FigureSelector.Stem(f)}.png"), LineChart.RenderPng(chart, 1200, 300 + 300 * result.Probes.Count));
                 }
                 output.Commit();

@@ -20,7 +20,7 @@ public static class FrequencyOutputs
     {
         Directory.CreateDirectory(dir);
         WriteCsv(Path.Combine(dir, CsvName), response);
-        WriteAtomic(Path.Combine(dir, PngName), path => File.WriteAllBytes(path, LineChart.RenderPng(Chart(response, title), 1200, 800)));
+        WriteAtomic(Path.Combine(dir, PngName), path => File.WriteAllBytes(path, LineChart.RenderPng(Chart(response, title), 1200, 960)));
     }
 
     /// <summary>
@@ -44,20 +44,44 @@ public static class FrequencyOutputs
     });
 
     /// <summary>
-    /// The chart: probe gains (dB) above |Zin| (ohm). The chart library's X axis is linear, so a logarithmic sweep is drawn
-    /// against log10(f / 1 Hz), and the axis title says so.
+    /// The chart: each probe's gain (dB) and phase (degrees, wrapped to ±180°), then |Zin| (ohm), against frequency. A
+    /// logarithmic sweep is drawn on a logarithmic axis labelled with prefixed frequencies (1 M, 10 M, 100 M, 1 G).
     /// </summary>
     public static ChartSpec Chart(FrequencyResponse r, string title)
     {
-        double[] x = r.Logarithmic ? r.F.Select(Math.Log10).ToArray() : r.F;
+        double[] x = r.F;
         var gains = r.Probes.Select(p => new Series(p.Name, x, Enumerable.Range(0, x.Length).Select(p.GainDb).ToArray())).ToArray();
+        var phases = r.Probes.Select(p => PhaseSeries(p.Name, x, Enumerable.Range(0, x.Length).Select(p.PhaseDeg).ToArray(), r.Logarithmic)).ToArray();
         var zin = new Series("|Zin|", x, r.Zin.Select(z => z.Magnitude).ToArray());
         var panels = new List<ChartPanel>();
-        if (gains.Length > 0) panels.Add(new ChartPanel("Gain", "dB", gains));
+        if (gains.Length > 0)
+        {
+            panels.Add(new ChartPanel("Gain", "dB", gains));
+            panels.Add(new ChartPanel("Phase", "\u00b0", phases) { YRange = new AxisRange(-180, 180), YTicks = [-180, -90, 0, 90, 180] });
+        }
         panels.Add(new ChartPanel("Input impedance", "\u03a9", [zin]));
-        return r.Logarithmic
-            ? new ChartSpec(title, "Frequency, log10(f / 1 Hz)", "", panels)
-            : new ChartSpec(title, "Frequency", "Hz", panels);
+        return new ChartSpec(title, "Frequency", "Hz", panels) { XKind = r.Logarithmic ? AxisKind.Logarithmic : AxisKind.Linear };
+    }
+
+    /// <summary>
+    /// A wrapped phase trace with a gap wherever it jumps by more than 180° between neighbours (a wrap, not a feature), so no
+    /// vertical stroke joins +180° to −180°.
+    /// </summary>
+    internal static Series PhaseSeries(string name, double[] f, double[] phase, bool logarithmic)
+    {
+        var xs = new List<double>(f.Length + 8);
+        var ys = new List<double>(f.Length + 8);
+        for (int k = 0; k < f.Length; k++)
+        {
+            if (k > 0 && double.IsFinite(phase[k]) && double.IsFinite(phase[k - 1]) && Math.Abs(phase[k] - phase[k - 1]) > 180)
+            {
+                xs.Add(logarithmic ? Math.Sqrt(f[k] * f[k - 1]) : 0.5 * (f[k] + f[k - 1]));
+                ys.Add(double.NaN);
+            }
+            xs.Add(f[k]);
+            ys.Add(phase[k]);
+        }
+        return new Series(name, xs.ToArray(), ys.ToArray());
     }
 
     static void WriteAtomic(string path, Action<string> write)

@@ -9,6 +9,12 @@ public sealed record ChartPanel(string YLabel, string YUnit, IReadOnlyList<Serie
     /// <summary>Fixed Y range; null fits the data with 5 % head-room above and below.</summary>
     public AxisRange? YRange { get; init; }
 
+    /// <summary>
+    /// Fixed Y tick positions inside <see cref="YRange"/> (e.g. every 90° of a phase); null picks 1-2-5 steps. Needs a
+    /// <see cref="YRange"/>.
+    /// </summary>
+    public IReadOnlyList<double>? YTicks { get; init; }
+
     /// <summary>Labelled horizontal lines, e.g. receiver thresholds. Default none.</summary>
     public IReadOnlyList<ReferenceLine> ReferenceLines { get; init; } = [];
 

@@ -32,49 +32,96 @@ internal static class ElementPainter
         SKRect r = g.PlotArea;
         foreach (LineElement e in elements)
         {
-            if (!InRange(g, e)) continue;
+            if (!InRange(g, e) || e.Kind == LineElementKind.Probe) continue;
             float px = Ink.Snap(g.XToPixel(e.Position));
             canvas.DrawLine(px, r.Top, px, r.Bottom, e.Kind == LineElementKind.SegmentBoundary ? dotted : solid);
         }
     }
 
-    /// <summary>Symbols sitting on the bottom edge of the plot, so each kind is told apart at a glance.</summary>
+    /// <summary>Symbols sitting on the bottom edge of the plot, so each kind is told apart at a glance (probes: see <see cref="Probes"/>).</summary>
     public static void Symbols(SKCanvas canvas, ChartGeometry g, IReadOnlyList<LineElement> elements, float size)
+    {
+        float y = g.PlotArea.Bottom - size * 0.9f;
+        foreach (LineElement e in elements)
+            if (InRange(g, e) && e.Kind != LineElementKind.Probe) Symbol(canvas, e.Kind, g.XToPixel(e.Position), y, size * 0.5f);
+    }
+
+    /// <summary>
+    /// One element's symbol centred on (x, y), half-size <paramref name="s"/>: two plates for a shunt part, an open box for a
+    /// series part, a ring for the source, a filled bar for the load, a diamond for a branch junction, a downward triangle for
+    /// a probe, a short dotted stroke for a segment boundary (drawn in the plot as a dotted line).
+    /// </summary>
+    public static void Symbol(SKCanvas canvas, LineElementKind kind, float x, float y, float s)
     {
         using SKPaint outline = Ink.Stroke(Palette.Ink, 1.25f);
         using SKPaint fill = Ink.Fill(Palette.Ink);
         using SKPaint paper = Ink.Fill(Palette.Background);
-        float y = g.PlotArea.Bottom - size * 0.9f, s = size * 0.5f;
-        foreach (LineElement e in elements)
+        switch (kind)
         {
-            if (!InRange(g, e)) continue;
-            float x = g.XToPixel(e.Position);
-            switch (e.Kind)
-            {
-                case LineElementKind.Shunt: // two plates, a capacitor-like mark to ground
-                    canvas.DrawRect(x - s, y - s * 0.55f, 2 * s, s * 1.1f, paper);
-                    canvas.DrawLine(x - s, y - s * 0.3f, x + s, y - s * 0.3f, outline);
-                    canvas.DrawLine(x - s, y + s * 0.3f, x + s, y + s * 0.3f, outline);
-                    break;
-                case LineElementKind.Series:
-                    canvas.DrawRect(x - s * 0.5f, y - s, s, 2 * s, paper);
-                    canvas.DrawRect(x - s * 0.5f, y - s, s, 2 * s, outline);
-                    break;
-                case LineElementKind.Source:
-                    canvas.DrawCircle(x, y, s, paper);
-                    canvas.DrawCircle(x, y, s, outline);
-                    break;
-                case LineElementKind.Load:
-                    canvas.DrawRect(x - s * 0.5f, y - s, s, 2 * s, fill);
-                    break;
-                case LineElementKind.Branch:
-                    var b = new SKPathBuilder();
-                    b.MoveTo(x, y - s); b.LineTo(x + s, y); b.LineTo(x, y + s); b.LineTo(x - s, y); b.Close();
-                    using (SKPath diamond = b.Detach()) { canvas.DrawPath(diamond, paper); canvas.DrawPath(diamond, outline); }
-                    break;
-            }
+            case LineElementKind.Shunt:
+                canvas.DrawRect(x - s, y - s * 0.55f, 2 * s, s * 1.1f, paper);
+                canvas.DrawLine(x - s, y - s * 0.3f, x + s, y - s * 0.3f, outline);
+                canvas.DrawLine(x - s, y + s * 0.3f, x + s, y + s * 0.3f, outline);
+                break;
+            case LineElementKind.Series:
+                canvas.DrawRect(x - s * 0.5f, y - s, s, 2 * s, paper);
+                canvas.DrawRect(x - s * 0.5f, y - s, s, 2 * s, outline);
+                break;
+            case LineElementKind.Source:
+                canvas.DrawCircle(x, y, s, paper);
+                canvas.DrawCircle(x, y, s, outline);
+                break;
+            case LineElementKind.Load:
+                canvas.DrawRect(x - s * 0.5f, y - s, s, 2 * s, fill);
+                break;
+            case LineElementKind.Branch:
+                using (SKPath diamond = Polygon([(x, y - s), (x + s, y), (x, y + s), (x - s, y)])) { canvas.DrawPath(diamond, paper); canvas.DrawPath(diamond, outline); }
+                break;
+            case LineElementKind.Probe:
+                using (SKPath down = Polygon([(x - s * 0.8f, y - s * 0.7f), (x + s * 0.8f, y - s * 0.7f), (x, y + s * 0.7f)])) canvas.DrawPath(down, fill);
+                break;
+            case LineElementKind.SegmentBoundary:
+                using (SKPaint dotted = Ink.Stroke(Palette.Muted, 1.25f, [2f, 3f])) canvas.DrawLine(x, y - s * 1.2f, x, y + s * 1.2f, dotted);
+                break;
         }
     }
+
+    static SKPath Polygon((float X, float Y)[] corners)
+    {
+        var b = new SKPathBuilder();
+        b.MoveTo(corners[0].X, corners[0].Y);
+        foreach (var (cx, cy) in corners.Skip(1)) b.LineTo(cx, cy);
+        b.Close();
+        return b.Detach();
+    }
+
+    /// <summary>Probe marks: a triangle on the top edge of the plot pointing at the probe's position, its name beside it.</summary>
+    public static void Probes(SKCanvas canvas, ChartGeometry g, IReadOnlyList<LineElement> elements, SKFont font)
+    {
+        using SKPaint text = Ink.Fill(Palette.Ink);
+        float s = font.Size * 0.5f, y = g.PlotArea.Top + s * 0.8f;
+        foreach (LineElement e in elements)
+        {
+            if (e.Kind != LineElementKind.Probe || !InRange(g, e)) continue;
+            float x = g.XToPixel(e.Position);
+            Symbol(canvas, LineElementKind.Probe, x, y, s);
+            if (string.IsNullOrEmpty(e.Label)) continue;
+            bool leftSide = x > g.PlotArea.Right - Ink.Width(font, e.Label) - font.Size;
+            Ink.TextCentredV(canvas, e.Label, leftSide ? x - s : x + s, y + font.Size * 0.15f, leftSide ? SKTextAlign.Right : SKTextAlign.Left, font, text);
+        }
+    }
+
+    /// <summary>The legend's words for each kind, in the order the legend lists them.</summary>
+    public static readonly IReadOnlyList<(LineElementKind Kind, string Text)> LegendNames =
+    [
+        (LineElementKind.Source, "source"),
+        (LineElementKind.SegmentBoundary, "segment boundary"),
+        (LineElementKind.Series, "series part"),
+        (LineElementKind.Shunt, "shunt part"),
+        (LineElementKind.Branch, "branch junction"),
+        (LineElementKind.Load, "load"),
+        (LineElementKind.Probe, "probe"),
+    ];
 
     /// <summary>Labels centred over each element, row 0 nearest the plot.</summary>
     public static void Labels(SKCanvas canvas, ChartGeometry g, IReadOnlyList<LineElement> elements, int[] rows, SKFont font, float rowHeight)

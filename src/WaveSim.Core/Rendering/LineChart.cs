@@ -114,8 +114,8 @@ public static class LineChart
             ChartGeometry g = pl.Geometry;
             bool isBottom = p == layout.Panels.Count - 1;
             AxisPainter.Grid(canvas, g);
-            DrawReferenceLines(canvas, g, pl.Panel.ReferenceLines, small);
             DrawTraces(canvas, g, pl.Panel.Series);
+            DrawReferenceLines(canvas, g, pl.Panel.ReferenceLines, small); // over the traces: a threshold must stay visible
             DrawMarkers(canvas, g, pl.Panel.Markers, small);
             AxisPainter.Frame(canvas, g, tick, xTicks: true, yTicks: true);
             AxisPainter.YTickLabels(canvas, g, font, tick + fs * 0.3f);
@@ -151,16 +151,20 @@ public static class LineChart
     internal static void DrawReferenceLines(SKCanvas canvas, ChartGeometry g, IReadOnlyList<ReferenceLine> lines, SKFont font)
     {
         if (lines.Count == 0) return;
-        using SKPaint line = Ink.Stroke(Palette.Muted, 1f, [5f, 4f]);
-        using SKPaint text = Ink.Fill(Palette.Muted);
         SKRect r = g.PlotArea;
         foreach (ReferenceLine rl in lines)
         {
             if (!double.IsFinite(rl.Y) || rl.Y < g.Y.Min || rl.Y > g.Y.Max) continue;
+            using SKPaint line = rl.Colour is { } c ? Ink.Stroke(c, 1.5f, [9f, 4f]) : Ink.Stroke(Palette.Muted, 1f, [5f, 4f]);
+            using SKPaint text = Ink.Fill(rl.Colour ?? Palette.Muted);
             float py = Ink.Snap(g.YToPixel(rl.Y));
             canvas.DrawLine(r.Left, py, r.Right, py, line);
-            if (!string.IsNullOrEmpty(rl.Label))
-                canvas.DrawText(rl.Label, r.Right - font.Size * 0.4f, py - font.Size * 0.3f, SKTextAlign.Right, font, text);
+            if (string.IsNullOrEmpty(rl.Label)) continue;
+            // On a paper patch above the line, so neither the dashes nor a trace strike through the words.
+            float w = Ink.Width(font, rl.Label), pad = font.Size * 0.25f, baseline = py - font.Size * 0.45f;
+            var patch = new SKRect(r.Right - font.Size * 0.4f - w - pad, baseline + font.Metrics.Ascent - pad * 0.5f, r.Right - font.Size * 0.4f + pad, baseline + font.Metrics.Descent);
+            using (SKPaint paper = Ink.Fill(Palette.Background.WithAlpha(0xE0))) canvas.DrawRect(patch, paper);
+            canvas.DrawText(rl.Label, r.Right - font.Size * 0.4f, baseline, SKTextAlign.Right, font, text);
         }
     }
 
@@ -169,16 +173,44 @@ public static class LineChart
         if (markers.Count == 0) return;
         using SKPaint ring = Ink.Stroke(Palette.Ink, 1.25f);
         using SKPaint text = Ink.Fill(Palette.Ink);
-        foreach (Marker m in markers)
+        // Highlighted points last, so nothing covers them.
+        foreach (Marker m in markers.OrderBy(m => m.Style == MarkerStyle.Highlight ? 1 : 0))
         {
             if (!double.IsFinite(m.X) || !double.IsFinite(m.Y)) continue;
             float px = g.XToPixel(m.X), py = g.YToPixel(m.Y);
-            canvas.DrawCircle(px, py, font.Size * 0.35f, ring);
             bool leftSide = px > g.PlotArea.MidX;
             float tx = leftSide ? px - font.Size * 0.6f : px + font.Size * 0.6f;
             float ty = py < g.PlotArea.Top + font.Size * 1.5f ? py + font.Size * 1.2f : py - font.Size * 0.5f;
+            if (m.Style == MarkerStyle.Highlight) { Highlight(canvas, g, m.Label, px, py, font); continue; }
+            canvas.DrawCircle(px, py, font.Size * 0.35f, ring);
             canvas.DrawText(m.Label, tx, ty, leftSide ? SKTextAlign.Right : SKTextAlign.Left, font, text);
         }
+    }
+
+    /// <summary>A filled diamond in <see cref="Palette.Highlight"/> with a paper rim, and its label in a box beside it.</summary>
+    static void Highlight(SKCanvas canvas, ChartGeometry g, string label, float px, float py, SKFont font)
+    {
+        float s = font.Size * 0.6f;
+        var b = new SKPathBuilder();
+        b.MoveTo(px, py - s); b.LineTo(px + s, py); b.LineTo(px, py + s); b.LineTo(px - s, py); b.Close();
+        using SKPath diamond = b.Detach();
+        using SKPaint fill = Ink.Fill(Palette.Highlight);
+        using SKPaint rim = Ink.Stroke(Palette.Background, 2f);
+        canvas.DrawPath(diamond, rim);
+        canvas.DrawPath(diamond, fill);
+        if (string.IsNullOrEmpty(label)) return;
+        float w = Ink.Width(font, label), pad = font.Size * 0.35f, h = font.Size * 1.35f;
+        bool leftSide = px > g.PlotArea.MidX;
+        float boxLeft = leftSide ? px - s - pad - w - 2 * pad : px + s + pad;
+        // Above the point unless that leaves the plot; then below it.
+        float boxTop = py - s - h < g.PlotArea.Top ? py + s * 0.5f : py - s * 0.5f - h;
+        var box = new SKRect(boxLeft, boxTop, boxLeft + w + 2 * pad, boxTop + h);
+        using SKPaint paper = Ink.Fill(Palette.Background);
+        using SKPaint edge = Ink.Stroke(Palette.Highlight, 1.25f);
+        using SKPaint ink = Ink.Fill(Palette.Ink);
+        canvas.DrawRoundRect(box, pad, pad, paper);
+        canvas.DrawRoundRect(box, pad, pad, edge);
+        Ink.TextCentredV(canvas, label, box.Left + pad, box.MidY, SKTextAlign.Left, font, ink);
     }
 
     static (int Rows, List<(float X, float Right, int Row, int Series)> Entries) LegendRows(ChartPanel panel, SKFont font, float left, float right, float swatch, float fs)
@@ -209,6 +241,11 @@ public static class LineChart
         for (int i = 0; i < axes.Length; i++)
         {
             int intervals = Math.Clamp((int)(heights[i] / 36f), 2, 10);
+            if (spec.Panels[i].YTicks is { } fixedTicks)
+            {
+                axes[i] = new AxisScale(spec.Panels[i].YLabel, spec.Panels[i].YUnit, ranges[i].Min, ranges[i].Max, fixedTicks);
+                continue;
+            }
             axes[i] = AxisScale.Exact(spec.Panels[i].YLabel, spec.Panels[i].YUnit, ranges[i].Min, ranges[i].Max, intervals);
         }
         return axes;
@@ -273,6 +310,8 @@ public static class LineChart
         {
             if (!(p.HeightWeight > 0)) throw new ArgumentException($"Panel '{p.YLabel}' height weight must be greater than 0.", nameof(spec));
             if (p.YRange is { } yr && !(yr.Max > yr.Min)) throw new ArgumentException($"Panel '{p.YLabel}' Y range {yr.Min}..{yr.Max} must have max > min.", nameof(spec));
+            if (p.YTicks is not null && (p.YRange is not { } tr || p.YTicks.Any(t => !(t >= tr.Min && t <= tr.Max))))
+                throw new ArgumentException($"Panel '{p.YLabel}' has fixed Y ticks: they need a Y range that holds them all.", nameof(spec));
             foreach (Series s in p.Series)
             {
                 if (s.X.Length != s.Y.Length)

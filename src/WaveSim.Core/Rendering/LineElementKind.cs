@@ -15,4 +15,6 @@ public enum LineElementKind
     Load,
     /// <summary>Where a branch leaves the main line.</summary>
     Branch,
+    /// <summary>Where a probe records; marked at the top edge of the plot, with its name.</summary>
+    Probe,
 }

@@ -32,7 +32,12 @@ public sealed record LineLayout(IReadOnlyList<LinePiece> Pieces, string LengthUn
             for (int i = 1; i < p.X.Length; i++)
                 if (!(p.X[i] >= p.X[i - 1]) || !double.IsFinite(p.X[i])) throw new ArgumentException($"Piece '{p.Name}' node positions must be finite and ascending (node {i})."); // a series part repeats a position
         }
+        foreach (LineElement e in Elements)
+            if (e.Piece < 0 || e.Piece >= Pieces.Count) throw new ArgumentException($"Element '{e.Label}' sits on piece {e.Piece}, but the layout has {Pieces.Count} piece(s).");
     }
+
+    /// <summary>The elements drawn as lines and labelled over the main axis: those on the main line, without probes.</summary>
+    internal IReadOnlyList<LineElement> MainMarks => Elements.Where(e => e.Piece == 0 && e.Kind != LineElementKind.Probe).ToList();
 
     internal (double Min, double Max) Extent()
     {

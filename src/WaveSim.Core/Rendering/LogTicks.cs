@@ -3,6 +3,8 @@ namespace WaveSim.Core.Rendering;
 /// <summary>
 /// Ticks of a logarithmic axis. Rules (common practice, no source), tried in order:
 /// <list type="number">
+/// <item>Below two decades, or when fewer than three decade values fall inside, 1, 2 and 5 × each decade first (as in
+/// item 3) when they fit: two decade labels alone leave the axis nearly unreadable.</item>
 /// <item>Decades (1, 10, 100 … × the unit), every k-th decade when there are more decades than label slots; at least two must
 /// fall inside the range. When every decade is labelled, 2..9 × each decade are minor ticks; otherwise the unlabelled
 /// decades are.</item>
@@ -31,7 +33,13 @@ public static class LogTicks
         double slot = 1.0 / maxIntervals;
         int eLo = (int)Math.Floor(lo + Eps), eHi = (int)Math.Floor(hi + Eps);
 
-        // 1. Decades, every k-th one so that labels keep a slot apart.
+        var oneTwoFive = Multiples(eLo, eHi, [1, 2, 5], min, max);
+        bool oneTwoFiveFits = oneTwoFive.Length >= 2 && SmallestGap(oneTwoFive, span) >= slot * (1 - Eps);
+        double[] OneTwoFiveMinor() => Multiples(eLo, eHi, [3, 4, 6, 7, 8, 9], min, max);
+        int decadesInside = Multiples(eLo, eHi, [1], min, max).Length;
+        if ((span < 2 - Eps || decadesInside < 3) && oneTwoFiveFits) return (oneTwoFive, OneTwoFiveMinor());
+
+        // Decades, every k-th one so that labels keep a slot apart.
         int k = Math.Max(1, (int)Math.Ceiling(span / maxIntervals - Eps));
         var decades = Multiples(eLo, eHi, [1], min, max);
         var labelled = decades.Where(d => FloorMod(Exponent(d), k) == 0).ToArray();
@@ -41,12 +49,10 @@ public static class LogTicks
             return (labelled, minor);
         }
 
-        // 2. 1-2-5 within each decade.
-        var oneTwoFive = Multiples(eLo, eHi, [1, 2, 5], min, max);
-        if (oneTwoFive.Length >= 2 && SmallestGap(oneTwoFive, span) >= slot * (1 - Eps))
-            return (oneTwoFive, Multiples(eLo, eHi, [3, 4, 6, 7, 8, 9], min, max));
+        // 1-2-5 within each decade.
+        if (oneTwoFiveFits) return (oneTwoFive, OneTwoFiveMinor());
 
-        // 3. Even 1-2-5 steps, log-placed: the densest that keeps a slot between neighbours.
+        // Even 1-2-5 steps, log-placed: the densest that keeps a slot between neighbours.
         for (int n = 4 * maxIntervals; n >= 1; n--)
         {
             double[] even = NiceTicks.Within(min, max, n);

@@ -4,4 +4,8 @@ namespace WaveSim.Core.Rendering;
 /// <param name="X">X position, SI.</param>
 /// <param name="Y">Y position, SI.</param>
 /// <param name="Label">Text drawn beside the point.</param>
-public sealed record Marker(double X, double Y, string Label);
+public sealed record Marker(double X, double Y, string Label)
+{
+    /// <summary>How the point is drawn. Default <see cref="MarkerStyle.Ring"/>.</summary>
+    public MarkerStyle Style { get; init; } = MarkerStyle.Ring;
+}

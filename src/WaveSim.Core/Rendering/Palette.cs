@@ -44,6 +44,12 @@ public static class Palette
     /// <summary>Secondary marks: reference lines, element positions.</summary>
     public static SKColor Muted { get; } = new(0x6E, 0x6E, 0x6E);
 
+    /// <summary>The one emphasised mark of a chart (a sweep's best point): a deep magenta no trace colour is close to.</summary>
+    public static SKColor Highlight { get; } = new(0xB0, 0x00, 0x5E);
+
+    /// <summary>Receiver thresholds drawn across a waveform panel: a dark red-brown, apart from every trace colour.</summary>
+    public static SKColor Threshold { get; } = new(0x9E, 0x2A, 0x2B);
+
     /// <summary>The colour of trace <paramref name="index"/> (cycles through <see cref="Traces"/>).</summary>
     public static SKColor TraceColour(int index) => Traces[Math.Abs(index) % Traces.Count];
 

@@ -60,7 +60,7 @@ public static class SpaceTimeRenderer
         var (xMin, xMax) = (layout.MainX[0], layout.MainX[^1]);
         var xAxis = ElementPainter.PositionAxis(layout, xMin, xMax, Math.Clamp((int)((right - left) / (fs * 6.5f)), 2, 12));
         var provisional = new ChartGeometry(new SKRect(left, headerH, right, bottom), xAxis, tAxis, yDown: true);
-        int[] rowOf = ElementPainter.LabelRows(layout.Elements, provisional, small, MaxLabelRows, out int rows);
+        int[] rowOf = ElementPainter.LabelRows(layout.MainMarks, provisional, small, MaxLabelRows, out int rows);
         float top = MathF.Ceiling(headerH + rows * rowH + (rows > 0 ? fs * 0.3f : 0));
         var geometry = new ChartGeometry(new SKRect(left, top, right, bottom), xAxis, tAxis, yDown: true);
         return new FrameLayout(geometry, new SKRect(left, 0, right, headerH), rows, rowOf, fs);
@@ -85,13 +85,13 @@ public static class SpaceTimeRenderer
 
         using (SKImage map = MapImage(g, layout.MainX, times, rows, reference, vMin, vMax))
             canvas.DrawImage(map, g.PlotArea, new SKSamplingOptions(SKFilterMode.Nearest));
-        ElementPainter.Lines(canvas, g, layout.Elements, new SKColor(0x30, 0x30, 0x30, 0xA0));
+        ElementPainter.Lines(canvas, g, layout.MainMarks, new SKColor(0x30, 0x30, 0x30, 0xA0));
         AxisPainter.Frame(canvas, g, tick);
         AxisPainter.YTickLabels(canvas, g, font, tick + fs * 0.3f);
         AxisPainter.XTickLabels(canvas, g, font, tick + fs * 0.25f);
         Ink.TextVertical(canvas, g.Y.Title, fs * 1.6f, g.PlotArea.MidY, font, text);
         Ink.TextCentredV(canvas, g.X.Title, g.PlotArea.MidX, g.PlotArea.Bottom + fs * 2.35f, SKTextAlign.Center, font, text);
-        ElementPainter.Labels(canvas, g, layout.Elements, fl.LabelRowOf, small, small.Size * 1.35f);
+        ElementPainter.Labels(canvas, g, layout.MainMarks, fl.LabelRowOf, small, small.Size * 1.35f);
         Ink.TextCentredV(canvas, "Voltage along the line", fl.HeaderBox.Left, fl.HeaderBox.MidY, SKTextAlign.Left, font, text);
         ColourBar(canvas, ColourBarBox(fl), reference, vMin, vMax, g.Y.Ticks.Count, font, tick);
     }

@@ -11,7 +11,11 @@ namespace WaveSim.Core.Sweeps;
 public static class SweepPictures
 {
     /// <summary>The chart of <paramref name="figure"/> (a <see cref="Analysis.SignalFigures.FigureNames"/> entry); a figure that does not apply leaves a gap.</summary>
-    public static ChartSpec Chart(SweepResult r, string figure)
+    /// <param name="r">The sweep.</param>
+    /// <param name="figure">The figure charted.</param>
+    /// <param name="best">The point a goal chose (<see cref="SweepResult.Best"/>), marked in every panel where the figure applies; null marks none.</param>
+    /// <param name="goal">The goal that chose <paramref name="best"/>, named in its label.</param>
+    public static ChartSpec Chart(SweepResult r, string figure, SweepPointResult? best = null, SweepGoal? goal = null)
     {
         var first = r.Axes[0];
         var groups = r.Points.GroupBy(p => string.Join("|", p.Values.Skip(1))).ToList();
@@ -28,13 +32,25 @@ public static class SweepPictures
             }).ToList();
             panels.Add(new ChartPanel($"{probe} {FigureSelector.Stem(figure).Replace('_', ' ')}", FigureSelector.Unit(figure), series)
             {
-                Markers = series.SelectMany(IsolatedPoints).ToList(),
+                Markers = [.. series.SelectMany(IsolatedPoints), .. BestMarker(r, best, goal, target)],
             });
         }
         return new ChartSpec($"{FigureSelector.Stem(figure).Replace('_', ' ')} against {first.KeyPath}", first.KeyPath, first.DisplayUnit, panels)
         {
             XKind = first.ChartsOnLogAxis ? AxisKind.Logarithmic : AxisKind.Linear,
         };
+    }
+
+    /// <summary>The best point of this panel's probe and figure, as a highlighted marker labelled with its key values.</summary>
+    static IEnumerable<Marker> BestMarker(SweepResult r, SweepPointResult? best, SweepGoal? goal, ProbeFigure target)
+    {
+        if (best is null || r.Value(best, target) is not { } y) yield break;
+        string at = string.Join(", ", r.Axes.Select((a, k) => $"{a.KeyPath} {Quantity.Format(best.Values[k], a.DisplayUnit, 3)}"));
+        // The full label where the goal's own figure is charted; elsewhere the same point, named briefly.
+        string label = goal is null ? $"best point: {at}"
+            : goal.Target == target ? $"{(goal.Maximise ? "highest" : "lowest")} {goal.Target.Probe} {FigureSelector.Stem(goal.Target.Figure).Replace('_', ' ')}: {at}"
+            : "best point";
+        yield return new Marker(best.Values[0], y, label) { Style = MarkerStyle.Highlight };
     }
 
     /// <summary>Points whose neighbours are gaps (the figure does not apply there): a line cannot show them, so they get a ring.</summary>

@@ -97,8 +97,42 @@ simulation: { duration: 5 ns }
             Assert.Equal(new byte[] { 0x89, 0x50, 0x4E, 0x47 }, png[..4]);
         }
         finally { Directory.Delete(dir, recursive: true); }
+    }
+
+    [Fact]
+    public void The_chart_has_a_prefixed_log_frequency_axis_and_the_phase_in_degrees()
+    {
+        var s = TestScenarios.Parse(Yaml);
+        var r = FrequencySweep.Compute(s, 1e6, 1e9, 31, log: true);
         var chart = FrequencyOutputs.Chart(r, "sweep");
-        Assert.Contains("log10", chart.XLabel);
-        Assert.Equal(Math.Log10(1e9), chart.Panels[0].Series[0].X[^1], 1e-12);
+        Assert.Equal(Core.Rendering.AxisKind.Logarithmic, chart.XKind);
+        Assert.Equal(("Frequency", "Hz"), (chart.XLabel, chart.XUnit));
+        Assert.Equal(["Gain", "Phase", "Input impedance"], chart.Panels.Select(p => p.YLabel));
+        var x = Core.Rendering.LineChart.Layout(chart, 1200, 960).Panels[0].Geometry.X;
+        Assert.Equal(["1 M", "10 M", "100 M", "1 G"], x.Ticks.Select(x.FormatTick));
+        Assert.Equal("Frequency [Hz]", x.Title);
+
+        var phase = chart.Panels[1];
+        Assert.Equal("\u00b0", phase.YUnit);
+        Assert.Equal([-180.0, -90, 0, 90, 180], phase.YTicks!);
+        // Far end of a lossless line fed from a matched source (Rs = Z0): V(l) = (Vs/2)(1 + ΓL)·e^(−jβl) with ΓL real
+        // (Pozar, Microwave Engineering, 4th ed., Sec. 2.3, from memory), so the phase is −360°·f·τ, wrapped, with τ = 5 ns.
+        var far = phase.Series[1];
+        Assert.Equal("far", far.Name);
+        int checkedPoints = 0;
+        for (int i = 0; i < far.X.Length; i++)
+        {
+            if (!double.IsFinite(far.Y[i])) continue;
+            double hand = -360 * far.X[i] * 5e-9;
+            double diff = Math.IEEERemainder(far.Y[i] - hand, 360);
+            Assert.True(Math.Abs(diff) < 1e-6, $"{far.X[i]} Hz: {far.Y[i]}° against {hand}°");
+            Assert.InRange(far.Y[i], -180, 180);
+            checkedPoints++;
+        }
+        Assert.Equal(31, checkedPoints);
+        // Each wrap (a jump of more than 180° between neighbours) is a gap, never a stroke across the panel.
+        for (int i = 1; i < far.Y.Length; i++)
+            if (double.IsFinite(far.Y[i]) && double.IsFinite(far.Y[i - 1])) Assert.True(Math.Abs(far.Y[i] - far.Y[i - 1]) <= 180);
+        Assert.Contains(far.Y, double.IsNaN);
     }
 }

@@ -101,6 +101,21 @@ public class LogAxisTests
     }
 
     [Fact]
+    public void Under_two_decades_1_2_5_labels_win_over_two_lone_decade_labels()
+    {
+        // 1 pF..50 pF spans 1.7 decades but holds two decade values (1 and 10 pF): those alone would be two labels.
+        var axis = AxisScale.Logarithmic("load.c", "F", Pico, 50 * Pico, 8);
+        Assert.Equal(["1 p", "2 p", "5 p", "10 p", "20 p", "50 p"], axis.Ticks.Select(axis.FormatTick));
+        Assert.Equal([3, 4, 6, 7, 8, 9, 30, 40], axis.MinorTicks.Select(t => Math.Round(t / Pico, 9)));
+        // 33 MHz..8 GHz spans 2.4 decades with only 100 MHz and 1 GHz inside: 1-2-5 steps again, as the frequency plot needs.
+        var band = AxisScale.Logarithmic("Frequency", "Hz", 33e6, 8e9, 10);
+        Assert.Equal(["50 M", "100 M", "200 M", "500 M", "1 G", "2 G", "5 G"], band.Ticks.Select(band.FormatTick));
+        // Three decade values inside keep decade labels.
+        var decades = AxisScale.Logarithmic("Frequency", "Hz", 1e6, 1e9, 10);
+        Assert.Equal(["1 M", "10 M", "100 M", "1 G"], decades.Ticks.Select(decades.FormatTick));
+    }
+
+    [Fact]
     public void Less_than_a_decade_falls_back_to_1_2_5_ticks_placed_logarithmically()
     {
         // 1 pF..5 pF: no second decade, so 1, 2, 5 pF, with 3 and 4 pF minor.
