@@ -27,9 +27,18 @@ public sealed record TerminationOutcome(TerminationDesign Design, SimulationResu
     /// <summary>True when the strategy applies and every judged receiver passes every rule.</summary>
     public bool MeetsLimits => Result is not null && Verdicts.Any(v => v.Judged) && Failures.Count == 0;
 
-    /// <summary>"ok", "n/a", "not judged" or the rules missed (probe, edge, what was measured).</summary>
-    public string Verdict => Result is null ? "n/a" : !Verdicts.Any(v => v.Judged) ? "not judged: " + string.Join("; ", Verdicts.Select(v => v.Note).OfType<string>())
-        : Failures.Count == 0 ? "ok" : string.Join(" | ", Verdicts.Where(v => v.Judged && v.Failures.Count > 0).Select(v => v.Summary()));
+    /// <summary>"ok", "n/a", "not judged" or the rules missed (probe, edge, what was measured); receivers that could not be judged are named.</summary>
+    public string Verdict
+    {
+        get
+        {
+            if (Result is null) return "n/a";
+            var skipped = Verdicts.Where(v => v.Note is not null).Select(v => $"{v.Probe}: {v.Note}").ToArray();
+            string verdict = !Verdicts.Any(v => v.Judged) ? "not judged"
+                : Failures.Count == 0 ? "ok" : string.Join(" | ", Verdicts.Where(v => v.Judged && v.Failures.Count > 0).Select(v => v.Summary()));
+            return skipped.Length == 0 ? verdict : verdict + " (" + string.Join("; ", skipped) + ")";
+        }
+    }
 }
 
 /// <summary>Every strategy's outcome on one net.</summary>

@@ -33,6 +33,7 @@ simulation: { duration: 80 ns, resolution: 2 }
         // ∫ R·i² dt = (V²/R)·RC/2 = C·V²/2 whatever R is. A square wave has two edges per period: P = 2·(C·V²/2)·f = C·V²·f.
         // With the edge a ramp of duration τ instead of a step (i = (C·V/τ)(1 − e^(−t/RC)) during it, then decaying), the same
         // integral gives C·V²·(RC/τ)·[1 − (RC/τ)(1 − e^(−τ/RC))] per edge, which tends to C·V²/2 as τ/RC → 0 (here 0.8 % less).
+        // (ReferenceData/termination-verdicts.md, "Power in an RC termination on a square wave".)
         double perEdge = c * v * v * (a / tau) * (1 - a / tau * (1 - Math.Exp(-tau / a)));
         double expected = 2 * perEdge * f;
         Assert.Equal(c * v * v * f, expected, c * v * v * f * 0.01);

@@ -42,6 +42,7 @@ simulation: { duration: 20 ns, resolution: 10 }
         // Ohm's law, resistive divider at DC (capacitors open, lossless line): with the driver held at 0 V, the load node sits
         // between VTT through the 50 ohm termination and ground through 18 + 32.4 ohm: V = VTT·(18 + 32.4)/(18 + 32.4 + 50)
         // = 1.65·50.4/100.4 = 0.8283 V. The stub carries no DC current, so both receivers sit at it. VIL − V = −28.3 mV.
+        // (ReferenceData/termination-verdicts.md, "Settled levels of a bus terminated to VTT".)
         double low = 1.65 * (18 + 32.4) / (18 + 32.4 + 50);
         Assert.Equal(0.828, low, 1e-3);
         foreach (string probe in new[] { "rx1", "rx2" })
@@ -75,6 +76,7 @@ simulation: { duration: 20 ns, resolution: 10 }
         // down) reaches 1 − 5/3 = −2/3, then 1 − 5/9 = 4/9 V, ... With VIH 0.5 V and VIL 0.15 V the rising edge never comes back
         // below VIH (lowest 5/9 V: margin 1/18 V) but the falling one rings back to 4/9 V, inside the band (margin 0.15 − 4/9 V).
         // The crossing count over the whole record is 2 for 2 edges, so counting crossings alone passes this net.
+        // (ReferenceData/termination-verdicts.md, "Ringing of a pulse on an open line".)
         const string yaml = @"title: pulse on a ringing line
 source: { waveform: pulse, low: 0 V, high: 1 V, rise: 500 ps, width: 40 ns, delay: 1 ns, resistance: 10 ohm }
 line:
