@@ -57,6 +57,7 @@ public static class ReportCommand
                     {
                         ["name"] = c.Probe,
                         ["verdict"] = c.Pass switch { true => "pass", false => "fail", null => "not judged" },
+                        ["failures"] = new JsonArray(c.Verdict.Failures.Select(f => (JsonNode)f.ToString()).ToArray()),
                     }).ToArray()),
                     ["pass"] = pass,
                     ["fail"] = fail,

@@ -9,7 +9,7 @@ using WaveSim.Core.Units;
 
 namespace WaveSim.Cli.Commands;
 
-/// <summary>`wavesim terminations SCENARIO`: compares none, series, parallel, Thevenin and RC terminations on the scenario's net.</summary>
+/// <summary>`wavesim terminations SCENARIO`: compares the net as drawn with none, series, parallel, Thevenin and RC terminations on it.</summary>
 public static class TerminationsCommand
 {
     /// <summary>Creates the command.</summary>
@@ -100,7 +100,10 @@ public static class TerminationsCommand
             string eye = !eyes ? "" : e is null ? $" {"-",10} {"-",9}"
                 : e.HasThresholds ? $" {V(e.EyeHeightThresholdsV),10} {T(e.EyeWidthThresholdsS),9}" : $" {V(e.EyeHeightV),10} {T(e.EyeWidthS),9}";
             o.WriteLine($"  {x.Design.Name,-9} {Pct(f.OvershootPct),9} {Pct(f.UndershootPct),10} {T(f.SettlingS),9} {f.ThresholdCrossings,9} {T(f.Delay50S),9}{eye} {W(x.PowerHighW),9} {W(x.PowerLowW),9} {W(x.PowerAverageW),9}  {x.Verdict}");
+            if (x.Design.Note is { } change) o.WriteLine($"  {"",-9} ({change})");
         }
+        var judged = r.Outcomes.SelectMany(x => x.Verdicts).Where(v => v.Judged).Select(v => v.Thresholds is null ? $"{v.Probe} (at the mid level)" : v.Probe).Distinct();
+        o.WriteLine($"  receivers judged: {string.Join(", ", judged)}; P high and P low are static (DC), P avg the simulated mean over the record; rules: docs/verdicts.md");
         if (eyes) o.WriteLine("  (bit pattern: the verdict is judged on the receiver's eye" + (r.Outcomes.Any(x => x.ReceiverEye?.Thresholds is not null) ? ", measured against the receiver thresholds)" : ")"));
         o.WriteLine($"parts (simulated with {r.Options.Series}; computed value, nearest E24, nearest E96; capacitors: next E24 value up):");
         foreach (var x in r.Outcomes.Where(x => x.Design.Parts.Count > 0))
@@ -109,7 +112,7 @@ public static class TerminationsCommand
                 ? $"{p.Label} {Quantity.Format(p.Ideal, p.Unit, 4)} -> E24 {Quantity.Format(p.E24, p.Unit, 3)}, E96 {Quantity.Format(e96, p.Unit, 3)}"
                 : $"{p.Label} {Quantity.Format(p.Ideal, p.Unit, 4)} -> {Quantity.Format(p.E24, p.Unit, 3)}"));
             if (x.Design.Kind == TerminationKind.Thevenin) parts += $"; level {Quantity.Format(x.Design.TheveninV, "V", 3)}";
-            o.WriteLine($"  {x.Design.Name,-9} {parts}" + (x.Design.Note is { } n && x.Result is not null ? $" ({n})" : ""));
+            o.WriteLine($"  {x.Design.Name,-9} {parts}");
         }
         o.WriteLine($"wrote {Path.Combine(dir, "terminations.csv")}, terminations.png");
     }

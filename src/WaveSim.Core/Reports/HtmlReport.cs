@@ -46,7 +46,7 @@ public static class HtmlReport
     {
         var r = input.Result;
         var s = r.Scenario;
-        var checks = ReceiverCheck.Judge(r, input.Figures, input.Eyes);
+        var checks = ReceiverCheck.Judge(r, input.Eyes, input.Limits);
         var w = new HtmlWriter();
         w.Line("<!DOCTYPE html>").Line("<html lang=\"en\">").Line("<head>").Line("<meta charset=\"utf-8\" />")
          .Line("<meta name=\"viewport\" content=\"width=device-width, initial-scale=1\" />");
@@ -124,8 +124,9 @@ public static class HtmlReport
             var cells = new List<(string, string?)>
             {
                 (p.Name, null), (p.Location, null), (V(p.Volts[^1]), null), (V(p.Volts.Min()), null), (V(p.Volts.Max()), null),
-                (Pct(f.OvershootPct), null), (Pct(f.UndershootPct), null), (V(f.AboveHighV), null), (V(f.BelowLowV), null), (V(f.RingbackV), null), (T(f.Rise1090S), null), (T(f.Fall9010S), null),
-                (T(f.Delay50S), null), (T(f.SettlingS), null), (crossings, Cls(c.CrossingsOk)),
+                (Pct(f.OvershootPct), Cls(c.OvershootOk)), (Pct(f.UndershootPct), null), (V(f.AboveHighV), null), (V(f.BelowLowV), null),
+                (V(f.RingbackV), Cls(c.RingbackOk)), (T(f.Rise1090S), null), (T(f.Fall9010S), null),
+                (T(f.Delay50S), null), (T(f.SettlingS), Cls(c.SettlingOk)), (crossings, Cls(c.CrossingsOk)),
                 // A bit stream has no single settled level: its margins are in the eye columns.
                 (bits ? "-" : V(f.NoiseMarginHighV), Cls(c.MarginHighOk)), (bits ? "-" : V(f.NoiseMarginLowV), Cls(c.MarginLowOk)),
             };
@@ -141,8 +142,19 @@ public static class HtmlReport
         w.Raw("</table>\n</div>\n");
         var withRx = checks.Where(c => c.Thresholds is not null).ToList();
         foreach (var c in withRx)
-            w.El("p", $"{c.Probe}: receiver thresholds Vih {V(c.Thresholds!.Vih)}, Vil {V(c.Thresholds.Vil)}.", ("class", "note"));
-        w.El("p", "Pass/fail rule: " + ReceiverCheck.Rule, ("id", "rule"));
+            w.El("p", $"{c.Probe}: receiver thresholds Vih {V(c.Thresholds!.Vih)}, Vil {V(c.Thresholds.Vil)}; settled low {V(c.Verdict.LowV)}, " +
+                $"settled high {V(c.Verdict.HighV)}; {c.Verdict.Edges.Count} edge(s) judged.", ("class", "note"));
+        var failures = checks.SelectMany(c => c.Verdict.Failures).ToList();
+        if (failures.Count > 0)
+        {
+            w.Raw("<ul id=\"verdicts\">\n");
+            foreach (var f in failures) w.El("li", f.ToString());
+            w.Raw("</ul>\n");
+        }
+        foreach (var c in checks.Where(c => c.Verdict.Note is not null)) w.El("p", $"{c.Probe}: {c.Verdict.Note}.", ("class", "note"));
+        var lim = input.Limits;
+        w.El("p", "Pass/fail rule: " + ReceiverCheck.Rule + $" Limits: overshoot {lim.MaxOvershootPct.ToString("G3", CultureInfo.InvariantCulture)} %, " +
+            $"settling {Quantity.Format(lim.MaxSettlingS, "s", 3)} within ±{(lim.SettleBand * 100).ToString("G3", CultureInfo.InvariantCulture)} % of the swing.", ("id", "rule"));
         w.El("p", "Figures refer to the first edge and the level it settles to, except above high and below low, the worst " +
             "excursions beyond those levels over the whole record; a dash means the figure does not apply. " +
             "Noise margin high = settled high level − Vih; noise margin low = Vil − settled low level.", ("class", "note"));
@@ -166,13 +178,14 @@ public static class HtmlReport
         w.El("h2", "Terminations");
         w.El("p", $"Z0 {Quantity.Format(t.Z0, "Ω", 3)} (first segment), line delay {Quantity.Format(t.LineDelayS, "s", 3)}, receiver '{t.ReceiverProbe}'; " +
             $"limits: overshoot {t.Options.MaxOvershootPct.ToString("G3", CultureInfo.InvariantCulture)} %, settling {Quantity.Format(t.Options.MaxSettlingS, "s", 3)}; " +
-            $"parts simulated with {t.Options.Series} values.");
-        w.Raw("<table id=\"terminations\">\n").HeaderRow(["strategy", "parts", "overshoot", "undershoot", "settling", "threshold crossings", "delay 50 %", "power avg", "verdict"]);
+            $"parts simulated with {t.Options.Series} values; power avg is the mean over the record of the simulated v·i in the termination's resistors.");
+        w.Raw("<table id=\"terminations\">\n").HeaderRow(["strategy", "change to the net as drawn", "parts", "overshoot", "undershoot", "settling", "threshold crossings", "delay 50 %", "power avg", "verdict"]);
         foreach (var o in t.Outcomes)
         {
             string parts = o.Design.Parts.Count == 0 ? "-" : string.Join("; ", o.Design.Parts.Select(p => $"{p.Label} {Quantity.Format(p.Used, p.Unit, 3)}"));
             var f = o.Receiver;
-            w.Row([(o.Design.Name, null), (parts, null), (Pct(f?.OvershootPct), null), (Pct(f?.UndershootPct), null), (T(f?.SettlingS), null),
+            string change = o.Design.Kind == TerminationKind.AsDrawn ? o.Design.Note ?? "none: the scenario unchanged" : o.Result is null ? "-" : o.Design.Note ?? "-";
+            w.Row([(o.Design.Name, null), (change, null), (parts, null), (Pct(f?.OvershootPct), null), (Pct(f?.UndershootPct), null), (T(f?.SettlingS), null),
                 (f is null ? "-" : f.ThresholdCrossings.ToString(CultureInfo.InvariantCulture), null), (T(f?.Delay50S), null),
                 (o.PowerAverageW is { } pw ? Quantity.Format(pw, "W", 3) : "-", null),
                 (o.Result is null ? "n/a: " + o.Design.Note : o.Verdict, o.Result is null ? null : Cls(o.MeetsLimits))]);

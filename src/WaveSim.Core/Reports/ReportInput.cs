@@ -14,8 +14,14 @@ namespace WaveSim.Core.Reports;
 public sealed record ReportInput(SimulationResult Result, string ScenarioText, IReadOnlyList<(ProbeTrace Probe, SignalFigures Figures)> Figures,
     IReadOnlyList<ProbeEye> Eyes, TerminationStudyResult? Terminations)
 {
+    /// <summary>The limits the receivers are judged against (the defaults of <c>terminations</c> unless given).</summary>
+    public VerdictLimits Limits { get; init; } = new();
+
     /// <summary>Computes the figures and eyes of <paramref name="result"/> with the given settling band.</summary>
     public static ReportInput For(SimulationResult result, string scenarioText, double settleBand = SignalQualityOptions.DefaultSettleBand,
         TerminationStudyResult? terminations = null) =>
-        new(result, scenarioText, RunSummary.Figures(result, settleBand), RunEyes.Compute(result), terminations);
+        new(result, scenarioText, RunSummary.Figures(result, settleBand), RunEyes.Compute(result), terminations)
+        {
+            Limits = terminations?.Options.Limits ?? new VerdictLimits { SettleBand = settleBand },
+        };
 }

@@ -45,6 +45,7 @@ internal sealed class LeapfrogSolver
         long steps = _plan.Steps;
         double[]? energy = options.TrackEnergy ? new double[steps + 1] : null;
         long progressEvery = Math.Max(1, steps / 200), checkEvery = Math.Max(1, Math.Min(4096, 1_000_000 / Math.Max(1, _plan.TotalCells)));
+        var averages = options.TrackBranchAverages ? new BranchAccumulator(_net, _jv, src.Value(0)) : null;
         var clock = Stopwatch.StartNew();
 
         // Step n → n+1 for n = 0..steps (one step beyond the end, so the last instant's current has its half step after it).
@@ -92,6 +93,7 @@ internal sealed class LeapfrogSolver
             }
             foreach (var seg in _net.Segments) { seg.V[0] = _jv[seg.Start]; seg.V[^1] = _jv[seg.End]; }
             sampler.AfterStep(n);
+            if (n < steps) averages?.Add(dt, src.Value(t + dt));
             if (n % checkEvery == 0)
             {
                 ct.ThrowIfCancellationRequested();
@@ -109,6 +111,7 @@ internal sealed class LeapfrogSolver
         {
             Scenario = _scenario, Plan = _plan, Time = sampler.Times, Probes = probes,
             Lines = profiles.Select(p => p.Profile).ToList(), Snapshots = snapshots, Elapsed = clock.Elapsed, Energy = energy,
+            BranchAverages = averages?.Averages(steps * dt),
         };
     }
 

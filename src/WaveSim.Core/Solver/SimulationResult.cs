@@ -47,6 +47,9 @@ public sealed record SimulationResult
     /// <summary>The grid's stored energy at each step (only when asked for), J.</summary>
     internal double[]? Energy { get; init; }
 
+    /// <summary>Time averages over the record of every lumped branch's current and voltage (only when asked for), in the network's branch order.</summary>
+    internal IReadOnlyList<BranchAverage>? BranchAverages { get; init; }
+
     /// <summary>The probe named <paramref name="name"/>.</summary>
     public ProbeTrace Probe(string name) => Probes.FirstOrDefault(p => p.Name == name)
         ?? throw new InputException($"no probe named '{name}'; probes: {string.Join(", ", Probes.Select(p => p.Name))}");
@@ -63,4 +66,17 @@ public sealed record SimulationOptions
     public bool Force { get; init; }
     /// <summary>Record the stored energy at every step (for tests of conservation).</summary>
     internal bool TrackEnergy { get; init; }
+    /// <summary>Average every lumped branch's current and voltage over the record (for the power in terminations).</summary>
+    internal bool TrackBranchAverages { get; init; }
 }
+
+/// <summary>
+/// One lumped branch's averages over the record [0, duration], from the solver's own values at every step (trapezoidal rule):
+/// enough for the mean power in its resistor, R·⟨i²⟩, and in resistors that return its A node to fixed voltages.
+/// </summary>
+/// <param name="Label">The branch's label in the network ("load R", "line[0] series", "line[3] shunt", ...).</param>
+/// <param name="R">Its resistance, ohm.</param>
+/// <param name="MeanSquareCurrent">⟨i²⟩, A².</param>
+/// <param name="MeanVoltageA">⟨v⟩ at its A node, V.</param>
+/// <param name="MeanSquareVoltageA">⟨v²⟩ at its A node, V².</param>
+internal sealed record BranchAverage(string Label, double R, double MeanSquareCurrent, double MeanVoltageA, double MeanSquareVoltageA);

@@ -6,11 +6,14 @@ namespace WaveSim.Core.Terminations;
 /// <param name="Kind">The strategy.</param>
 /// <param name="Parts">Its parts (none for <see cref="TerminationKind.None"/>).</param>
 /// <param name="Variant">The modified copy of the scenario to simulate; null when the strategy does not apply.</param>
-/// <param name="Note">Why the strategy does not apply, or a remark on it; null otherwise.</param>
+/// <param name="Note">Why the strategy does not apply, or what it changes in the net as drawn (adds, replaces, removes); null when nothing.</param>
 public sealed record TerminationDesign(TerminationKind Kind, IReadOnlyList<TerminationPart> Parts, Scenario? Variant, string? Note)
 {
-    /// <summary>The strategy's name as written in outputs: none, series, parallel, thevenin, rc.</summary>
-    public string Name => Kind.ToString().ToLowerInvariant();
+    /// <summary>The strategy's name as written in outputs: as drawn, none, series, parallel, thevenin, rc.</summary>
+    public string Name => Kind == TerminationKind.AsDrawn ? AsDrawnName : Kind.ToString().ToLowerInvariant();
+
+    /// <summary>The name of the first row, the net exactly as the scenario draws it.</summary>
+    public const string AsDrawnName = "as drawn";
 
     /// <summary>For Thevenin: the supply the upper resistor returns to, V.</summary>
     public double SupplyV { get; init; }

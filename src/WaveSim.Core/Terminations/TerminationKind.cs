@@ -3,7 +3,9 @@ namespace WaveSim.Core.Terminations;
 /// <summary>The termination strategies compared by <see cref="TerminationStudy"/>.</summary>
 public enum TerminationKind
 {
-    /// <summary>The net as given.</summary>
+    /// <summary>The net as drawn in the scenario, with the user's own termination (if any): always the first row.</summary>
+    AsDrawn,
+    /// <summary>The net with the load resistor of the scenario removed (its C, L and receiver kept); does not apply when there is none.</summary>
     None,
     /// <summary>A resistor in series at the driver, Z0 − R_driver.</summary>
     Series,

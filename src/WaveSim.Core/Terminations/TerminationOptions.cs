@@ -6,10 +6,10 @@ namespace WaveSim.Core.Terminations;
 public sealed record TerminationOptions
 {
     /// <summary>Default overshoot limit at the receiver, % of the swing: 10.</summary>
-    public const double DefaultMaxOvershootPct = 10;
+    public const double DefaultMaxOvershootPct = VerdictLimits.DefaultMaxOvershootPct;
 
     /// <summary>Default settling-time limit at the receiver: 5 ns.</summary>
-    public const double DefaultMaxSettlingS = 5e-9;
+    public const double DefaultMaxSettlingS = VerdictLimits.DefaultMaxSettlingS;
 
     /// <summary>Resistor series the simulated values are rounded to (default E96). Both roundings are reported.</summary>
     public PreferredSeries Series { get; init; } = PreferredSeries.E96;
@@ -28,6 +28,9 @@ public sealed record TerminationOptions
 
     /// <summary>Settling band as a fraction of the swing (default 0.05).</summary>
     public double SettleBand { get; init; } = SignalQualityOptions.DefaultSettleBand;
+
+    /// <summary>The limits every receiver's edges are judged against (<see cref="ReceiverVerdict"/>).</summary>
+    public VerdictLimits Limits => new() { MaxOvershootPct = MaxOvershootPct, MaxSettlingS = MaxSettlingS, SettleBand = SettleBand };
 
     /// <summary>Run the strategies one after another (default false: in parallel).</summary>
     public bool Serial { get; init; }

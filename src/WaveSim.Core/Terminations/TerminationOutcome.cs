@@ -9,23 +9,36 @@ namespace WaveSim.Core.Terminations;
 /// <param name="Result">The run; null when the strategy does not apply.</param>
 /// <param name="Figures">Signal figures of every probe (empty when not run).</param>
 /// <param name="Receiver">The receiver probe's figures, or null.</param>
-/// <param name="PowerLowW">Static power in the termination with the driver low, W.</param>
-/// <param name="PowerHighW">Static power in the termination with the driver high, W.</param>
-/// <param name="Failures">The limits missed, as short texts; empty when all are met.</param>
+/// <param name="PowerLowW">Static power in the termination with the driver held low (DC solution), W.</param>
+/// <param name="PowerHighW">Static power in the termination with the driver held high (DC solution), W.</param>
+/// <param name="Verdicts">The verdict of every judged receiver (<see cref="RunVerdicts"/>), in probe order; empty when not run.</param>
 public sealed record TerminationOutcome(TerminationDesign Design, SimulationResult? Result, IReadOnlyList<SignalFigures> Figures,
-    SignalFigures? Receiver, double? PowerLowW, double? PowerHighW, IReadOnlyList<string> Failures)
+    SignalFigures? Receiver, double? PowerLowW, double? PowerHighW, IReadOnlyList<ProbeVerdict> Verdicts)
 {
     /// <summary>The receiver's eye when the source is a bit pattern (then the verdict is judged on it), else null.</summary>
     public ProbeEye? ReceiverEye { get; init; }
 
-    /// <summary>Average static power for a 50 % duty cycle, W.</summary>
-    public double? PowerAverageW => PowerLowW is { } lo && PowerHighW is { } hi ? 0.5 * (lo + hi) : null;
+    /// <summary>Mean power over the record in the termination's resistors, from the simulated v·i (<see cref="TerminationPower.Average"/>), W.</summary>
+    public double? PowerAverageW { get; init; }
 
-    /// <summary>True when the strategy applies and meets every limit.</summary>
-    public bool MeetsLimits => Result is not null && Failures.Count == 0;
+    /// <summary>Every rule missed, at every judged receiver, in probe order.</summary>
+    public IReadOnlyList<VerdictFailure> Failures => Verdicts.SelectMany(v => v.Failures).ToArray();
 
-    /// <summary>"ok", "n/a" or the limits missed.</summary>
-    public string Verdict => Result is null ? "n/a" : Failures.Count == 0 ? "ok" : string.Join("; ", Failures);
+    /// <summary>True when the strategy applies and every judged receiver passes every rule.</summary>
+    public bool MeetsLimits => Result is not null && Verdicts.Any(v => v.Judged) && Failures.Count == 0;
+
+    /// <summary>"ok", "n/a", "not judged" or the rules missed (probe, edge, what was measured); receivers that could not be judged are named.</summary>
+    public string Verdict
+    {
+        get
+        {
+            if (Result is null) return "n/a";
+            var skipped = Verdicts.Where(v => v.Note is not null).Select(v => $"{v.Probe}: {v.Note}").ToArray();
+            string verdict = !Verdicts.Any(v => v.Judged) ? "not judged"
+                : Failures.Count == 0 ? "ok" : string.Join(" | ", Verdicts.Where(v => v.Judged && v.Failures.Count > 0).Select(v => v.Summary()));
+            return skipped.Length == 0 ? verdict : verdict + " (" + string.Join("; ", skipped) + ")";
+        }
+    }
 }
 
 /// <summary>Every strategy's outcome on one net.</summary>

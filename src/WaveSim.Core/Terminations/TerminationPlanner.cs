@@ -8,7 +8,9 @@ namespace WaveSim.Core.Terminations;
 /// Sizes each termination strategy for the user's net and makes the modified copy of the scenario that carries it.
 /// The rules are common practice (no source): series R = Z0 − R_driver at the driver; parallel R = Z0 to 0 V at the load;
 /// Thevenin R1 = Z0·Vcc/Vt to the supply and R2 = Z0·Vcc/(Vcc − Vt) to ground (R1 ∥ R2 = Z0, open-circuit level Vt);
-/// RC: R = Z0 in series with C, R·C at least three round trips of the line. Z0 is the first segment's.
+/// RC: R = Z0 in series with C, R·C at least three round trips of the line. Z0 is the first segment's. The first design is
+/// always the net as drawn; each other one says what it changes in it (adds, replaces or removes), so no strategy silently
+/// stands in for the user's own termination.
 /// </summary>
 public static class TerminationPlanner
 {
@@ -22,13 +24,20 @@ public static class TerminationPlanner
         var seg = s.Line.OfType<Segment>().First();
         double z0 = seg.Z0;
         var plain = s with { SourceText = null };
-        return [None(plain), Series(plain, z0, options), Parallel(plain, z0, options), Thevenin(plain, z0, options), Rc(plain, z0, options)];
+        return [AsDrawn(plain), None(plain), Series(plain, z0, options), Parallel(plain, z0, options), Thevenin(plain, z0, options), Rc(plain, z0, options)];
     }
 
     /// <summary>The main line's one-way delay (sum of its segments), s.</summary>
     public static double LineDelay(Scenario s) => s.Line.OfType<Segment>().Sum(x => x.Delay);
 
-    static TerminationDesign None(Scenario s) => new(TerminationKind.None, [], s, null);
+    static TerminationDesign AsDrawn(Scenario s) => new(TerminationKind.AsDrawn, [], s, s.Load.R is not null ? "the load as drawn: " + s.Load.Describe() : null);
+
+    static TerminationDesign None(Scenario s)
+    {
+        if (s.Load.R is null) return new(TerminationKind.None, [], null, "the same as the net as drawn, which has no load resistor");
+        var load = s.Load with { R = null, To = 0 };
+        return new(TerminationKind.None, [], Titled(s with { Load = load }, "no termination"), $"removes the load resistor {LoadResistor(s)} as drawn");
+    }
 
     static TerminationDesign Series(Scenario s, double z0, TerminationOptions o)
     {
@@ -39,14 +48,14 @@ public static class TerminationPlanner
         var r = Resistor("series_r_ohm", "R series", z0 - rd, o.Series);
         var line = new List<LineElement> { new Model.Series(new LumpedParts(R: r.Used)) };
         line.AddRange(s.Line);
-        return new(TerminationKind.Series, [r], Titled(s with { Line = line }, "series " + Quantity.Format(r.Used, "Ω", 3)), null);
+        return new(TerminationKind.Series, [r], Titled(s with { Line = line }, "series " + Quantity.Format(r.Used, "Ω", 3)), Adds(s, "adds a series resistor at the driver"));
     }
 
     static TerminationDesign Parallel(Scenario s, double z0, TerminationOptions o)
     {
         var r = Resistor("parallel_r_ohm", "R to 0 V", z0, o.Series);
         var load = s.Load with { R = r.Used, To = 0 };
-        return new(TerminationKind.Parallel, [r], Titled(s with { Load = load }, "parallel " + Quantity.Format(r.Used, "Ω", 3)), Replaced(s));
+        return new(TerminationKind.Parallel, [r], Titled(s with { Load = load }, "parallel " + Quantity.Format(r.Used, "Ω", 3)), Replaced(s, "adds a resistor to 0 V at the load"));
     }
 
     static TerminationDesign Thevenin(Scenario s, double z0, TerminationOptions o)
@@ -65,7 +74,7 @@ public static class TerminationPlanner
         double req = r1.Used * r2.Used / (r1.Used + r2.Used), veq = vcc * r2.Used / (r1.Used + r2.Used);
         var load = s.Load with { R = req, To = veq };
         var variant = Titled(s with { Load = load }, $"Thevenin {Quantity.Format(r1.Used, "Ω", 3)} / {Quantity.Format(r2.Used, "Ω", 3)}");
-        return new(TerminationKind.Thevenin, [r1, r2], variant, Replaced(s)) { SupplyV = vcc, TheveninV = veq };
+        return new(TerminationKind.Thevenin, [r1, r2], variant, Replaced(s, "adds a resistor pair at the load")) { SupplyV = vcc, TheveninV = veq };
     }
 
     static TerminationDesign Rc(Scenario s, double z0, TerminationOptions o)
@@ -78,10 +87,15 @@ public static class TerminationPlanner
         var line = s.Line.ToList();
         line.Add(new Shunt(new LumpedParts(R: r.Used, C: c)));
         var variant = Titled(s with { Line = line }, $"RC {Quantity.Format(r.Used, "Ω", 3)} + {Quantity.Format(c, "F", 3)}");
-        return new(TerminationKind.Rc, [r, cap], variant, null);
+        return new(TerminationKind.Rc, [r, cap], variant, Adds(s, "adds R and C in series to ground at the end of the line"));
     }
 
-    static string? Replaced(Scenario s) => s.Load.R is { } r ? $"replaces the load resistor {Quantity.Format(r, "Ω", 3)} of the scenario" : null;
+    static string Replaced(Scenario s, string otherwise) => s.Load.R is not null ? $"replaces the load resistor {LoadResistor(s)} as drawn" : otherwise;
+
+    static string Adds(Scenario s, string what) => s.Load.R is not null ? $"{what}; keeps the load resistor {LoadResistor(s)} as drawn" : what;
+
+    static string LoadResistor(Scenario s) =>
+        Quantity.Format(s.Load.R ?? 0, "Ω", 3) + (s.Load.To != 0 ? " to " + Quantity.Format(s.Load.To, "V", 3) : " to 0 V");
 
     static Scenario Titled(Scenario s, string what) => s with { Title = $"{s.Title} ({what})" };
 

@@ -1,4 +1,5 @@
 using System.Text.Json.Nodes;
+using WaveSim.Core.Analysis;
 
 namespace WaveSim.Core.Terminations;
 
@@ -18,6 +19,7 @@ public static class TerminationReport
                 ["strategy"] = o.Design.Name,
                 ["applies"] = o.Result is not null,
                 ["note"] = o.Design.Note,
+                ["change"] = o.Design.Kind == TerminationKind.AsDrawn ? null : o.Design.Note,
                 ["parts"] = new JsonArray(o.Design.Parts.Select(p => (JsonNode)new JsonObject
                 {
                     ["name"] = p.Column, ["label"] = p.Label, ["computed"] = p.Ideal, ["e24"] = p.E24, ["e96"] = p.E96, ["simulated"] = p.Used,
@@ -31,6 +33,7 @@ public static class TerminationReport
                 ["power_avg_W"] = o.PowerAverageW,
                 ["meets_limits"] = o.MeetsLimits,
                 ["verdict"] = o.Verdict,
+                ["receivers"] = new JsonArray(o.Verdicts.Where(v => v.Judged).Select(v => (JsonNode)VerdictJson(v)).ToArray()),
             });
         }
         return new JsonObject
@@ -41,8 +44,32 @@ public static class TerminationReport
             ["resistor_series"] = r.Options.Series.ToString(),
             ["max_overshoot_pct"] = r.Options.MaxOvershootPct,
             ["max_settling_s"] = r.Options.MaxSettlingS,
+            ["settle_band"] = r.Options.SettleBand,
             ["folder"] = folder,
             ["strategies"] = strategies,
         };
     }
+
+    /// <summary>One receiver's verdict: its levels, margins, edges judged and the rules missed.</summary>
+    public static JsonObject VerdictJson(ProbeVerdict v) => new()
+    {
+        ["probe"] = v.Probe,
+        ["pass"] = v.Pass,
+        ["thresholds"] = v.Thresholds is { } t ? new JsonObject { ["vih_V"] = t.Vih, ["vil_V"] = t.Vil } : null,
+        ["mid_level_V"] = v.Thresholds is null ? v.MidV : null,
+        ["settled_low_V"] = v.LowV,
+        ["settled_high_V"] = v.HighV,
+        ["margin_low_V"] = v.MarginLowV,
+        ["margin_high_V"] = v.MarginHighV,
+        ["edges_judged"] = v.Edges.Count,
+        ["failures"] = new JsonArray(v.Failures.Select(f => (JsonNode)new JsonObject
+        {
+            ["rule"] = f.Rule.ToString().ToLowerInvariant(),
+            ["edge"] = f.Edge,
+            ["rising"] = f.Rising,
+            ["source_edge_s"] = f.AtS,
+            ["later_edges"] = f.MoreEdges,
+            ["detail"] = f.Detail,
+        }).ToArray()),
+    };
 }

@@ -9,8 +9,9 @@ namespace WaveSim.Core.Terminations;
 
 /// <summary>
 /// Compares the termination strategies on a net: sizes each (<see cref="TerminationPlanner"/>), runs every variant through
-/// <see cref="Simulate.Run"/> (in parallel), measures the receiver and the static power, and checks the limits: overshoot and
-/// settling of the first edge, or for a bit-pattern source the receiver's eye (open beyond the thresholds when given).
+/// <see cref="Simulate.Run"/> (in parallel), measures the receiver, the static power and the mean simulated power, and judges
+/// every receiver on every edge by <see cref="RunVerdicts"/> (the same rules as the report): probes at a load with receiver
+/// thresholds, or the chosen receiver probe at the mid level when no load has thresholds.
 /// </summary>
 public static class TerminationStudy
 {
@@ -26,7 +27,7 @@ public static class TerminationStudy
         if (!(options.SettleBand > 0 && options.SettleBand < 0.5)) throw new InputException($"settle band {options.SettleBand} must lie between 0 and 0.5");
         var (s, receiver) = WithReceiverProbe(scenario);
         var designs = TerminationPlanner.Design(s, options);
-        var sim = new SimulationOptions { Force = options.Force };
+        var sim = new SimulationOptions { Force = options.Force, TrackBranchAverages = true };
         if (!options.Force)
             foreach (var d in designs.Where(d => d.Variant is not null)) Simulate.CheckLimits(Simulate.Plan(d.Variant!));
         var outcomes = new TerminationOutcome[designs.Count];
@@ -59,32 +60,16 @@ public static class TerminationStudy
         var result = Simulate.Run(d.Variant, sim, ct);
         var figures = RunSummary.Figures(result, o.SettleBand).Select(f => f.Figures).ToArray();
         var rx = figures[receiver];
-        var src = d.Variant.Source;
-        var (lo, hi) = (TerminationPower.At(d, src.Low), TerminationPower.At(d, src.High));
-        if (RunEyes.Applies(d.Variant))
+        var (low, high) = RunVerdicts.SourceLevels(d.Variant.Source);
+        var (lo, hi) = (TerminationPower.At(d, low), TerminationPower.At(d, high));
+        var eyes = RunEyes.Applies(d.Variant) ? RunEyes.Compute(result) : null;
+        // Every receiver is judged; when no load has thresholds, the chosen receiver probe is judged at the mid level.
+        bool anyThresholds = d.Variant.Probes.Any(p => p.Anchor == ProbeAnchor.Load && RunSummary.LoadOf(d.Variant, p.BranchPath).Receiver is not null);
+        var verdicts = RunVerdicts.Judge(result, o.Limits, eyes, anyThresholds ? null : receiver);
+        return new TerminationOutcome(d, result, figures, rx, lo, hi, verdicts)
         {
-            // A bit stream never settles: judge the receiver's eye instead of the first edge.
-            var eye = RunEyes.Compute(result)[receiver];
-            return new TerminationOutcome(d, result, figures, rx, lo, hi, EyeFailures(eye)) { ReceiverEye = eye };
-        }
-        var failures = new List<string>();
-        if (rx.OvershootPct is { } os && os > o.MaxOvershootPct)
-            failures.Add($"overshoot {os:F1} % > {o.MaxOvershootPct:G3} %");
-        if (rx.SettlingS is not { } st) failures.Add("does not settle in the record");
-        else if (st > o.MaxSettlingS) failures.Add($"settling {Quantity.Format(st, "s", 3)} > {Quantity.Format(o.MaxSettlingS, "s", 3)}");
-        return new TerminationOutcome(d, result, figures, rx, lo, hi, failures);
-    }
-
-    /// <summary>With thresholds, the eye must open beyond both (height and width against them above 0); without, at the mid level.</summary>
-    static IReadOnlyList<string> EyeFailures(ProbeEye eye)
-    {
-        if (eye.Diagram is not { } diagram) return ["no eye: " + eye.Note];
-        var f = diagram.Figures;
-        var failures = new List<string>();
-        double? height = f.HasThresholds ? f.EyeHeightThresholdsV : f.EyeHeightV, width = f.HasThresholds ? f.EyeWidthThresholdsS : f.EyeWidthS;
-        string against = f.HasThresholds ? " against the thresholds" : "";
-        if (!(height > 0)) failures.Add($"eye closed{against} (height {(height is { } h ? Quantity.Format(h, "V", 3) : "-")})");
-        else if (!(width > 0)) failures.Add($"eye closed{against} (no width)");
-        return failures;
+            ReceiverEye = eyes?[receiver],
+            PowerAverageW = TerminationPower.Average(d, result),
+        };
     }
 }

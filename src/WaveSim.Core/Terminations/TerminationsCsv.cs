@@ -7,8 +7,9 @@ namespace WaveSim.Core.Terminations;
 /// <summary>
 /// Writes terminations.csv: one row per strategy; <c>strategy</c>, the simulated part values in SI (series_r_ohm,
 /// parallel_r_ohm, thevenin_r1_ohm, thevenin_r2_ohm, rc_r_ohm, rc_c_F; empty for other strategies), <c>&lt;probe&gt;.&lt;figure&gt;</c>
-/// for every probe and figure, then power_high_W, power_low_W, power_avg_W. Invariant culture, round-trip doubles;
-/// a strategy that does not apply has only its name.
+/// for every probe and figure, then power_high_W and power_low_W (static, DC), power_avg_W (the simulated mean over the record),
+/// <c>change</c> (what the strategy changes in the net as drawn) and <c>verdict</c>. Invariant culture, round-trip doubles;
+/// a strategy that does not apply has only its name, its change (why it does not apply) and "n/a".
 /// </summary>
 public static class TerminationsCsv
 {
@@ -20,7 +21,7 @@ public static class TerminationsCsv
     public static IReadOnlyList<string> Columns(TerminationStudyResult r) =>
         new[] { "strategy" }.Concat(PartColumns)
             .Concat(r.Probes.SelectMany(p => SignalFigures.FigureNames.Select(f => p + "." + f)))
-            .Concat(["power_high_W", "power_low_W", "power_avg_W"]).ToArray();
+            .Concat(["power_high_W", "power_low_W", "power_avg_W", "change", "verdict"]).ToArray();
 
     /// <summary>Writes the CSV to <paramref name="writer"/>.</summary>
     public static void Write(TerminationStudyResult r, TextWriter writer)
@@ -39,6 +40,8 @@ public static class TerminationsCsv
             csv.WriteField(Cell(o.PowerHighW));
             csv.WriteField(Cell(o.PowerLowW));
             csv.WriteField(Cell(o.PowerAverageW));
+            csv.WriteField(o.Design.Kind == TerminationKind.AsDrawn && o.Result is not null ? "" : o.Design.Note ?? "");
+            csv.WriteField(o.Verdict);
             csv.NextRecord();
         }
     }

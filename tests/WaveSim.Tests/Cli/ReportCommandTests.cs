@@ -29,7 +29,7 @@ public class ReportCommandTests
             Assert.Equal(1, json.GetProperty("not_judged").GetInt32());
             var doc = HtmlReportTests.Parse(File.ReadAllText(Path.Combine(outDir, "report.html")));
             var table = doc.Descendants("table").Single(t => (string?)t.Attribute("id") == "terminations");
-            Assert.Equal(5, table.Elements("tr").Count(tr => tr.Elements("td").Any()));   // none, series, parallel, Thevenin, RC
+            Assert.Equal(6, table.Elements("tr").Count(tr => tr.Elements("td").Any()));   // as drawn, none, series, parallel, Thevenin, RC
             Assert.Contains(doc.Descendants("img"), i => (string?)i.Attribute("id") == "terminations-overlay");
         }
         finally { Directory.Delete(dir, recursive: true); }

@@ -58,8 +58,10 @@ simulation: { duration: 200 ns, resolution: 10 }
         Assert.Equal("rx", study.ReceiverProbe);
         Assert.Equal(50, study.Z0, 1e-9);
 
-        // B1: the unterminated line overshoots to 1.66667 V (66.7 %).
-        Assert.Equal(66.667, Get(TerminationKind.None).Receiver!.OvershootPct!.Value, 0.1);
+        // B1: the unterminated line (the net as drawn) overshoots to 1.66667 V (66.7 %).
+        Assert.Equal(TerminationKind.AsDrawn, study.Outcomes[0].Design.Kind);
+        Assert.Equal(66.667, Get(TerminationKind.AsDrawn).Receiver!.OvershootPct!.Value, 0.1);
+        Assert.Null(Get(TerminationKind.None).Result);   // no load resistor to remove: the same net as drawn
         Assert.True(Get(TerminationKind.Series).Receiver!.OvershootPct < 5);
         Assert.True(Get(TerminationKind.Parallel).Receiver!.OvershootPct < 5);
 
@@ -69,7 +71,10 @@ simulation: { duration: 200 ns, resolution: 10 }
         double rp = par.Design.Parts[0].Used, v = 1 * rp / (rp + 10);
         Assert.Equal(v * v / rp, par.PowerHighW!.Value, 1e-12);
         Assert.Equal(0, par.PowerLowW!.Value, 1e-15);
-        Assert.Equal(0.5 * v * v / rp, par.PowerAverageW!.Value, 1e-12);
+        // The mean over the 200 ns record (Joule's law on the lattice diagram): no current until the edge's midpoint reaches the
+        // load at 1 ns + 0.125 ns + TD = 6.125 ns, then V²/R (the launch 50/60 V meets ΓL = (49.9 − 50)/99.9 ≈ −0.001 and lands on
+        // the DC level within 0.1 %).
+        Assert.Equal(v * v / rp * (200e-9 - 6.125e-9) / 200e-9, par.PowerAverageW!.Value, v * v / rp * 0.005);
 
         // Series resistor into an open end: no DC current, no static power.
         Assert.Equal(0, Get(TerminationKind.Series).PowerHighW!.Value, 1e-15);
@@ -87,7 +92,7 @@ simulation: { duration: 200 ns, resolution: 10 }
         var rc = Get(TerminationKind.Rc);
         Assert.True(rc.Design.Parts[0].Used * rc.Design.Parts[1].Used >= 3 * 2 * 5e-9 * (1 - 1e-12));
         Assert.Equal(0, rc.PowerHighW!.Value, 1e-15);
-        Assert.True(Get(TerminationKind.None).Failures.Count > 0);
+        Assert.True(Get(TerminationKind.AsDrawn).Failures.Count > 0);
     }
 
     [Fact]
@@ -100,7 +105,32 @@ simulation: { duration: 200 ns, resolution: 10 }
         var wa = new StringWriter(); TerminationsCsv.Write(a, wa);
         var wb = new StringWriter(); TerminationsCsv.Write(b, wb);
         Assert.Equal(wa.ToString(), wb.ToString());
-        Assert.Equal(6, wa.ToString().TrimEnd().Split('\n').Length);
+        Assert.Equal(7, wa.ToString().TrimEnd().Split('\n').Length);
+    }
+
+    [Fact]
+    public void The_table_starts_with_the_net_as_drawn_and_says_which_strategies_replace_its_termination()
+    {
+        // No outside source: what each strategy does to the user's own termination (50 ohm to VTT 1.65 V) must be printed.
+        using var cli = new CliRunner();
+        string file = cli.Write("vtt.yaml", VerdictTests.VttBus);
+        var (code, stdout, err) = CliRunner.Run("terminations", file, "--out", Path.Combine(cli.Dir, "out"));
+        Assert.True(code == 0, err);
+        var rows = stdout.Split('\n').Select(l => l.TrimEnd()).ToList();
+        int header = rows.FindIndex(l => l.TrimStart().StartsWith("strategy"));
+        Assert.StartsWith("  as drawn ", rows[header + 1]);
+        Assert.Contains("(the load as drawn: R 50 Ω to 1.65 V", rows[header + 2]);
+        foreach (string kind in new[] { "parallel", "thevenin" })
+        {
+            int i = rows.FindIndex(l => l.StartsWith("  " + kind + " ") && l.Contains(" mW "));
+            Assert.Equal("(replaces the load resistor 50 Ω to 1.65 V as drawn)", rows[i + 1].Trim());
+        }
+        int s = rows.FindIndex(l => l.StartsWith("  series ") && l.Contains(" mW "));
+        Assert.Contains("keeps the load resistor 50 Ω to 1.65 V as drawn", rows[s + 1]);
+        var csv = File.ReadAllLines(Path.Combine(cli.Dir, "out", "terminations.csv"));
+        Assert.StartsWith("as drawn,", csv[1]);
+        Assert.Contains("replaces the load resistor 50 Ω to 1.65 V as drawn", csv.Single(l => l.StartsWith("parallel,")));
+        Assert.Contains("removes the load resistor 50 Ω to 1.65 V as drawn", csv.Single(l => l.StartsWith("none,")));
     }
 
     [Fact]
@@ -113,10 +143,11 @@ simulation: { duration: 200 ns, resolution: 10 }
         Assert.True(code == 0, err);
         Assert.Contains("series", stdout);
         var csv = File.ReadAllLines(Path.Combine(outDir, "terminations.csv"));
-        Assert.Equal(6, csv.Length);
+        Assert.Equal(7, csv.Length);
         Assert.StartsWith("strategy,series_r_ohm,parallel_r_ohm,thevenin_r1_ohm,thevenin_r2_ohm,rc_r_ohm,rc_c_F,", csv[0]);
-        Assert.EndsWith("power_high_W,power_low_W,power_avg_W", csv[0]);
-        Assert.StartsWith("series,39,", csv[2]); // E24 nearest 40 ohm (IEC 60063)
+        Assert.EndsWith("power_high_W,power_low_W,power_avg_W,change,verdict", csv[0]);
+        Assert.StartsWith("as drawn,", csv[1]);
+        Assert.StartsWith("series,39,", csv[3]); // E24 nearest 40 ohm (IEC 60063)
         Assert.True(new FileInfo(Path.Combine(outDir, "terminations.png")).Length > 1000);
         var (badCode, _, badErr) = CliRunner.Run("terminations", file, "--series", "E12");
         Assert.Equal(2, badCode);
