@@ -55,7 +55,7 @@ simulation: { duration: 12 ns, resolution: 12 }
     [Fact]
     public void Without_loss_keys_segments_keep_their_constant_R_and_G()
     {
-        // R_dc = ρ/(w·t) with annealed copper 1.7241e-8 ohm·m (IACS; CHECKS.md section 4); G = ωC·tan δ_eff at 0.35/t_r
+        // R_dc = ρ/(w·t) with annealed copper 1.7241e-8 ohm·m (IACS; ReferenceData/published-checks.md §4); G = ωC·tan δ_eff at 0.35/t_r
         // (the geometry segment's documented constant-loss rule).
         var s = TestScenarios.Parse(Yaml);
         var segs = s.Line.OfType<Segment>().ToArray();
