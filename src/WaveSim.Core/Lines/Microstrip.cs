@@ -7,9 +7,9 @@ namespace WaveSim.Core.Lines;
 /// <remarks>
 /// Impedance and effective permittivity: Hammerstad and Jensen, "Accurate models for microstrip computer-aided
 /// design", IEEE MTT-S Int. Microwave Symp. Digest 1980, pp. 407-409, including their finite-thickness correction
-/// (as written in the project's CHECKS.md section 1). Stated accuracy: Z01 0.01 % for u = w/h &lt;= 1, 0.03 % for
+/// (as restated in tests/WaveSim.Tests/ReferenceData/published-checks.md §1). Stated accuracy: Z01 0.01 % for u = w/h &lt;= 1, 0.03 % for
 /// u &lt;= 1000; eps_eff 0.2 % for er &lt;= 128 and 0.01 &lt;= u &lt;= 100. Quasi-static: no frequency dispersion.
-/// Conductor loss: Rs/w, the current crowded on the strip's lower face (CHECKS.md section 4: real microstrip lies
+/// Conductor loss: Rs/w, the current crowded on the strip's lower face (tests/WaveSim.Tests/ReferenceData/published-checks.md §4: real microstrip lies
 /// between Rs/w and 2Rs/w, common practice). Dielectric loss uses the filling factor of the substrate:
 /// tan d_eff = tan d * er (ee - 1) / (ee (er - 1)) (Pozar, Microwave Engineering, 4th ed., Sec. 3.8, from memory).
 /// </remarks>

@@ -3,7 +3,7 @@ namespace WaveSim.Core.Lines;
 /// <summary>Two parallel round wires of diameter d, centre-to-centre spacing s, in a uniform dielectric er.</summary>
 /// <remarks>
 /// Pozar, Microwave Engineering, 4th ed., Table 2.1, two-wire line (exact TEM for round wires; from memory):
-/// Z0 = eta0/(pi sqrt(er)) acosh(s/d). Conductor loss per wire Rs/(pi d) (CHECKS.md section 4, for d much larger
+/// Z0 = eta0/(pi sqrt(er)) acosh(s/d). Conductor loss per wire Rs/(pi d) (Pozar; tests/WaveSim.Tests/ReferenceData/published-checks.md §4, for d much larger
 /// than the skin depth), two wires in the loop; the proximity effect, which crowds the current towards the other
 /// wire, is neglected and warned when s/d &lt; 3 (common practice, no source).
 /// </remarks>

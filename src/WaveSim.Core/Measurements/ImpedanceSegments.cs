@@ -6,7 +6,7 @@ public static class ImpedanceSegments
     /// <summary>
     /// Joins consecutive layers whose impedance stays within <paramref name="toleranceOhm"/> of the running mean of
     /// the segment being built; a layer outside it starts a new segment. Layer k spans distances
-    /// [k, k+1]·v·Δt/2 (distance = v·t_roundtrip/2, CHECKS.md section 11).
+    /// [k, k+1]·v·Δt/2 (distance = v·t_roundtrip/2; tests/WaveSim.Tests/ReferenceData/published-checks.md §11).
     /// </summary>
     /// <remarks>A finite rise time leaves a few intermediate layers at each step; they come out as short segments
     /// of their own, which the caller may drop by length.</remarks>

@@ -5,7 +5,7 @@ namespace WaveSim.Core.Measurements;
 /// shunt capacitance or a series inductance from their area.
 /// </summary>
 /// <remarks>
-/// <para>Derivation (CHECKS.md section 11, "TDR relations"). A shunt C on a line matched at Z0 loads it with
+/// <para>Derivation (by Laplace transform, as in Bogatin's TDR chapter; tests/WaveSim.Tests/ReferenceData/published-checks.md §11, "TDR relations"). A shunt C on a line matched at Z0 loads it with
 /// Z0 ∥ 1/(sC) = Z0 / (1 + sCZ0), so Γ(s) = (Z - Z0)/(Z + Z0) = -sCZ0 / (2 + sCZ0) = -sτ/(1 + sτ), τ = Z0·C/2.
 /// The step response is ρ(t) = -exp(-t/τ), whose area ∫ρ dt = Γ(s)/s at s = 0 = -τ, so C = -2·A/Z0.
 /// A series L gives Z = Z0 + sL, Γ = sτ/(1 + sτ), τ = L/(2·Z0), area +τ, so L = 2·Z0·A.

@@ -7,7 +7,7 @@ namespace WaveSim.Core.Measurements;
 /// Convention: the instrument launches a step through a source matched to the reference impedance Z0. The incident
 /// step amplitude at the instrument port is v_inc (half the open-circuit source step). The port voltage is
 /// v(t) = v_inc + v_r(t), so the reflection is ρ(t) = (v(t) - v_inc) / v_inc, and the impedance at the matching
-/// round-trip time is Z = Z0 (1 + ρ) / (1 - ρ) (CHECKS.md section 11, "TDR relations": Z = Z0*(1+rho)/(1-rho)).
+/// round-trip time is Z = Z0 (1 + ρ) / (1 - ρ) (from Γ = (Z - Z0)/(Z + Z0), Pozar eq. 2.35; tests/WaveSim.Tests/ReferenceData/published-checks.md §11, "TDR relations").
 /// This ignores the transmission loss through earlier steps and the multiple reflections between them, so it is
 /// exact only up to the first discontinuity; <see cref="LayerPeeling"/> corrects for both.
 /// </remarks>

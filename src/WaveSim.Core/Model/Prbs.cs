@@ -1,8 +1,11 @@
 namespace WaveSim.Core.Model;
 
 /// <summary>Pseudo-random binary sequences from the ITU-T O.150 generator polynomials.</summary>
-/// <remarks>ITU-T Recommendation O.150 (05/96), section 5: PRBS7 x^7+x^6+1, PRBS9 x^9+x^5+1, PRBS15 x^15+x^14+1,
-/// PRBS23 x^23+x^18+1, PRBS31 x^31+x^28+1. A Fibonacci shift register seeded with all ones.</remarks>
+/// <remarks>ITU-T Recommendation O.150 (05/96), section 5: PRBS9 x^9+x^5+1, PRBS15 x^15+x^14+1, PRBS23 x^23+x^18+1,
+/// PRBS31 x^31+x^28+1; PRBS7 x^7+x^6+1 is the short serial-link test pattern, not an O.150 sequence (from memory).
+/// A Fibonacci shift register seeded with all ones; each bit is the feedback s_k = s_(k−n) ⊕ s_(k−t), not inverted
+/// (O.150 sends its 2^15−1, 2^23−1 and 2^31−1 sequences inverted, from memory). Sources and checks:
+/// tests/WaveSim.Tests/ReferenceData/prbs.md.</remarks>
 public static class Prbs
 {
     /// <summary>The orders supported, with the second tap of each polynomial.</summary>

@@ -107,7 +107,7 @@ public class SignalQualityTests
     [Fact]
     public void Series_terminated_near_end_staircase_counts_the_shelf_in_the_rise_time()
     {
-        // CHECKS.md B2 (common practice): with series termination the near end holds a 0.5*VS shelf for 2T.
+        // ReferenceData/published-checks.md §10, case B2 (common practice, no source; levels by the lattice-diagram method): with series termination the near end holds a 0.5*VS shelf for 2T.
         // Here T = 0.95 ns: 100 ps ramps at 1 ns (0 -> 0.5 V) and at 3 ns (0.5 -> 1 V).
         var (t, v) = PiecewiseLinear(1 * Ps, (0, 0), (1 * Ns, 0), (1.1 * Ns, 0.5), (3 * Ns, 0.5), (3.1 * Ns, 1.0), (10 * Ns, 1.0));
         var f = SignalQuality.Compute(t, v, new SignalQualityOptions { SourceEdgeTimeS = 0.55 * Ns });
@@ -125,7 +125,7 @@ public class SignalQualityTests
     [Fact]
     public void Lattice_diagram_ringing_gives_overshoot_crossings_and_settling()
     {
-        // CHECKS.md B1 (H, derived; standard lattice-diagram method; Gamma from Pozar eq. 2.35): 1 V step,
+        // ReferenceData/published-checks.md §10, case B1 (H, derived; standard lattice-diagram method; Gamma from Pozar eq. 2.35): 1 V step,
         // RS = 10 ohm, Z0 = 50 ohm, open end, TD = 5 ns. Load shelf k (from T + 2kT) = 1 + (2/3)(-2/3)^k:
         // 1.66667, 0.55556, 1.29630, 0.80247, ...; here every step is a 100 ps linear ramp.
         const double T = 5 * Ns, ramp = 100 * Ps;

@@ -23,7 +23,7 @@ public class ReportCommandTests
             Assert.Equal(["report.html"], Directory.GetFiles(outDir).Select(Path.GetFileName));
             var json = JsonDocument.Parse(stdout).RootElement;
             Assert.Equal(Path.Combine(outDir, "report.html"), json.GetProperty("report").GetString());
-            // CHECKS.md B1 with Vih 0.75 V / Vil 0.6 V: rx recrosses (fail); drv has no receiver (not judged).
+            // ReferenceData/published-checks.md §10, case B1 (lattice-diagram method, Γ from Pozar eq. 2.35) with Vih 0.75 V / Vil 0.6 V: rx recrosses (fail); drv has no receiver (not judged).
             Assert.Equal(0, json.GetProperty("pass").GetInt32());
             Assert.Equal(1, json.GetProperty("fail").GetInt32());
             Assert.Equal(1, json.GetProperty("not_judged").GetInt32());

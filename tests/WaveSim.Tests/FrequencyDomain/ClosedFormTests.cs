@@ -6,7 +6,7 @@ namespace WaveSim.Tests.FrequencyDomain;
 /// <summary>
 /// The frequency-domain solution against closed forms of uniform lines: Pozar, Microwave Engineering, 4th ed. 2012, eq. 2.35
 /// (Γ = (ZL − Z0)/(ZL + Z0)), eqs. 2.44-2.45 (shorted and open lossless lines) and the quarter-wave transformer of section 2.5
-/// (equation numbers from memory); the distortionless line of CHECKS.md section 7 (Pozar section 2.7).
+/// (equation numbers from memory); the distortionless line (Pozar section 2.7; ReferenceData/published-checks.md §7).
 /// </summary>
 public class ClosedFormTests
 {
@@ -79,7 +79,7 @@ simulation: {{ duration: 20 ns }}
     [InlineData(1e10)]
     public void Distortionless_line_attenuates_every_frequency_alike(double f)
     {
-        // CHECKS.md section 7 (Pozar Sec. 2.7): R/L = G/C gives α = R/Z0, β = ω√(LC), Zc = √(L/C) real and flat. L = 250 nH/m,
+        // ReferenceData/published-checks.md §7 (Pozar Sec. 2.7): R/L = G/C gives α = R/Z0, β = ω√(LC), Zc = √(L/C) real and flat. L = 250 nH/m,
         // C = 100 pF/m, R = 5 ohm/m, G = 2 mS/m, 10 m, both ends matched: |H| = 0.5·e^-1 = 0.18394 flat, phase −ωT with T = 50 ns.
         var s = TestScenarios.Parse(Net("50 ohm", "{ r: 50 ohm }", "{ length: 10 m, l: 250 nH/m, c: 100 pF/m, r: 5 ohm/m, g: 2 mS/m }"));
         var pt = FrequencyDomainSolver.At(s, f);

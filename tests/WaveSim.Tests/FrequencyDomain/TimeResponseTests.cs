@@ -9,7 +9,7 @@ public class TimeResponseTests
     [Fact]
     public void Bounce_diagram_of_an_open_line_behind_a_low_resistance_driver()
     {
-        // CHECKS.md section 10, case B1 (standard lattice-diagram method): 1 V step, RS = 10 ohm, Z0 = 50 ohm, open end,
+        // ReferenceData/published-checks.md §10, case B1 (standard lattice-diagram method, Γ from Pozar eq. 2.35): 1 V step, RS = 10 ohm, Z0 = 50 ohm, open end,
         // TD = 5 ns. The step is band-limited (100 ps rise); values read mid-plateau, within 1 %.
         var s = TestScenarios.Parse(@"
 source: { waveform: step, high: 1 V, rise: 100 ps, delay: 1 ns, resistance: 10 ohm }

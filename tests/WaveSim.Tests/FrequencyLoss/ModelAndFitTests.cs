@@ -14,7 +14,7 @@ public class ModelAndFitTests
     [Fact]
     public void Skin_corner_from_a_trace_reproduces_the_surface_resistance_and_equal_internal_reactance()
     {
-        // CHECKS.md section 4: trace w = 0.2 mm, t = 35 um, rho = 1.678e-8 ohm m (CRC Handbook): Rdc = 2.397 ohm/m,
+        // ReferenceData/published-checks.md §4 (Pozar; CRC Handbook): trace w = 0.2 mm, t = 35 um, rho = 1.678e-8 ohm m (CRC Handbook): Rdc = 2.397 ohm/m,
         // Rs/w = 12.87 (100 MHz), 40.7 (1 GHz), 128.7 (10 GHz) ohm/m, R(4f) = 2R(f). A good conductor's internal reactance equals
         // its internal resistance at high frequency (Pozar, Microwave Engineering, 4th ed. 2012, Sec. 1.7; Paul 2008).
         var p = CrossSection.Compute(new CrossSectionSpec("microstrip", new Dictionary<string, double>
@@ -42,7 +42,7 @@ public class ModelAndFitTests
     [Fact]
     public void Dielectric_ratio_follows_Djordjevic_Sarkar_in_the_Laplace_variable()
     {
-        // CHECKS.md section 5, case D2 (derived from Djordjevic, Biljic, Likar-Smiljanic, Sarkar, IEEE Trans. EMC 43(4), 2001;
+        // ReferenceData/published-checks.md §5, case D2 (derived from Djordjevic, Biljic, Likar-Smiljanic, Sarkar, IEEE Trans. EMC 43(4), 2001;
         // m1 = 4, m2 = 12): fit to 4.3, tan d 0.02 at 1 GHz gives eps' 4.4266, tan d 0.01950 at 100 MHz; 4.1735, 0.01986 at 10 GHz.
         var loss = new LossModel { Dielectric = DjordjevicSarkar.Fit(4.3, 0.02, 1e9), ReferencePermittivity = 4.3 };
         Complex e100M = 4.3 * loss.PermittivityRatio(J(100e6)), e10G = 4.3 * loss.PermittivityRatio(J(10e9));

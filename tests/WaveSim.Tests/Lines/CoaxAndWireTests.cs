@@ -2,7 +2,7 @@ using WaveSim.Core.Lines;
 
 namespace WaveSim.Tests.Lines;
 
-/// <summary>Coaxial line (CHECKS.md section 3) and parallel-wire checks.</summary>
+/// <summary>Coaxial line (Pozar Table 2.1, as restated in ReferenceData/published-checks.md §3) and parallel-wire checks.</summary>
 public class CoaxAndWireTests
 {
     const double Mm = 1e-3, Inch = 0.0254;

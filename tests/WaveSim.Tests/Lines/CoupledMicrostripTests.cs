@@ -4,7 +4,7 @@ namespace WaveSim.Tests.Lines;
 
 /// <summary>
 /// Edge-coupled microstrip checks of the Kirschning and Jansen 1984 model (IEEE Trans. MTT-32(1):83-90) against the
-/// single strip of Hammerstad and Jensen 1980 (CHECKS.md section 1) and against Garg and Bahl 1979, an independent
+/// single strip of Hammerstad and Jensen 1980 (ReferenceData/published-checks.md §1) and against Garg and Bahl 1979, an independent
 /// published closed form.
 /// </summary>
 public class CoupledMicrostripTests
@@ -61,7 +61,7 @@ public class CoupledMicrostripTests
     [InlineData(3.0, 2.2)]
     public void Far_apart_strips_tend_to_the_single_microstrip(double u, double er)
     {
-        // s -> infinity: both modes become the single strip of Hammerstad and Jensen 1980 (CHECKS.md section 1), in Microstrip.cs.
+        // s -> infinity: both modes become the single strip of Hammerstad and Jensen 1980 (ReferenceData/published-checks.md §1), in Microstrip.cs.
         var single = Microstrip.Analyse(u * Mm, Mm, 0, er);
         var m = CoupledMicrostrip.Analyse(u * Mm, 50 * Mm, Mm, er);
         Close.Rel(single.Z0, m.Even.Z0, 1e-3, "Z0e");
@@ -73,7 +73,7 @@ public class CoupledMicrostripTests
     [Fact]
     public void M6_single_strip_values_hold_far_apart()
     {
-        // M6 (regression, Hammerstad-Jensen, t = 0), CHECKS.md section 1: (er, u) = (10, 1) -> 48.82 ohm, ee 6.7053.
+        // M6 (regression, Hammerstad-Jensen 1980, t = 0), ReferenceData/published-checks.md §1: (er, u) = (10, 1) -> 48.82 ohm, ee 6.7053.
         var m = CoupledMicrostrip.Analyse(Mm, 60 * Mm, Mm, 10);
         Close.Check(48.82, m.Even.Z0, 1e-3, 2, "Z0e");
         Close.Check(48.82, m.Odd.Z0, 1e-3, 2, "Z0o");

@@ -37,7 +37,7 @@ public class CoupledPairTests
             Close.Rel(p.Zcomm, c.Z0, 1e-12); Close.Rel(p.Even.EpsEff, c.EpsEff, 1e-12);
             Close.Rel(p.Even.L / 2, c.L, 1e-12); Close.Rel(2 * p.Even.C, c.C, 1e-12);
             Close.Rel(p.Even.RDc / 2, c.RDc, 1e-12);
-            // One strip's DC resistance rho/(w t), annealed copper 1.7241e-8 ohm m (IACS; CHECKS.md section 4).
+            // One strip's DC resistance rho/(w t), annealed copper 1.7241e-8 ohm m (IACS; ReferenceData/published-checks.md §4).
             Close.Rel(1.7241e-8 / (spec.Dimensions["width"] * spec.Dimensions["thickness"]), p.Odd.RDc, 1e-12);
             // Compute on a pair kind is the differential line, so synthesis targets Zdiff.
             Assert.Equal(d.Z0, CrossSection.Compute(spec).Z0);
@@ -114,7 +114,7 @@ public class CoupledPairTests
         Assert.Equal(root.GetProperty("z0_even_ohm").GetDouble() / 2, root.GetProperty("z_comm_ohm").GetDouble(), 9);
         Assert.Equal(root.GetProperty("z_diff_ohm").GetDouble(), root.GetProperty("differential").GetProperty("z0_ohm").GetDouble(), 9);
         Assert.Equal(root.GetProperty("z_comm_ohm").GetDouble(), root.GetProperty("common").GetProperty("z0_ohm").GetDouble(), 9);
-        // Stripline: delay sqrt(er)/c in both modes (CHECKS.md section 12).
+        // Stripline: delay sqrt(er)/c in both modes (tpd = sqrt(ee)/c; ReferenceData/published-checks.md §12).
         Close.Rel(Math.Sqrt(2.2) / 299_792_458.0, root.GetProperty("differential").GetProperty("delay_s_per_m").GetDouble(), 1e-12);
         Close.Check(0.1, root.GetProperty("coupling").GetDouble(), 0, 2, "coupling");
     }

@@ -51,12 +51,12 @@ public class CoupledStriplineTests
     public void Far_apart_strips_tend_to_the_single_stripline(double wOverB)
     {
         // s -> infinity: ke, ko -> tanh(pi w/2b) = k' of the single strip, so both modes tend to Cohn's single-strip
-        // Z0 (Cohn, IRE Trans. MTT-2, 1954; CHECKS.md section 2), computed by Stripline.cs.
+        // Z0 (Cohn, IRE Trans. MTT-2, 1954; ReferenceData/published-checks.md §2), computed by Stripline.cs.
         double single = Stripline.ExactZeroThickness(wOverB * Mm, Mm, 1);
         var (ze, zo) = CoupledStripline.ExactZeroThickness(wOverB * Mm, 20 * Mm, Mm, 1);
         Close.Rel(single, ze, 1e-9, "Z0e");
         Close.Rel(single, zo, 1e-9, "Z0o");
-        // S2 (H, exact), CHECKS.md section 2: W/b -> Z0 at er = 1: 0.25 -> 139.92; 0.5 -> 100.43; 1.0 -> 65.354; 2.0 -> 38.579.
+        // S2 (H, exact; Cohn 1954), ReferenceData/published-checks.md §2: W/b -> Z0 at er = 1: 0.25 -> 139.92; 0.5 -> 100.43; 1.0 -> 65.354; 2.0 -> 38.579.
         double s2 = wOverB switch { 0.25 => 139.92, 0.5 => 100.43, 1.0 => 65.354, _ => 38.579 };
         Close.Rel(s2, ze, 1e-4, "S2");
     }
@@ -139,8 +139,8 @@ public class CoupledStriplineTests
     {
         // Cohn 1955's thick-strip formula (from memory), stated for w/b >= 0.35: at t = 0 it stays within 2.5 % of the
         // exact formula (the worst case, 2.2 %, is the odd mode at w/b = 0.35 with a narrow gap; within 1 % from w/b = 0.5),
-        // and at large s it becomes Pozar's single-strip 30 pi/(sqrt(er)(W/b + 0.441)) (Pozar Sec. 3.7; CHECKS.md
-        // section 2), whose 0.441 is Cohn's 2 ln 2/pi = 0.4413 rounded (hence 5e-4).
+        // and at large s it becomes Pozar's single-strip 30 pi/(sqrt(er)(W/b + 0.441)) (Pozar Sec. 3.7; ReferenceData/published-checks.md
+        // §2), whose 0.441 is Cohn's 2 ln 2/pi = 0.4413 rounded (hence 5e-4).
         var (ee, eo) = CoupledStripline.ExactZeroThickness(wOverB * Mm, sOverB * Mm, Mm, 1);
         var (te, to) = CoupledStripline.ThickStrip(wOverB * Mm, sOverB * Mm, Mm, 0, 1);
         double tol = wOverB >= 0.5 ? 0.01 : 0.025;
@@ -157,7 +157,7 @@ public class CoupledStriplineTests
     [InlineData(1.0, 0.1)]
     public void Thickness_lowers_both_modes_like_Wheelers_single_strip_correction(double wOverB, double tOverB)
     {
-        // Far apart, the thick-strip ratio is the single strip's thickness effect; Wheeler 1978 (CHECKS.md section 2,
+        // Far apart, the thick-strip ratio is the single strip's thickness effect; Wheeler 1978 (IEEE Trans. MTT-26(11); ReferenceData/published-checks.md §2,
         // in Stripline.cs) is an independent formula for it: agreement within 1 %.
         var far = CoupledStripline.Analyse(wOverB * Mm, 30 * Mm, Mm, tOverB * Mm, 1);
         Close.Rel(Stripline.Centred(wOverB * Mm, Mm, tOverB * Mm, 1), far.Even.Z0, 0.01, "even");

@@ -16,7 +16,7 @@ public class CrossSectionFacadeTests
         Assert.Equal(8 * 25.4e-6, spec.Dimensions["width"], 15);
         var p = CrossSection.Compute(spec);
         Assert.Equal(1e9, p.FrequencyHz);
-        // L = Z0 sqrt(ee)/c, C = sqrt(ee)/(c Z0) (CHECKS.md section 6, Pozar Ch. 2): L/C = Z0^2, LC = ee/c^2.
+        // L = Z0 sqrt(ee)/c, C = sqrt(ee)/(c Z0) (Pozar Ch. 2; ReferenceData/published-checks.md §6): L/C = Z0^2, LC = ee/c^2.
         Close.Rel(p.Z0 * p.Z0, p.L / p.C, 1e-12);
         Close.Rel(p.EpsEff / Math.Pow(LineConstants.SpeedOfLight, 2), p.L * p.C, 1e-12);
         Assert.True(p.RAc > p.RDc && p.G > 0);

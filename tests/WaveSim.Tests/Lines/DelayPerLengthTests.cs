@@ -2,7 +2,7 @@ using WaveSim.Core.Lines;
 
 namespace WaveSim.Tests.Lines;
 
-/// <summary>Delay per length, CHECKS.md section 12 (tpd = sqrt(ee)/c; tolerance 0.1 % on the formula).</summary>
+/// <summary>Delay per length, tpd = sqrt(ee)/c (Pozar Ch. 2; Hammerstad and Jensen 1980 for ee), as restated in ReferenceData/published-checks.md §12 (tolerance 0.1 % on the formula).</summary>
 public class DelayPerLengthTests
 {
     [Theory]

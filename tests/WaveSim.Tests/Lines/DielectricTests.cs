@@ -2,7 +2,7 @@ using WaveSim.Core.Lines;
 
 namespace WaveSim.Tests.Lines;
 
-/// <summary>Dielectric loss and the wideband dielectric model, CHECKS.md section 5.</summary>
+/// <summary>Dielectric loss (Pozar) and the wideband dielectric model (Djordjevic et al., IEEE Trans. EMC 43(4), 2001), as restated in ReferenceData/published-checks.md §5.</summary>
 public class DielectricTests
 {
     [Fact]

@@ -2,7 +2,7 @@ using WaveSim.Core.Lines;
 
 namespace WaveSim.Tests.Lines;
 
-/// <summary>Microstrip checks, CHECKS.md section 1.</summary>
+/// <summary>Microstrip checks against Pozar Sec. 3.8, Hammerstad and Jensen 1980, Wheeler 1977 and IPC-2141A, as restated in ReferenceData/published-checks.md §1.</summary>
 public class MicrostripTests
 {
     const double Mm = 1e-3;

@@ -2,7 +2,7 @@ using WaveSim.Core.Lines;
 
 namespace WaveSim.Tests.Lines;
 
-/// <summary>Skin depth and AC resistance of copper, CHECKS.md section 4.</summary>
+/// <summary>Skin depth and AC resistance of copper (Pozar; CRC Handbook resistivity), as restated in ReferenceData/published-checks.md §4.</summary>
 public class SkinEffectTests
 {
     const double Crc = 1.678e-8;     // Copper rho = 1.678e-8 ohm m (20 C, CRC Handbook)

@@ -2,7 +2,7 @@ using WaveSim.Core.Lines;
 
 namespace WaveSim.Tests.Lines;
 
-/// <summary>Stripline checks, CHECKS.md section 2 (b = ground-plane spacing).</summary>
+/// <summary>Stripline checks against Cohn 1954, Pozar Sec. 3.7, Wheeler 1978 and IPC-2141A, as restated in ReferenceData/published-checks.md §2 (b = ground-plane spacing).</summary>
 public class StriplineTests
 {
     const double Mm = 1e-3;
@@ -50,7 +50,7 @@ public class StriplineTests
     {
         // S1: Loss at 10 GHz (tan d 0.001, t 0.01 mm, copper): k = 310.6 /m (c = 3e8), alpha_d = 0.155 Np/m,
         // Rs = 0.026 ohm, A = 4.74, alpha_c = 0.122 Np/m; total 0.277 Np/m = 2.41 dB/m. Tol 0.5 %.
-        // Pozar uses sigma = 5.813e7 S/m (CHECKS.md section 4); his alpha_c uses Z0 = 50 ohm.
+        // Pozar uses sigma = 5.813e7 S/m (ReferenceData/published-checks.md §4); his alpha_c uses Z0 = 50 ohm.
         double rho = 1 / 5.813e7, f = 10e9, w = 2.66 * Mm, b = 3.2 * Mm, t = 0.01 * Mm;
         double rs = SkinEffect.SurfaceResistance(f, rho);
         Close.Check(0.026, rs, 5e-3, 3, "Rs");

@@ -5,8 +5,8 @@ namespace WaveSim.Tests.Measurements;
 
 /// <summary>
 /// Layer peeling against an independent forward model: the lattice (bounce) diagram of equal-delay layers
-/// (<see cref="BounceLattice"/>). Conversion Z = Z0*(1+rho)/(1-rho) and distance = v*t_roundtrip/2: CHECKS.md
-/// section 11, "TDR relations".
+/// (<see cref="BounceLattice"/>). Conversion Z = Z0*(1+rho)/(1-rho) and distance = v*t_roundtrip/2 (Pozar eq. 2.35 solved for Z): ReferenceData/published-checks.md
+/// §11, "TDR relations".
 /// </summary>
 public class LayerPeelingTests
 {

@@ -3,7 +3,7 @@ using WaveSim.Core.Measurements;
 namespace WaveSim.Tests.Measurements;
 
 /// <summary>
-/// Lumped elements from the area of a reflection excursion. Model and check values: CHECKS.md section 11,
+/// Lumped elements from the area of a reflection excursion. Model and check values (Laplace transform, as in Bogatin's TDR chapter): ReferenceData/published-checks.md §11,
 /// "TDR relations": shunt C on a matched line, rho(t) = -exp(-t/tau), tau = Z0*C/2, C = -2A/Z0; series L,
 /// rho(t) = +exp(-t/tau), tau = L/(2*Z0), L = 2*Z0*A; "the area does not depend on rise time"; case 1 pF in 50 ohm
 /// (A = -25 ps) and 1 nH (A = +10 ps).
@@ -51,7 +51,7 @@ public class LumpedDiscontinuityTests
         double c = 1e-12, tau = Z0 * c / 2;
         double[] rho = Trace(-1, tau, t0: 200e-12, rise: 200e-12, dt: 5e-12, n: 300);
 
-        Assert.InRange(rho.Min(), -0.126, -0.124);   // rho_min ~ -Z0*C/(2*tr) = -0.125 (CHECKS.md 11): the trace is right
+        Assert.InRange(rho.Min(), -0.126, -0.124);   // rho_min ~ -Z0*C/(2*tr) = -0.125 (ReferenceData/published-checks.md §11): the trace is right
         var d = Assert.Single(LumpedDiscontinuities.Find(rho, 5e-12, Z0, Velocity));
         Assert.Equal(LumpedKind.ShuntCapacitance, d.Kind);
         Assert.InRange(d.Value, 0.9e-12, 1.1e-12);
@@ -63,7 +63,7 @@ public class LumpedDiscontinuityTests
         double l = 1e-9, tau = l / (2 * Z0);   // 10 ps
         double[] rho = Trace(+1, tau, t0: 100e-12, rise: 200e-12, dt: 5e-12, n: 200);
 
-        Assert.InRange(rho.Max(), 0.049, 0.051);   // peak +L/(2*Z0*tr) = 0.05 (CHECKS.md 11)
+        Assert.InRange(rho.Max(), 0.049, 0.051);   // peak +L/(2*Z0*tr) = 0.05 (ReferenceData/published-checks.md §11)
         var d = Assert.Single(LumpedDiscontinuities.Find(rho, 5e-12, Z0, Velocity));
         Assert.Equal(LumpedKind.SeriesInductance, d.Kind);
         Assert.InRange(d.Value, 0.9e-9, 1.1e-9);
@@ -72,7 +72,7 @@ public class LumpedDiscontinuityTests
     [Fact]
     public void A_change_of_impedance_is_not_taken_for_a_lumped_element()
     {
-        // 50 -> 75 ohm step (rho 0 -> 0.2, CHECKS.md 11) with a 10-sample edge: it never returns to its old level.
+        // 50 -> 75 ohm step (rho 0 -> 0.2, Pozar eq. 2.35; ReferenceData/published-checks.md §11) with a 10-sample edge: it never returns to its old level.
         var rho = new double[200];
         for (int k = 0; k < rho.Length; k++)
             rho[k] = 0.2 * Math.Clamp((k - 50) / 10.0, 0, 1);

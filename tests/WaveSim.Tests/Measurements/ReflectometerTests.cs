@@ -33,7 +33,7 @@ simulation: { duration: 5 ns, resolution: 10 }
         for (int i = 0; i < truth.Length; i++)
             Assert.InRange(At(r, r.LayerOhms, 0.1 * i + 0.05), truth[i] - 1, truth[i] + 1);
 
-        // Naive Z0(1+ρ)/(1-ρ) (CHECKS.md section 11) on the first round trip through each section: ρ is the lattice sum
+        // Naive Z0(1+ρ)/(1-ρ) (ReferenceData/published-checks.md §11) on the first round trip through each section: ρ is the lattice sum
         // r1 + (1 - r1²)·r2 + ..., with Γ = (Z2 - Z1)/(Z2 + Z1) and transmission 1 ± Γ (Pozar eq. 2.35), so it misreads the
         // 35 ohm section as 37.03 ohm and the last 50 ohm one as 47.33 ohm.
         double r1 = (75 - 50) / 125.0, r2 = (35 - 75) / 110.0;
@@ -44,7 +44,7 @@ simulation: { duration: 5 ns, resolution: 10 }
         Assert.True(Math.Abs(At(r, r.NaiveOhms, 0.35) - 50) > 1.5, "naive on the last 50 ohm section");
         Assert.True(Math.Abs(At(r, r.LayerOhms, 0.25) - 35) < Math.Abs(At(r, r.NaiveOhms, 0.25) - 35));
 
-        // Segments: distance = v·t_roundtrip/2 (CHECKS.md section 11); the edges at 0.1, 0.2, 0.3 m within one layer (1.75 mm).
+        // Segments: distance = v·t_roundtrip/2 (ReferenceData/published-checks.md §11); the edges at 0.1, 0.2, 0.3 m within one layer (1.75 mm).
         Assert.Equal(4, r.Segments.Count);
         for (int i = 0; i < 3; i++)
             Assert.InRange(r.Segments[i].EndM, 0.1 * (i + 1) - 0.00175, 0.1 * (i + 1) + 0.00175);
@@ -56,7 +56,7 @@ simulation: { duration: 5 ns, resolution: 10 }
     [Fact]
     public void A_shunt_capacitance_is_sized_from_the_area_of_its_dip()
     {
-        // CHECKS.md section 11: shunt C on a matched line, area of ρ(t) = -Z0·C/2, so C = -2A/Z0; 1 pF in 50 ohm: A = -25 ps,
+        // ReferenceData/published-checks.md §11 (Laplace transform, as in Bogatin's TDR chapter): shunt C on a matched line, area of ρ(t) = -Z0·C/2, so C = -2A/Z0; 1 pF in 50 ohm: A = -25 ps,
         // whatever the rise time. Tolerance 10 %.
         var s = TestScenarios.Parse(@"
 source: { waveform: step, high: 1 V, rise: 35 ps }

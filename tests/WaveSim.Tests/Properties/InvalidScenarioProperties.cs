@@ -5,7 +5,8 @@ namespace WaveSim.Tests.Properties;
 /// <summary>
 /// Random invalid scenarios (typos in keys, wrong units, garbage bytes, huge numbers): every one gets exit code 2 and exactly
 /// one line on stderr starting "error: ", or (for garbage that happens to stay valid) a clean success; never a stack trace
-/// (common practice, no source).
+/// (common practice, no source). Every run replays fixed seeds, one case per theory row (<see cref="PropertySeeds"/>);
+/// WAVESIM_SOAK=N adds N fresh random cases per property.
 /// </summary>
 public class InvalidScenarioProperties
 {
@@ -44,54 +45,72 @@ simulation: { duration: 5 ns, output_step: 10 ps, resolution: 10 }
         r.Code == 2 && r.Err.StartsWith("error: ", StringComparison.Ordinal) && r.Err.TrimEnd('\n', '\r').Split('\n').Length == 1
         && !r.Err.Contains("   at ", StringComparison.Ordinal);
 
-    [Fact]
-    public void A_typo_in_any_key_is_a_one_line_error()
+    /// <summary>The cheap properties replay the shared seeds and 100 numbered ones each.</summary>
+    public static TheoryData<string> Seeds => PropertySeeds.Rows(PropertySeeds.Numbered(100));
+
+    static readonly Gen<(int Key, char Ch)> TypoGen = Gen.Select(Gen.Int[0, Keys.Length - 1], Gen.Char['a', 'z']);
+
+    static bool Typo((int Key, char Ch) c)
     {
-        Gen.Select(Gen.Int[0, Keys.Length - 1], Gen.Char['a', 'z']).Sample((k, ch) =>
-        {
-            string key = Keys[k];
-            int at = Base.IndexOf(key + ":", StringComparison.Ordinal);
-            if (at < 0) return true;
-            string text = Base[..at] + key + ch + Base[(at + key.Length)..];
-            var r = Check(text);
-            return Report(OneLineError(r), text, r);
-        }, iter: RandomScenarioProperties.Iter(300), seed: RandomScenarioProperties.Seed);
+        string key = Keys[c.Key];
+        int at = Base.IndexOf(key + ":", StringComparison.Ordinal);
+        if (at < 0) return true;
+        string text = Base[..at] + key + c.Ch + Base[(at + key.Length)..];
+        var r = Check(text);
+        return Report(OneLineError(r), text, r);
     }
 
-    [Fact]
-    public void A_wrong_unit_is_a_one_line_error()
+    static readonly Gen<(int From, int To, int Nth)> UnitGen = Gen.Select(Gen.Int[0, Units.Length - 1], Gen.Int[0, Units.Length - 1], Gen.Int[0, 20]);
+
+    static bool WrongUnit((int From, int To, int Nth) c)
     {
-        Gen.Select(Gen.Int[0, Units.Length - 1], Gen.Int[0, Units.Length - 1], Gen.Int[0, 20]).Sample((from, to, nth) =>
+        // A delay may be given per length or for the whole segment, so ns/m ↔ ns or ps stays valid.
+        string[] delays = ["ps", "ns", "ns/m"];
+        if (Units[c.From] == Units[c.To] || (delays.Contains(Units[c.From]) && delays.Contains(Units[c.To]))) return true;
+        string pattern = " " + Units[c.From];
+        int at = -1;
+        for (int i = 0, start = 0; i <= c.Nth; i++)
         {
-            // A delay may be given per length or for the whole segment, so ns/m ↔ ns or ps stays valid.
-            string[] delays = ["ps", "ns", "ns/m"];
-            if (Units[from] == Units[to] || (delays.Contains(Units[from]) && delays.Contains(Units[to]))) return true;
-            string pattern = " " + Units[from];
-            int at = -1;
-            for (int i = 0, start = 0; i <= nth; i++)
-            {
-                int next = Base.IndexOf(pattern + ",", start, StringComparison.Ordinal);
-                if (next < 0) next = Base.IndexOf(pattern + " ", start, StringComparison.Ordinal);
-                if (next < 0) break;
-                at = next; start = next + 1;
-            }
-            if (at < 0) return true;
-            string text = Base[..at] + " " + Units[to] + Base[(at + pattern.Length)..];
-            var r = Check(text);
-            return Report(OneLineError(r), text, r);
-        }, iter: RandomScenarioProperties.Iter(300), seed: RandomScenarioProperties.Seed);
+            int next = Base.IndexOf(pattern + ",", start, StringComparison.Ordinal);
+            if (next < 0) next = Base.IndexOf(pattern + " ", start, StringComparison.Ordinal);
+            if (next < 0) break;
+            at = next; start = next + 1;
+        }
+        if (at < 0) return true;
+        string text = Base[..at] + " " + Units[c.To] + Base[(at + pattern.Length)..];
+        var r = Check(text);
+        return Report(OneLineError(r), text, r);
     }
 
-    [Fact]
-    public void Garbage_bytes_or_huge_numbers_never_crash()
+    static readonly Gen<(int Pos, char[] Junk, bool Huge)> GarbageGen = Gen.Select(Gen.Int[0, Base.Length - 1], Gen.Char.Array[1, 8], Gen.Bool);
+
+    static bool Garbage((int Pos, char[] Junk, bool Huge) c)
     {
-        Gen.Select(Gen.Int[0, Base.Length - 1], Gen.Char.Array[1, 8], Gen.Bool).Sample((pos, junk, huge) =>
-        {
-            string text = huge
-                ? Base[..pos] + System.Text.RegularExpressions.Regex.Replace(Base[pos..], @"\d+(\.\d+)?", "1e300", System.Text.RegularExpressions.RegexOptions.None, TimeSpan.FromSeconds(1))
-                : Base[..pos] + new string(junk) + Base[pos..];
-            var r = Check(text);
-            return Report(r.Code == 0 ? r.Err.Length == 0 || r.Err.StartsWith("warning", StringComparison.Ordinal) : OneLineError(r), text, r);
-        }, iter: RandomScenarioProperties.Iter(1000), seed: RandomScenarioProperties.Seed);
+        string text = c.Huge
+            ? Base[..c.Pos] + System.Text.RegularExpressions.Regex.Replace(Base[c.Pos..], @"\d+(\.\d+)?", "1e300", System.Text.RegularExpressions.RegexOptions.None, TimeSpan.FromSeconds(1))
+            : Base[..c.Pos] + new string(c.Junk) + Base[c.Pos..];
+        var r = Check(text);
+        return Report(r.Code == 0 ? r.Err.Length == 0 || r.Err.StartsWith("warning", StringComparison.Ordinal) : OneLineError(r), text, r);
     }
+
+    [Theory]
+    [MemberData(nameof(Seeds))]
+    public void A_typo_in_any_key_is_a_one_line_error(string seed) => Assert.True(Typo(PropertySeeds.Replay(TypoGen, seed)), seed);
+
+    [Theory]
+    [MemberData(nameof(Seeds))]
+    public void A_wrong_unit_is_a_one_line_error(string seed) => Assert.True(WrongUnit(PropertySeeds.Replay(UnitGen, seed)), seed);
+
+    [Theory]
+    [MemberData(nameof(Seeds))]
+    public void Garbage_bytes_or_huge_numbers_never_crash(string seed) => Assert.True(Garbage(PropertySeeds.Replay(GarbageGen, seed)), seed);
+
+    [SkippableFact]
+    public void Soak_fresh_typos() => PropertySeeds.Explore(TypoGen, Typo);
+
+    [SkippableFact]
+    public void Soak_fresh_wrong_units() => PropertySeeds.Explore(UnitGen, WrongUnit);
+
+    [SkippableFact]
+    public void Soak_fresh_garbage() => PropertySeeds.Explore(GarbageGen, Garbage);
 }

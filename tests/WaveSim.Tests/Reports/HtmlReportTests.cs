@@ -82,7 +82,7 @@ public class HtmlReportTests
     [Fact]
     public void A_ringing_net_that_recrosses_the_thresholds_fails_on_the_crossing_count()
     {
-        // CHECKS.md B1 (H, derived; standard lattice-diagram method): the load falls back to 0.556 V <= Vil 0.6 V after the
+        // ReferenceData/published-checks.md §10, case B1 (H, derived; standard lattice-diagram method, Γ from Pozar eq. 2.35): the load falls back to 0.556 V <= Vil 0.6 V after the
         // first arrival at 1.667 V, then rises to 1.296 V >= Vih 0.75 V: 3 crossings for one edge. Rule: common practice, no source.
         var report = ReportScenarios.Build(ReportScenarios.Ringing);
         var table = ById(Parse(report.Html), "figures");

@@ -21,7 +21,7 @@ probes:
 simulation: { duration: 10 ns, resolution: 10 }
 ";
 
-    // CHECKS.md B1 (H, derived; standard lattice-diagram method): 1 V step, RS = 10 ohm, Z0 = 50 ohm, open end;
+    // ReferenceData/published-checks.md §10, case B1 (H, derived; standard lattice-diagram method, Γ from Pozar eq. 2.35): 1 V step, RS = 10 ohm, Z0 = 50 ohm, open end;
     // GammaS = -2/3, GammaL = +1. Load: 1.66667, 0.55556, 1.29630, 0.80247, ..., final 1 V (here TD = 1 ns).
     // With Vih 0.75 V, Vil 0.6 V: 0 -> 1.667 (high), -> 0.556 (low), -> 1.296 (high), then 0.802, 1.132, 0.912 ... stay high:
     // 3 threshold crossings for one edge -> fail; noise margins 1 - 0.75 = 0.25 V and 0.6 - 0 = 0.6 V -> both pass.

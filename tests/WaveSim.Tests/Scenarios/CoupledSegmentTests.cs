@@ -24,7 +24,7 @@ simulation: { duration: 2 ns }
     public void Differential_is_the_default_and_common_is_chosen_by_mode()
     {
         // Mode decomposition of a symmetric pair (Pozar, Microwave Engineering, 4th ed., Sec. 7.6): Zdiff = 2 Z0o, Zcomm = Z0e/2;
-        // in stripline both modes travel at c/sqrt(er) (CHECKS.md section 12).
+        // in stripline both modes travel at c/sqrt(er) (tpd = sqrt(ee)/c; ReferenceData/published-checks.md §12).
         var p = Pair();
         var diff = (Segment)TestScenarios.Parse(Yaml).Line[0];
         Assert.Equal(p.Zdiff, diff.Z0, 9);

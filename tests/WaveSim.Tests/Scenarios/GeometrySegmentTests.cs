@@ -19,13 +19,13 @@ simulation: { duration: 3 ns }
     [Fact]
     public void A_microstrip_segment_takes_L_and_C_from_Hammerstad_Jensen()
     {
-        // CHECKS.md section 1, case M3 (derived from Hammerstad and Jensen 1980, with thickness):
+        // ReferenceData/published-checks.md §1, case M3 (derived from Hammerstad and Jensen 1980, with thickness):
         // er = 4.4, h = 1.6 mm, w = 3.0 mm, t = 35 um → 50.17 ohm, eps_eff 3.301, L = 304.0 nH/m, C = 120.8 pF/m.
         var seg = (Segment)TestScenarios.Parse(Yaml).Line[0];
         Assert.Equal(50.17, seg.Z0, 0.05);
         Assert.Equal(304.0e-9, seg.L, 0.5e-9);
         Assert.Equal(120.8e-12, seg.C, 0.2e-12);
-        // DC resistance of a 3 mm × 35 um copper strip: ρ/(w·t) with annealed copper 1.7241e-8 ohm·m (IACS; CHECKS.md section 4).
+        // DC resistance of a 3 mm × 35 um copper strip: ρ/(w·t) with annealed copper 1.7241e-8 ohm·m (IACS; ReferenceData/published-checks.md §4).
         Assert.Equal(1.7241e-8 / (3e-3 * 35e-6), seg.R, 1e-6);
     }
 

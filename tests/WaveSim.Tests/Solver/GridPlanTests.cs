@@ -5,7 +5,7 @@ namespace WaveSim.Tests.Solver;
 /// <summary>
 /// The grid rules. Source: the Courant-Friedrichs-Lewy condition for the 1-D leapfrog, S = v·dt/dz ≤ 1
 /// (Courant, Friedrichs and Lewy 1928; Taflove and Hagness, Computational Electrodynamics, 3rd ed. 2005, ch. 2;
-/// CHECKS.md section 9: above S = 1 the worst mode grows by 2S² − 1 + 2S√(S² − 1) per step).
+/// Taflove and Hagness 2005, ch. 2; ReferenceData/published-checks.md §9: above S = 1 the worst mode grows by 2S² − 1 + 2S√(S² − 1) per step).
 /// </summary>
 public class GridPlanTests
 {

@@ -6,7 +6,7 @@ public class LossAndLumpedTests
     [Fact]
     public void Per_length_L_and_C_give_velocity_one_over_root_LC_and_impedance_root_L_over_C()
     {
-        // CHECKS.md section 6, case L1 (Pozar ch. 2; Paul 2008): L = 250 nH/m, C = 100 pF/m → Z0 = 50 ohm, v = 2e8 m/s.
+        // ReferenceData/published-checks.md §6, case L1 (Pozar ch. 2; Paul 2008): L = 250 nH/m, C = 100 pF/m → Z0 = 50 ohm, v = 2e8 m/s.
         var r = TestScenarios.Run(@"
 source: { waveform: step, high: 1 V, rise: 100 ps, delay: 1 ns, resistance: 100 ohm }
 line: [ { segment: { length: 2 m, l: 250 nH/m, c: 100 pF/m } } ]
@@ -25,7 +25,7 @@ simulation: { duration: 20 ns }
     [Fact]
     public void Distortionless_line_carries_the_step_undistorted_attenuated_by_exp_minus_R_z_over_Z0()
     {
-        // CHECKS.md section 7 (Pozar section 2.7, Heaviside's condition R/L = G/C): L = 250 nH/m, C = 100 pF/m, R = 5 ohm/m,
+        // ReferenceData/published-checks.md §7 (Pozar section 2.7, Heaviside's condition R/L = G/C): L = 250 nH/m, C = 100 pF/m, R = 5 ohm/m,
         // G = 2 mS/m, 10 m, both ends matched, 1 V via 50 ohm: far end 0.5·e^-1 = 0.18394 V from 50 ns on, flat. Tolerance 0.5 %.
         var r = TestScenarios.Run(@"
 source: { waveform: step, high: 1 V, rise: 1 ns, delay: 0 ns, resistance: 50 ohm }
@@ -43,7 +43,7 @@ simulation: { duration: 80 ns, resolution: 10 }
     [Fact]
     public void Shunt_capacitance_on_a_matched_line_reflects_a_dip_with_time_constant_Z0_C_over_2()
     {
-        // CHECKS.md section 11: shunt C on a matched line, Γ(s) = −sτ/(1 + sτ), τ = Z0·C/2; for a fast edge the reflected
+        // ReferenceData/published-checks.md §11 (Laplace transform, as in Bogatin's TDR chapter): shunt C on a matched line, Γ(s) = −sτ/(1 + sτ), τ = Z0·C/2; for a fast edge the reflected
         // dip at the source decays as exp(−t/τ). 1 pF in 50 ohm: τ = 25 ps; the dip's area is −Z0·C/2 per volt incident.
         var r = TestScenarios.Run(@"
 source: { waveform: step, high: 1 V, rise: 5 ps, delay: 100 ps, resistance: 50 ohm }
@@ -72,7 +72,7 @@ simulation: { duration: 4 ns, resolution: 10 }
     [Fact]
     public void RC_dominated_line_reaches_half_at_the_open_end_after_0_38_RC()
     {
-        // CHECKS.md section 8, grid case: L = 250 nH/m, C = 100 pF/m, r = 5 kohm/m, l = 1 m (R = 100·Z0, RC = 500 ns):
+        // ReferenceData/published-checks.md §8, grid case: L = 250 nH/m, C = 100 pF/m, r = 5 kohm/m, l = 1 m (R = 100·Z0, RC = 500 ns):
         // t50 = 0.3787 RC = 189.4 ns (slab-diffusion series, Carslaw and Jaeger 1959, from memory). Tolerance 1 %.
         var r = TestScenarios.Run(@"
 source: { waveform: step, high: 1 V, rise: 1 ns, delay: 0 ns }

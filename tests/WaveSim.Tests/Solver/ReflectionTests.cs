@@ -45,7 +45,7 @@ simulation: {{ duration: {duration} }}
     [InlineData("{ r: 150 ohm }", 0.5)]
     public void Load_reflects_gamma_of_the_incident_step(string load, double gamma)
     {
-        // Matched source: incident 0.5 V; at the load v = 0.5(1 + Γ) after the edge (Pozar eq. 2.35; CHECKS.md section 10).
+        // Matched source: incident 0.5 V; at the load v = 0.5(1 + Γ) after the edge (Pozar eq. 2.35; ReferenceData/published-checks.md §10).
         var r = TestScenarios.Run(Net("50 ohm", load));
         double settled = r.At("rx", 1e-9 + 5e-9 + 2e-9);
         Assert.Equal(0.5 * (1 + gamma), settled, 1e-9);
@@ -57,7 +57,7 @@ simulation: {{ duration: {duration} }}
     [Fact]
     public void Bounce_diagram_follows_the_geometric_series_of_the_two_reflection_coefficients()
     {
-        // CHECKS.md section 10, case B1 (standard lattice-diagram method): 1 V step, RS = 10 ohm, Z0 = 50 ohm, open end, TD = 5 ns.
+        // ReferenceData/published-checks.md §10, case B1 (standard lattice-diagram method, Γ from Pozar eq. 2.35): 1 V step, RS = 10 ohm, Z0 = 50 ohm, open end, TD = 5 ns.
         // Expected values computed here from the lattice formula, not from the solver:
         // V_load(k-th arrival) = V_launch (1 + ΓL) Σ_{m<k} (ΓS ΓL)^m, settling at the DC divider value (open end: 1 V).
         var r = TestScenarios.Run(Net("10 ohm", "open", rise: "100 ps", duration: "200 ns"));

@@ -8,7 +8,7 @@ namespace WaveSim.Tests.Terminations;
 /// <summary>The termination planner and study on small lossless nets.</summary>
 public class TerminationTests
 {
-    // CHECKS.md section 10, case B1: 1 V step, RS = 10 ohm, Z0 = 50 ohm, open end, TD = 5 ns.
+    // ReferenceData/published-checks.md §10, case B1 (lattice-diagram method, Γ from Pozar eq. 2.35): 1 V step, RS = 10 ohm, Z0 = 50 ohm, open end, TD = 5 ns.
     const string B1 = @"title: B1
 source: { waveform: step, low: 0 V, high: 1 V, rise: 200 ps, delay: 1 ns, resistance: 10 ohm }
 line:
@@ -24,9 +24,9 @@ simulation: { duration: 200 ns, resolution: 10 }
     [Fact]
     public void Series_termination_launches_half_the_step_and_the_open_end_doubles_it_without_overshoot()
     {
-        // CHECKS.md B2 (common practice, no source): series R = Z0 − R_driver; launch 0.5·VS; the open far end reaches VS
-        // at T; the near end holds a 0.5·VS shelf for 2T. Exact levels from the lattice-diagram method (CHECKS.md
-        // section 10): launch = VS·Z0/(Z0 + RS + R), ΓS = (RS + R − Z0)/(RS + R + Z0), ΓL = +1 (Pozar eq. 2.35).
+        // ReferenceData/published-checks.md §10, case B2 (common practice, no source): series R = Z0 − R_driver; launch 0.5·VS; the open far end reaches VS
+        // at T; the near end holds a 0.5·VS shelf for 2T. Exact levels from the lattice-diagram method (ReferenceData/published-checks.md
+        // §10): launch = VS·Z0/(Z0 + RS + R), ΓS = (RS + R − Z0)/(RS + R + Z0), ΓL = +1 (Pozar eq. 2.35).
         var s = TestScenarios.Parse(B1);
         var series = TerminationPlanner.Design(s).Single(d => d.Kind == TerminationKind.Series);
         var part = Assert.Single(series.Parts);
@@ -88,7 +88,7 @@ simulation: { duration: 200 ns, resolution: 10 }
         double vl = (1 / r1) / (1 / 10.0 + 1 / r1 + 1 / r2);
         Assert.Equal((1 - vl) * (1 - vl) / r1 + vl * vl / r2, th.PowerLowW!.Value, 1e-12);
 
-        // RC: R·C at least three round trips (CHECKS.md section 10, AC termination, common practice, no source); blocks DC.
+        // RC: R·C at least three round trips (ReferenceData/published-checks.md §10, AC termination, common practice, no source); blocks DC.
         var rc = Get(TerminationKind.Rc);
         Assert.True(rc.Design.Parts[0].Used * rc.Design.Parts[1].Used >= 3 * 2 * 5e-9 * (1 - 1e-12));
         Assert.Equal(0, rc.PowerHighW!.Value, 1e-15);

@@ -26,7 +26,7 @@ simulation: { duration: 5 ns, resolution: 10 }
     public void A_captured_trace_gives_segments_and_a_shunt_C_and_the_scenario_written_runs_and_reads_back_the_same()
     {
         // Layer peeling (Bruckstein and Kailath, SIAM Review 29(3), 1987) with Z = Z0(1+ρ)/(1-ρ), distance v·t/2 and
-        // C = -2A/Z0 (CHECKS.md section 11). The capture is the solver's port voltage with 1 mV of seeded noise, written
+        // C = -2A/Z0 (Laplace transform of the shunt-C reflection; ReferenceData/published-checks.md §11). The capture is the solver's port voltage with 1 mV of seeded noise, written
         // as an instrument export would be; tolerances 1 ohm, 10 % on C, 3 mm on positions (common practice, no source).
         using var run = new CliRunner();
         string scenario = run.Write("line.yaml", Line);
