@@ -23,8 +23,7 @@ internal sealed class LeapfrogSolver
         foreach (var s in _net.Segments) { s.V = new double[s.Cells + 1]; s.I = new double[s.Cells]; }
         _jv = new double[_net.Junctions.Count];
         _settled = SettledLevels(scenario);
-        DcOperatingPoint.Apply(_net, scenario.Source.InitialLevel);
-        CopyEndVoltages();
+        DcOperatingPoint.Apply(_net, scenario.Source.InitialLevel, _jv);
         _kernels = _net.Segments.Select(s => new SegmentKernel(s, plan.Dt)).ToArray();
         _segV = _net.Segments.Select(s => s.V).ToArray();
         _segI = _net.Segments.Select(s => s.I).ToArray();
@@ -119,15 +118,9 @@ internal sealed class LeapfrogSolver
     double[]? SettledLevels(Scenario scenario)
     {
         if (scenario.Source.FirstEdgeLevel is not { } level) return null;
-        try { DcOperatingPoint.Apply(_net, level); }
+        try { DcOperatingPoint.Apply(_net, level, _jv); }
         catch (InputException) { return null; }   // an ideal loop that only the edge drives: the figures estimate the level
-        CopyEndVoltages();
         return ProbeSampler.VoltagesNow(_net, scenario, _jv);
-    }
-
-    void CopyEndVoltages()
-    {
-        foreach (var s in _net.Segments) { _jv[s.Start] = s.V[0]; _jv[s.End] = s.V[^1]; }
     }
 
     double ElectricEnergy()
