@@ -103,10 +103,11 @@ internal sealed class LeapfrogSolver
         var probes = _scenario.Probes.Select((p, k) => new ProbeTrace(p.Name, p.Describe(), positions[k], sampler.Volts[k], sampler.Amps[k])
         {
             SettledVolts = _settled?[k],
+            FigureVolts = sampler.FigureVolts[k],
         }).ToList();
         return new SimulationResult
         {
-            Scenario = _scenario, Plan = _plan, Time = sampler.Times, Probes = probes,
+            Scenario = _scenario, Plan = _plan, Time = sampler.Times, FigureTime = sampler.FigureTimes, Probes = probes,
             Lines = profiles.Select(p => p.Profile).ToList(), Snapshots = snapshots, Elapsed = clock.Elapsed, Energy = energy,
         };
     }
