@@ -57,6 +57,7 @@ public static class RunSummary
         ["cell_updates"] = plan.CellUpdates,
         ["memory_bytes"] = plan.MemoryBytes,
         ["output_rows"] = plan.OutputRows,
+        ["figure_step_s"] = plan.FigureStep,   // null: the figures use the output record, which is fine enough
         ["segments"] = new JsonArray(plan.Segments.Select(s => (JsonNode)new JsonObject
         {
             ["where"] = s.Where,

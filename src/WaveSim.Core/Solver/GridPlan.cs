@@ -55,6 +55,12 @@ public sealed record GridPlan
     /// </summary>
     public const int FigureSamplesPerFeature = 20;
 
+    /// <summary>
+    /// Most memory the figure record may take, bytes: 256 MiB. A run whose record at <see cref="FigureSamplesPerFeature"/>
+    /// would take more keeps every k-th step with a larger k instead (never coarser than the output step).
+    /// </summary>
+    public const long FigureRecordBudgetBytes = 256L << 20;
+
     /// <summary>Relative tolerance when rounding a delay to whole steps, so 80 mm at 7.5 ns/m over 20 ps is 30 cells, not 31.</summary>
     public const double RoundingTolerance = 1e-9;
 
@@ -80,7 +86,11 @@ public sealed record GridPlan
         long rows = Rows(scenario.Simulation.Duration, h);
         // The figures need samples finer than the output step may be: every k-th solver step, kept apart from the CSV.
         double spacing = Math.Min(tMin, scenario.Source.ShortestFeature) / FigureSamplesPerFeature;
-        double figureStep = dt * Math.Max(1, Math.Floor(spacing / dt * (1 + RoundingTolerance)));
+        double stride = Math.Max(1, Math.Floor(spacing / dt * (1 + RoundingTolerance)));
+        // A long run thins the figure record to stay within its budget rather than hold every step of every probe.
+        long maxRows = FigureRecordBudgetBytes / ((1L + scenario.Probes.Count) * sizeof(double));
+        stride = Math.Max(stride, Math.Ceiling(scenario.Simulation.Duration / (dt * (maxRows - 2))));
+        double figureStep = dt * stride;
         double? figure = h > figureStep * (1 + RoundingTolerance) ? figureStep : null;
         long figureRows = figure is { } hf ? Rows(scenario.Simulation.Duration, hf) : 0;
         long cells = plans.Sum(p => (long)p.Cells);

@@ -55,4 +55,16 @@ simulation: {{ duration: 12 ns{simulation} }}
         int k = (int)Math.Round(2e-9 / plan.FigureStep.Value);
         Assert.Equal(r.Probe("rx").Volts[2], r.Probe("rx").FigureVolts[k], 1e-12);
     }
+
+    [Fact]
+    public void A_long_run_thins_the_figure_record_to_its_budget_but_not_to_the_output_step()
+    {
+        // 2 ms at dt = 10 ps is 2e8 steps: every step of two probes would take 4.8 GB.
+        var plan = WaveSim.Core.Simulate.Plan(TestScenarios.Parse(Net(", output_step: 1 us").Replace("duration: 12 ns", "duration: 2 ms")));
+        Assert.True(plan.FigureRows * (1 + 2) * 8 <= GridPlan.FigureRecordBudgetBytes, $"{plan.FigureRows} rows");
+        // One solver step less between samples would not fit: the record is no thinner than the budget needs.
+        Assert.True(2e-3 / (plan.FigureStep!.Value - plan.Dt) + 1 > GridPlan.FigureRecordBudgetBytes / (3 * 8), $"{plan.FigureStep} s: thinner than needed");
+        Assert.True(plan.FigureStep < 1e-6);
+        Assert.Equal(0, plan.FigureStep!.Value / plan.Dt % 1, 1e-6);   // still whole solver steps
+    }
 }
