@@ -24,6 +24,7 @@ internal sealed class LeapfrogSolver
         _jv = new double[_net.Junctions.Count];
         _settled = SettledLevels(scenario);
         DcOperatingPoint.Apply(_net, scenario.Source.InitialLevel, _jv);
+        CopyEndVoltages();
         _kernels = _net.Segments.Select(s => new SegmentKernel(s, plan.Dt)).ToArray();
         _segV = _net.Segments.Select(s => s.V).ToArray();
         _segI = _net.Segments.Select(s => s.I).ToArray();
@@ -121,7 +122,17 @@ internal sealed class LeapfrogSolver
         if (scenario.Source.FirstEdgeLevel is not { } level) return null;
         try { DcOperatingPoint.Apply(_net, level, _jv); }
         catch (InputException) { return null; }   // an ideal loop that only the edge drives: the figures estimate the level
+        CopyEndVoltages();
         return ProbeSampler.VoltagesNow(_net, scenario, _jv);
+    }
+
+    /// <summary>
+    /// Junctions at segment ends take the segment's end value, the DC ladder walked from its start (equal to the junction's DC
+    /// voltage to rounding), so that a net without other junctions runs bit for bit as before; the rest keep the DC solve's value.
+    /// </summary>
+    void CopyEndVoltages()
+    {
+        foreach (var s in _net.Segments) { _jv[s.Start] = s.V[0]; _jv[s.End] = s.V[^1]; }
     }
 
     double ElectricEnergy()
