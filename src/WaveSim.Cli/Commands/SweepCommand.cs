@@ -51,19 +51,30 @@ public static class SweepCommand
 
             string dir = CommonOptions.OutputDir(pr.GetValue(outDir), path);
             var best = g is null ? null : result.Best(g, limits);
+            var charted = new List<string>();
+            var leftOut = new List<string>();   // panels (or whole charts) with no data, and why
             using (var output = new OutputFolder(dir))
             {
                 SweepCsv.Write(result, output.File("sweep.csv"));
                 foreach (string f in figures)
                 {
                     var chart = SweepPictures.Chart(result, f, best, g);
-                    File.WriteAllBytes(output.File($"sweep_{FigureSelector.Stem(f)}.png"), LineChart.RenderPng(chart, 1200, 300 + 300 * result.Probes.Count));
+                    string file = $"sweep_{FigureSelector.Stem(f)}.png";
+                    leftOut.AddRange(SweepPanelGaps.LeftOut(result, f).Select(l => $"{file}: {l}" + (chart.Panels.Count == 0 ? "; no chart written" : "")));
+                    if (chart.Panels.Count == 0) continue;
+                    File.WriteAllBytes(output.File(file), LineChart.RenderPng(chart, 1200, 300 + 300 * chart.Panels.Count));
+                    charted.Add(file);
                 }
                 output.Commit();
             }
             var o = pr.InvocationConfiguration.Output;
-            if (pr.GetValue(json)) o.WriteLine(RunSummary.Text(SweepReport.Json(result, g, limits, dir)));
-            else Print(o, result, figures, g, limits, dir);
+            if (pr.GetValue(json))
+            {
+                var report = SweepReport.Json(result, g, limits, dir);
+                report["panels_left_out"] = new System.Text.Json.Nodes.JsonArray(leftOut.Select(l => (System.Text.Json.Nodes.JsonNode)System.Text.Json.Nodes.JsonValue.Create(l)).ToArray());
+                o.WriteLine(RunSummary.Text(report));
+            }
+            else Print(o, result, figures, g, limits, dir, charted, leftOut);
             return ExitCodes.Ok;
         })));
         return cmd;
@@ -75,7 +86,8 @@ public static class SweepCommand
         catch (InputException ex) { throw new InputException("--figure: " + ex.Message); }
     }
 
-    static void Print(TextWriter o, SweepResult r, string[] figures, SweepGoal? goal, IReadOnlyList<SweepLimit> limits, string dir)
+    static void Print(TextWriter o, SweepResult r, string[] figures, SweepGoal? goal, IReadOnlyList<SweepLimit> limits, string dir,
+        IReadOnlyList<string> charted, IReadOnlyList<string> leftOut)
     {
         var cols = r.Probes.SelectMany(p => figures.Select(f => new ProbeFigure(p, f))).ToArray();
         o.WriteLine($"{r.Points.Count} points over {string.Join(" x ", r.Axes.Select(a => $"{a.KeyPath} ({a.Values.Count})"))}");
@@ -97,7 +109,8 @@ public static class SweepCommand
             }
             else o.WriteLine($"no point meets {goal}{within}");
         }
-        o.WriteLine($"wrote {Path.Combine(dir, "sweep.csv")}, " + string.Join(", ", figures.Select(f => $"sweep_{FigureSelector.Stem(f)}.png")));
+        foreach (string l in leftOut) o.WriteLine($"left out of {l}");
+        o.WriteLine($"wrote {Path.Combine(dir, "sweep.csv")}" + string.Concat(charted.Select(f => ", " + f)));
     }
 
     static string Short(ProbeFigure c) => c.Probe + "." + FigureSelector.Stem(c.Figure);

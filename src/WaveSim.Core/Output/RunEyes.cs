@@ -41,10 +41,11 @@ public static class RunEyes
         {
             var spec = s.Probes[i];
             var rx = spec.Anchor == ProbeAnchor.Load ? RunSummary.LoadOf(s, spec.BranchPath).Receiver : null;
-            double start = AlignedStart(r.Time, r.Probes[i].Volts, s.Source.Delay + DelayTo(s.Line, spec, 0), s.Source.BitTime, skip);
+            // The figure record, not the thinned output record: output_step must not move the eye's edges.
+            double start = AlignedStart(r.FigureTime, r.Probes[i].FigureVolts, s.Source.Delay + DelayTo(s.Line, spec, 0), s.Source.BitTime, skip);
             try
             {
-                var eye = EyeAnalysis.Compute(r.Time, r.Probes[i].Volts, s.Source.BitTime, start, rx?.Vih, rx?.Vil, skip);
+                var eye = EyeAnalysis.Compute(r.FigureTime, r.Probes[i].FigureVolts, s.Source.BitTime, start, rx?.Vih, rx?.Vil, skip);
                 list.Add(new ProbeEye(r.Probes[i], eye, rx, start, skip, null));
             }
             catch (InputException ex)

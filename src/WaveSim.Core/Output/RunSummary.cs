@@ -9,7 +9,10 @@ namespace WaveSim.Core.Output;
 /// <summary>The figures of one run: the plan, and for each probe its final, maximum and minimum voltage and its signal-quality figures.</summary>
 public static class RunSummary
 {
-    /// <summary>Signal-quality figures for every probe, with the receiver thresholds applied at loads that have them.</summary>
+    /// <summary>
+    /// Signal-quality figures for every probe, with the receiver thresholds applied at loads that have them, computed from the
+    /// figure record (<see cref="SimulationResult.FigureTime"/>, the solver's steps), never from the thinned output record.
+    /// </summary>
     public static IReadOnlyList<(ProbeTrace Probe, SignalFigures Figures)> Figures(SimulationResult r, double settleBand = SignalQualityOptions.DefaultSettleBand)
     {
         var list = new List<(ProbeTrace, SignalFigures)>();
@@ -26,7 +29,7 @@ public static class RunSummary
                 SourceEdgeTimeS = src.FirstEdgeMidpoint,
                 FinalLevelV = r.Probes[i].SettledVolts,
             };
-            list.Add((r.Probes[i], SignalQuality.Compute(r.Time, r.Probes[i].Volts, options)));
+            list.Add((r.Probes[i], SignalQuality.Compute(r.FigureTime, r.Probes[i].FigureVolts, options)));
         }
         return list;
     }
@@ -54,6 +57,7 @@ public static class RunSummary
         ["cell_updates"] = plan.CellUpdates,
         ["memory_bytes"] = plan.MemoryBytes,
         ["output_rows"] = plan.OutputRows,
+        ["figure_step_s"] = plan.FigureStep,   // null: the figures use the output record, which is fine enough
         ["segments"] = new JsonArray(plan.Segments.Select(s => (JsonNode)new JsonObject
         {
             ["where"] = s.Where,
@@ -76,8 +80,8 @@ public static class RunSummary
                 ["at"] = p.Location,
                 ["position_m"] = p.Position,
                 ["final_V"] = p.Volts[^1],
-                ["max_V"] = p.Volts.Max(),
-                ["min_V"] = p.Volts.Min(),
+                ["max_V"] = p.FigureVolts.Max(),
+                ["min_V"] = p.FigureVolts.Min(),
                 ["final_A"] = p.Amps[^1],
             };
             foreach (var kv in f.ToJsonObject()) o[kv.Key] = kv.Value?.DeepClone();

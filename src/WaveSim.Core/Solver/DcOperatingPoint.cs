@@ -14,7 +14,12 @@ internal static class DcOperatingPoint
     /// <summary>A resistance put in every 0 ohm DC path on a second try, ohm: a loop of ideal parts has no defined DC current otherwise.</summary>
     const double Rmin = 1e-9;
 
-    public static void Apply(Network net, double sourceLevel)
+    /// <summary>
+    /// Puts the network at its DC operating point: the grid arrays, the lumped branches' states and every junction's voltage in
+    /// <paramref name="junctionV"/>, including junctions no segment ends at (between the driver and a series part, between two
+    /// series parts, behind a series part at a load), whose voltage a segment's end cannot mirror.
+    /// </summary>
+    public static void Apply(Network net, double sourceLevel, double[] junctionV)
     {
         var x = Solve(net, sourceLevel, 0);
         if (x is null)
@@ -24,6 +29,7 @@ internal static class DcOperatingPoint
                 throw new InputException("the driver's initial level drives an unlimited DC current through a loop with no resistance (0 ohm driver, lossless line, shorted load?): give the driver or the load a resistance");
         }
         Store(net, sourceLevel, x);
+        for (int j = 0; j < net.Junctions.Count; j++) junctionV[j] = x[j];
     }
 
     /// <summary>

@@ -38,8 +38,28 @@ public sealed record GridPlan
     public double CellUpdates => (double)TotalCells * Steps;
     /// <summary>Number of output rows.</summary>
     public required long OutputRows { get; init; }
-    /// <summary>Estimated memory, bytes: the grid arrays plus the probe outputs.</summary>
+    /// <summary>Estimated memory, bytes: the grid arrays, the probe outputs and the figure record.</summary>
     public required long MemoryBytes { get; init; }
+    /// <summary>
+    /// Sample interval of the separate record the signal figures are computed from, s: a whole number of solver steps, at
+    /// least <see cref="FigureSamplesPerFeature"/> samples per shortest edge and per shortest segment delay. Null when the output
+    /// record is already that fine (no output_step, or a finer one); the figures then use the output record.
+    /// </summary>
+    public double? FigureStep { get; init; }
+    /// <summary>Number of samples of the figure record (0 when <see cref="FigureStep"/> is null).</summary>
+    public long FigureRows { get; init; }
+
+    /// <summary>
+    /// Samples per shortest edge and per shortest segment delay that the figures need at least: 20. At the default resolution
+    /// (20 steps per edge) that is every solver step; at a higher resolution every k-th step.
+    /// </summary>
+    public const int FigureSamplesPerFeature = 20;
+
+    /// <summary>
+    /// Most memory the figure record may take, bytes: 256 MiB. A run whose record at <see cref="FigureSamplesPerFeature"/>
+    /// would take more keeps every k-th step with a larger k instead (never coarser than the output step).
+    /// </summary>
+    public const long FigureRecordBudgetBytes = 256L << 20;
 
     /// <summary>Relative tolerance when rounding a delay to whole steps, so 80 mm at 7.5 ns/m over 20 ps is 30 cells, not 31.</summary>
     public const double RoundingTolerance = 1e-9;
@@ -63,13 +83,34 @@ public sealed record GridPlan
         }).ToList();
         long steps = (long)Math.Ceiling(scenario.Simulation.Duration / dt * (1 - RoundingTolerance));
         double h = scenario.Simulation.OutputStep ?? dt;
-        long rows = (long)Math.Floor(scenario.Simulation.Duration / h * (1 + RoundingTolerance)) + 1;
-        if ((rows - 1) * h < scenario.Simulation.Duration * (1 - RoundingTolerance)) rows++;
+        long rows = Rows(scenario.Simulation.Duration, h);
+        // The figures need samples finer than the output step may be: every k-th solver step, kept apart from the CSV.
+        double spacing = Math.Min(tMin, scenario.Source.ShortestFeature) / FigureSamplesPerFeature;
+        double stride = Math.Max(1, Math.Floor(spacing / dt * (1 + RoundingTolerance)));
+        // A long run thins the figure record to stay within its budget rather than hold every step of every probe.
+        long maxRows = FigureRecordBudgetBytes / ((1L + scenario.Probes.Count) * sizeof(double));
+        stride = Math.Max(stride, Math.Ceiling(scenario.Simulation.Duration / (dt * (maxRows - 2))));
+        double figureStep = dt * stride;
+        double? figure = h > figureStep * (1 + RoundingTolerance) ? figureStep : null;
+        long figureRows = figure is { } hf ? Rows(scenario.Simulation.Duration, hf) : 0;
         long cells = plans.Sum(p => (long)p.Cells);
-        long memory = cells * 2 * sizeof(double) + rows * (1 + 2L * scenario.Probes.Count) * sizeof(double);
+        long memory = cells * 2 * sizeof(double) + rows * (1 + 2L * scenario.Probes.Count) * sizeof(double)
+            + figureRows * (1L + scenario.Probes.Count) * sizeof(double);
         // Frequency-dependent segments hold one state per cell per pole on each side (at most 12 poles each).
         memory += plans.Where(p => p.Segment.Loss is not null).Sum(p => (long)p.Cells) * 2 * 12 * sizeof(double);
-        return new GridPlan { Dt = dt, DtLimit = limit, Steps = steps, Segments = plans, OutputRows = rows, MemoryBytes = memory };
+        return new GridPlan
+        {
+            Dt = dt, DtLimit = limit, Steps = steps, Segments = plans, OutputRows = rows, MemoryBytes = memory,
+            FigureStep = figure, FigureRows = figureRows,
+        };
+    }
+
+    /// <summary>Samples from 0 to <paramref name="duration"/> inclusive at interval <paramref name="h"/>, the last one at the duration.</summary>
+    static long Rows(double duration, double h)
+    {
+        long rows = (long)Math.Floor(duration / h * (1 + RoundingTolerance)) + 1;
+        if ((rows - 1) * h < duration * (1 - RoundingTolerance)) rows++;
+        return rows;
     }
 
     /// <summary>The whole number of cells for a delay: floor(T/dt) with a relative tolerance, at least 1.</summary>

@@ -23,7 +23,7 @@ internal sealed class LeapfrogSolver
         foreach (var s in _net.Segments) { s.V = new double[s.Cells + 1]; s.I = new double[s.Cells]; }
         _jv = new double[_net.Junctions.Count];
         _settled = SettledLevels(scenario);
-        DcOperatingPoint.Apply(_net, scenario.Source.InitialLevel);
+        DcOperatingPoint.Apply(_net, scenario.Source.InitialLevel, _jv);
         CopyEndVoltages();
         _kernels = _net.Segments.Select(s => new SegmentKernel(s, plan.Dt)).ToArray();
         _segV = _net.Segments.Select(s => s.V).ToArray();
@@ -106,10 +106,11 @@ internal sealed class LeapfrogSolver
         var probes = _scenario.Probes.Select((p, k) => new ProbeTrace(p.Name, p.Describe(), positions[k], sampler.Volts[k], sampler.Amps[k])
         {
             SettledVolts = _settled?[k],
+            FigureVolts = sampler.FigureVolts[k],
         }).ToList();
         return new SimulationResult
         {
-            Scenario = _scenario, Plan = _plan, Time = sampler.Times, Probes = probes,
+            Scenario = _scenario, Plan = _plan, Time = sampler.Times, FigureTime = sampler.FigureTimes, Probes = probes,
             Lines = profiles.Select(p => p.Profile).ToList(), Snapshots = snapshots, Elapsed = clock.Elapsed, Energy = energy,
             BranchAverages = averages?.Averages(steps * dt),
         };
@@ -122,12 +123,16 @@ internal sealed class LeapfrogSolver
     double[]? SettledLevels(Scenario scenario)
     {
         if (scenario.Source.FirstEdgeLevel is not { } level) return null;
-        try { DcOperatingPoint.Apply(_net, level); }
+        try { DcOperatingPoint.Apply(_net, level, _jv); }
         catch (InputException) { return null; }   // an ideal loop that only the edge drives: the figures estimate the level
         CopyEndVoltages();
         return ProbeSampler.VoltagesNow(_net, scenario, _jv);
     }
 
+    /// <summary>
+    /// Junctions at segment ends take the segment's end value, the DC ladder walked from its start (equal to the junction's DC
+    /// voltage to rounding), so that a net without other junctions runs bit for bit as before; the rest keep the DC solve's value.
+    /// </summary>
     void CopyEndVoltages()
     {
         foreach (var s in _net.Segments) { _jv[s.Start] = s.V[0]; _jv[s.End] = s.V[^1]; }

@@ -5,16 +5,33 @@ namespace WaveSim.Core.Solver;
 /// <summary>
 /// Reads the probes at every solver step and resamples onto the output instants without allocating.
 /// A current is taken at the half steps on either side of the instant and averaged; inside a segment, over the half cells on either side of the node.
+/// When the output step is coarser than <see cref="GridPlan.FigureStep"/>, the voltages also go to a second, finer record for
+/// the signal figures, so that thinning the CSV does not move a peak or a crossing.
 /// </summary>
 internal sealed class ProbeSampler
 {
+    /// <summary>Values at fixed instants, filled by linear interpolation between solver samples; currents optional.</summary>
+    sealed class Record(double[] time, int probes, bool currents)
+    {
+        public readonly double[] Time = time;
+        public readonly double[][] V = Alloc(probes, time.Length);
+        public readonly double[][]? I = currents ? Alloc(probes, time.Length) : null;
+        public long Row;
+
+        static double[][] Alloc(int n, int length)
+        {
+            var a = new double[n][];
+            for (int p = 0; p < n; p++) a[p] = new double[length];
+            return a;
+        }
+    }
+
     readonly Network _net;
     readonly (NodeRef Node, EdgeRef[] Edges, double Weight)[] _refs;
     readonly double[] _prevHalf, _prevV, _prevI, _lastV;
-    readonly double[] _outTime;
-    readonly double[][] _v, _i;
+    readonly Record _out;
+    readonly Record? _fig;
     readonly double _dt;
-    long _row;
     double _prevT = double.NaN;
 
     public ProbeSampler(Network net, Scenario scenario, GridPlan plan, double[] junctionV, out double[] positions)
@@ -23,9 +40,9 @@ internal sealed class ProbeSampler
         _refs = Pick(net, scenario, out positions);
         int n = _refs.Length;
         _prevHalf = new double[n]; _prevV = new double[n]; _prevI = new double[n]; _lastV = new double[n];
-        _outTime = OutputTimes(scenario, plan);
-        _v = new double[n][]; _i = new double[n][];
-        for (int p = 0; p < n; p++) { _v[p] = new double[_outTime.Length]; _i[p] = new double[_outTime.Length]; }
+        double duration = scenario.Simulation.Duration;
+        _out = new Record(Instants(scenario.Simulation.OutputStep ?? plan.Dt, plan.OutputRows, duration), n, currents: true);
+        if (plan.FigureStep is { } hf) _fig = new Record(Instants(hf, plan.FigureRows, duration), n, currents: false);
         for (int p = 0; p < n; p++) { _prevHalf[p] = HalfStepCurrent(p); _lastV[p] = Voltage(p); }
     }
 
@@ -75,17 +92,19 @@ internal sealed class ProbeSampler
 
     readonly double[] _junctionV;
 
-    public double[] Times => _outTime;
-    public double[][] Volts => _v;
-    public double[][] Amps => _i;
-    public bool Done => _row >= _outTime.Length;
+    public double[] Times => _out.Time;
+    public double[][] Volts => _out.V;
+    public double[][] Amps => _out.I!;
+    /// <summary>Instants of the figure record: <see cref="Times"/> unless the output step is coarser than the figures need.</summary>
+    public double[] FigureTimes => (_fig ?? _out).Time;
+    /// <summary>Voltages of the figure record, per probe.</summary>
+    public double[][] FigureVolts => (_fig ?? _out).V;
 
-    static double[] OutputTimes(Scenario s, GridPlan plan)
+    static double[] Instants(double h, long rows, double duration)
     {
-        double h = s.Simulation.OutputStep ?? plan.Dt;
-        var t = new double[plan.OutputRows];
-        for (long k = 0; k < t.Length; k++) t[k] = Math.Min(k * h, s.Simulation.Duration);
-        t[^1] = s.Simulation.Duration;
+        var t = new double[rows];
+        for (long k = 0; k < t.Length; k++) t[k] = Math.Min(k * h, duration);
+        t[^1] = duration;
         return t;
     }
 
@@ -111,25 +130,34 @@ internal sealed class ProbeSampler
         {
             double half = HalfStepCurrent(p);
             double v = _lastV[p], i = 0.5 * (_prevHalf[p] + half);
-            Emit(p, t, v, i);
+            Emit(_out, p, t, v, i);
+            if (_fig is not null) Emit(_fig, p, t, v, i);
+            _prevV[p] = v; _prevI[p] = i;
             _prevHalf[p] = half;
             _lastV[p] = Voltage(p);
         }
         _prevT = t;
-        while (_row < _outTime.Length && _outTime[_row] <= t + 1e-9 * _dt) _row++;
+        Advance(_out, t);
+        if (_fig is not null) Advance(_fig, t);
     }
 
-    void Emit(int p, double t, double v, double i)
+    void Advance(Record rec, double t)
     {
-        // Fill every output instant in (prevT, t] by linear interpolation between the last two solver samples.
-        for (long r = _row; r < _outTime.Length && _outTime[r] <= t + 1e-9 * _dt; r++)
+        while (rec.Row < rec.Time.Length && rec.Time[rec.Row] <= t + 1e-9 * _dt) rec.Row++;
+    }
+
+    void Emit(Record rec, int p, double t, double v, double i)
+    {
+        // Fill every instant in (prevT, t] by linear interpolation between the last two solver samples.
+        double[] time = rec.Time, vs = rec.V[p];
+        double[]? cs = rec.I?[p];
+        for (long r = rec.Row; r < time.Length && time[r] <= t + 1e-9 * _dt; r++)
         {
-            double tr = _outTime[r];
-            if (double.IsNaN(_prevT) || tr >= t - 1e-9 * _dt) { _v[p][r] = v; _i[p][r] = i; continue; }
+            double tr = time[r];
+            if (double.IsNaN(_prevT) || tr >= t - 1e-9 * _dt) { vs[r] = v; if (cs is not null) cs[r] = i; continue; }
             double f = (tr - _prevT) / (t - _prevT);
-            _v[p][r] = _prevV[p] + f * (v - _prevV[p]);
-            _i[p][r] = _prevI[p] + f * (i - _prevI[p]);
+            vs[r] = _prevV[p] + f * (v - _prevV[p]);
+            if (cs is not null) cs[r] = _prevI[p] + f * (i - _prevI[p]);
         }
-        _prevV[p] = v; _prevI[p] = i;
     }
 }

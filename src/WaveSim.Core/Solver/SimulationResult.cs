@@ -15,6 +15,14 @@ public sealed record ProbeTrace(string Name, string Location, double Position, d
     /// where the edge settles however short the record or the pulse. Null for sources without such a level.
     /// </summary>
     public double? SettledVolts { get; init; }
+
+    /// <summary>
+    /// The voltage at the instants of <see cref="SimulationResult.FigureTime"/>, V: the record the signal figures are computed
+    /// from. The same array as <see cref="Volts"/> unless simulation.output_step is coarser than the figures need.
+    /// </summary>
+    public double[] FigureVolts { get => _figureVolts ?? Volts; init => _figureVolts = value; }
+
+    readonly double[]? _figureVolts;
 }
 
 /// <summary>The node positions of one line (the main line or a branch), for pictures of the whole line.</summary>
@@ -36,6 +44,15 @@ public sealed record SimulationResult
     public required GridPlan Plan { get; init; }
     /// <summary>Output instants, s, from 0 to the duration inclusive.</summary>
     public required double[] Time { get; init; }
+    /// <summary>
+    /// Instants of the figure record (<see cref="ProbeTrace.FigureVolts"/>), s, from 0 to the duration: every k-th solver step
+    /// (<see cref="GridPlan.FigureStep"/>) when the output step is coarser, else the same array as <see cref="Time"/>.
+    /// output_step thins only <see cref="Time"/> and the CSV; figures, peaks and crossings come from this record.
+    /// </summary>
+    public double[] FigureTime { get => _figureTime ?? Time; init => _figureTime = value; }
+
+    readonly double[]? _figureTime;
+
     /// <summary>Probe waveforms, in the scenario's order.</summary>
     public required IReadOnlyList<ProbeTrace> Probes { get; init; }
     /// <summary>Node positions of every line, main line first.</summary>

@@ -22,6 +22,7 @@ public static class SweepPictures
         var panels = new List<ChartPanel>();
         foreach (string probe in r.Probes)
         {
+            if (!SweepPanelGaps.HasData(r, probe, figure)) continue;   // no empty panels: SweepPanelGaps.LeftOut says why; may leave none
             var target = new ProbeFigure(probe, figure);
             var series = groups.Select(g =>
             {
