@@ -35,7 +35,7 @@ public static class RunCommand
             if (nFrames < 0 || nFrames > 100_000) throw new InputException($"--frames: expected 0 to 100000, got {nFrames}");
             var (fw, fh) = ParseSize(pr.GetValue(frameSize)!);
             double band = CommonOptions.ParseBand(pr.GetValue(settle)!);
-            var s = CommonOptions.Load(path);
+            var s = CommonOptions.Load(path, pr.InvocationConfiguration.Error);
             var options = new SimulationOptions { Force = pr.GetValue(force), SnapshotTimes = RunPictures.SnapshotTimes(s, nFrames) };
             SimulationResult result;
             using (var bar = new ProgressBar(pr.InvocationConfiguration.Error, "simulating"))
