@@ -51,6 +51,8 @@ public static class ScenarioLoader
         { throw new ScenarioException($"{file}:{ex.Start.Line}:{ex.Start.Column}: not valid YAML: {FirstLine(ex.InnerException?.Message ?? ex.Message)}"); }
         catch (InvalidOperationException)
         { throw new ScenarioException($"{file}: not valid YAML: the parser stopped inside an unbalanced bracket, brace or quote"); }
+        catch (ArgumentException)
+        { throw new ScenarioException($"{file}: not valid YAML: an alias ('*name') or anchor where a value was expected; scenarios use neither"); }
         if (stream.Documents.Count == 0 || stream.Documents[0].RootNode is not YamlMappingNode root)
             throw new ScenarioException($"{file}:1:1: a scenario is a mapping of keys (title, source, line, load, probes, simulation)");
 
