@@ -15,7 +15,7 @@ internal static class SegmentLoss
     public static readonly string[] Keys = ["r_dc", "skin_at", "r_skin", "tand", "er", "at"];
 
     /// <summary>Default reference frequency of a geometry's er and tan δ when it gives no <c>at</c>, Hz (common practice, no source).</summary>
-    public const double DefaultReferenceFrequency = 1e9;
+    public const double DefaultReferenceFrequency = FrequencyLoss.DefaultReferenceFrequency;
 
     /// <summary>The segment with its <c>loss</c> mapping applied; unchanged when there is none.</summary>
     public static Segment Apply(YamlMap m, Segment seg, bool rGiven, bool gGiven)
