@@ -14,7 +14,8 @@ namespace WaveSim.Core.Solver;
 /// <para>An edge of unit swing whose derivative has the spectrum F(ω) (unit area) then differs from the exact edge by at most
 /// (1/π)∫₀^{π/dt} |F(ω)|·|H(ω) − 1|/ω dω at any instant (the inverse Fourier integral bounded by its magnitude). For a linear
 /// ramp of length T, F = sin(ωT/2)/(ωT/2); for the Gaussian-filtered step, F = exp(−(ωσ)²/2). The bound ignores loss,
-/// junctions and later reflections, and exceeds the observed peak error about 2 to 10 times.</para>
+/// junctions and later reflections; it lies above the peak error seen, by about 2 times for a linear ramp and by more for the
+/// smooth Gaussian-filtered step.</para>
 /// </remarks>
 public static class DispersionBound
 {
