@@ -28,6 +28,14 @@ public static class CommonOptions
         return ScenarioLoader.Load(path);
     }
 
+    /// <summary>Loads a scenario and prints its warnings (<see cref="ScenarioWarnings"/>, for its grid plan) on <paramref name="warnings"/>.</summary>
+    public static Scenario Load(string path, TextWriter warnings)
+    {
+        var s = Load(path);
+        WarningOutput.Write(warnings, ScenarioWarnings.For(s, Simulate.Plan(s)));
+        return s;
+    }
+
     /// <summary>The output folder: the option's value, or out/&lt;scenario file name without extension&gt;&lt;suffix&gt;.</summary>
     public static string OutputDir(string? option, string scenarioPath, string suffix = "") =>
         option ?? Path.Combine("out", Path.GetFileNameWithoutExtension(scenarioPath) + suffix);

@@ -10,7 +10,11 @@ public static class Simulate
     /// <summary>Plans the grid for a scenario without running it.</summary>
     public static GridPlan Plan(Scenario scenario) => GridPlan.For(scenario);
 
-    /// <summary>Runs <paramref name="scenario"/> and returns the probe waveforms.</summary>
+    /// <summary>
+    /// Runs <paramref name="scenario"/> and returns the probe waveforms. Source edges shorter than the grid's
+    /// <see cref="GridPlan.MinimumEdge"/> are widened to it (<see cref="SourceSpec.MinimumEdge"/>); the result's scenario carries
+    /// the source as run.
+    /// </summary>
     /// <exception cref="InputException">The plan exceeds the memory or cell-update limits (unless forced), or the network is singular.</exception>
     /// <exception cref="NumericalException">The solution became NaN or infinite.</exception>
     /// <exception cref="OperationCanceledException">The token was cancelled.</exception>
@@ -19,7 +23,8 @@ public static class Simulate
         options ??= new SimulationOptions();
         var plan = GridPlan.For(scenario);
         if (!options.Force) CheckLimits(plan);
-        return new LeapfrogSolver(scenario, plan).Run(options, ct);
+        var run = scenario with { Source = scenario.Source with { MinimumEdge = plan.MinimumEdge } };
+        return new LeapfrogSolver(run, plan).Run(options, ct);
     }
 
     /// <summary>

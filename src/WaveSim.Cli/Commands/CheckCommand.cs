@@ -1,6 +1,7 @@
 using System.CommandLine;
 using WaveSim.Core;
 using WaveSim.Core.Output;
+using WaveSim.Core.Scenarios;
 using WaveSim.Core.Solver;
 using WaveSim.Core.Units;
 
@@ -17,7 +18,7 @@ public static class CheckCommand
         var cmd = new Command("check", "Read a scenario and print the plan (cells, Courant numbers, step, memory) without running") { scenario, json };
         cmd.SetAction(pr => CommandGuard.Run(pr.InvocationConfiguration.Error, () =>
         {
-            var s = CommonOptions.Load(pr.GetValue(scenario)!);
+            var s = CommonOptions.Load(pr.GetValue(scenario)!, pr.InvocationConfiguration.Error);
             var plan = Simulate.Plan(s);
             var problems = PlanAdvisor.Problems(s, plan);
             var o = pr.InvocationConfiguration.Output;
@@ -25,12 +26,18 @@ public static class CheckCommand
             {
                 var j = RunSummary.PlanJson(plan);
                 j["problems"] = new System.Text.Json.Nodes.JsonArray(problems.Select(p => (System.Text.Json.Nodes.JsonNode)p).ToArray());
+                j["warnings"] = new System.Text.Json.Nodes.JsonArray(ScenarioWarnings.For(s, plan)
+                    .Select(w => (System.Text.Json.Nodes.JsonNode)new System.Text.Json.Nodes.JsonObject { ["key"] = w.Key, ["message"] = w.Message }).ToArray());
                 o.WriteLine(RunSummary.Text(j));
             }
             else
             {
                 o.WriteLine($"{s.Title}");
                 PrintPlan(o, plan);
+                if (EdgeLimit.HasRampedEdges(s.Source) && plan.CarriesAnyEdge)
+                    o.WriteLine("  source edges: run as given (every segment at Courant number 1, where the grid carries any edge exactly)");
+                else if (EdgeLimit.HasRampedEdges(s.Source))
+                    o.WriteLine($"  source edges: the grid carries 10-90 % edges down to {Quantity.Format(plan.MinimumEdge, "s")} ({GridPlan.MinimumEdgeSteps.ToString(System.Globalization.CultureInfo.InvariantCulture)} time steps); shorter ones are run as Gaussian-filtered steps of that time");
                 foreach (var (where, fit) in Simulate.LossFits(s, plan))
                     o.WriteLine($"  {where}: frequency-dependent loss fitted with {fit.SeriesPoles.Length} series and {fit.ShuntPoles.Length} shunt poles; largest error over the band: internal impedance {100 * fit.InternalMaxError:F3} %, permittivity {100 * fit.PermittivityMaxError:F3} %");
                 foreach (var p in problems) o.WriteLine("problem: " + p);
@@ -53,7 +60,13 @@ public static class CheckCommand
             if (s.Loss is not null)
                 o.WriteLine($"    frequency-dependent loss: cells sized by the front delay {Quantity.Format(s.FrontDelay, "s")} (the fastest, high-frequency wave); in-band delay {Quantity.Format(s.Delay, "s")}");
             if (s.Derived is { } d)
-                o.WriteLine($"    from {d.Kind} geometry: Z0 {Quantity.Format(d.Z0, "Ω")}, eps_eff {d.EpsEff:G4}, {Quantity.Format(d.DelayPerLength, "s")}/m, L {Quantity.Format(s.L, "H")}/m, C {Quantity.Format(s.C, "F")}/m, R {Quantity.Format(s.R, "Ω")}/m, G {Quantity.Format(s.G, "S")}/m");
+            {
+                // A wideband dielectric has no single G: show it at its reference frequency, where it is ωC·tan δ.
+                double f = d.FrequencyHz ?? Core.Lines.FrequencyLoss.DefaultReferenceFrequency;
+                string g = s.Loss?.Dielectric is null ? $"G {Quantity.Format(s.G, "S")}/m"
+                    : $"G {Quantity.Format(s.ShuntAdmittance(new System.Numerics.Complex(0, 2 * Math.PI * f)).Real, "S")}/m at {Quantity.Format(f, "Hz")} (wideband dielectric, none at DC)";
+                o.WriteLine($"    from {d.Kind} geometry: Z0 {Quantity.Format(d.Z0, "Ω")}, eps_eff {d.EpsEff:G4}, {Quantity.Format(d.DelayPerLength, "s")}/m, L {Quantity.Format(s.L, "H")}/m, C {Quantity.Format(s.C, "F")}/m, R {Quantity.Format(s.R, "Ω")}/m, {g}");
+            }
         }
     }
 }

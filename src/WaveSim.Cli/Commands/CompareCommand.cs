@@ -28,7 +28,7 @@ public static class CompareCommand
         cmd.SetAction((pr, ct) => Task.FromResult(CommandGuard.Run(pr.InvocationConfiguration.Error, () =>
         {
             string path = pr.GetValue(scenario)!;
-            var s = CommonOptions.Load(path);
+            var s = CommonOptions.Load(path, pr.InvocationConfiguration.Error);
             string probeName = pr.GetValue(probe)!;
             CaptureComparison.RequireProbe(s, probeName);
             Capture cap = capture.Read(pr)!;

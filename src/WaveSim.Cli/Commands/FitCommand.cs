@@ -35,7 +35,7 @@ public static class FitCommand
         cmd.SetAction((pr, ct) => Task.FromResult(CommandGuard.Run(pr.InvocationConfiguration.Error, () =>
         {
             string path = pr.GetValue(scenario)!;
-            var s = CommonOptions.Load(path);
+            var s = CommonOptions.Load(path, pr.InvocationConfiguration.Error);
             string probeName = pr.GetValue(probe)!;
             CaptureComparison.RequireProbe(s, probeName);
             var parameters = pr.GetValue(free)!.Select(f => FreeParameter.Parse(s, f)).ToList();

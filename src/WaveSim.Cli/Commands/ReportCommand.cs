@@ -29,7 +29,7 @@ public static class ReportCommand
         {
             string path = pr.GetValue(scenario)!;
             double band = CommonOptions.ParseBand(pr.GetValue(settle)!);
-            var s = CommonOptions.Load(path);
+            var s = CommonOptions.Load(path, pr.InvocationConfiguration.Error);
             string text = File.ReadAllText(path);
             var options = HtmlReport.RunOptions(s, pr.GetValue(force));
             SimulationResult result;

@@ -37,7 +37,7 @@ public static class RunCommand
             if (nFrames < 0 || nFrames > 100_000) throw new InputException($"--frames: expected 0 to 100000, got {nFrames}");
             var (fw, fh) = ParseSize(pr.GetValue(frameSize)!);
             double band = CommonOptions.ParseBand(pr.GetValue(settle)!);
-            var s = CommonOptions.Load(path);
+            var s = CommonOptions.Load(path, pr.InvocationConfiguration.Error);
             var pictureOptions = PictureOptions(s, pr.GetValue(window), pr.GetValue(plot), pr.GetValue(currents));
             var options = new SimulationOptions { Force = pr.GetValue(force), SnapshotTimes = RunPictures.SnapshotTimes(s, nFrames) };
             SimulationResult result;

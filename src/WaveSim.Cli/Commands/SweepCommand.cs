@@ -38,7 +38,7 @@ public static class SweepCommand
                 .Select(f => Figure(f)).Distinct().ToArray();
             if (figures.Length == 0) throw new InputException("--figure: give at least one figure, e.g. overshoot,settling");
             double band = CommonOptions.ParseBand(pr.GetValue(settle)!);
-            var s = CommonOptions.Load(path);
+            var s = CommonOptions.Load(path, pr.InvocationConfiguration.Error);
             var probes = s.Probes.Select(p => p.Name).ToArray();
             var g = pr.GetValue(goal) is { } gt ? SweepGoal.Parse(gt, probes) : null;
             var limits = (pr.GetValue(limit) ?? []).Select(l => SweepLimit.Parse(l, probes)).ToArray();

@@ -40,7 +40,7 @@ public static class TerminationsCommand
                 Serial = pr.GetValue(serial),
                 Force = pr.GetValue(force),
             };
-            var s = CommonOptions.Load(path);
+            var s = CommonOptions.Load(path, pr.InvocationConfiguration.Error);
             TerminationStudyResult result;
             using (var bar = new ProgressBar(pr.InvocationConfiguration.Error, "terminations"))
                 result = TerminationStudy.Run(s, options, bar, ct);

@@ -21,6 +21,9 @@ namespace WaveSim.Core.Lines;
 /// </remarks>
 public sealed record FrequencyLoss
 {
+    /// <summary>Reference frequency of a geometry's er and tan δ when it gives no <c>at</c>, Hz (a common reference for board materials; common practice, no source).</summary>
+    public const double DefaultReferenceFrequency = 1e9;
+
     /// <summary>DC resistance per length, ohm/m; used only when <see cref="SkinCorner"/> is given.</summary>
     public double RDc { get; init; }
     /// <summary>ω0, rad/s, of Z_int = R_dc·√(1 + s/ω0); null for no conductor model (the segment's constant R applies).</summary>

@@ -49,6 +49,13 @@ public sealed record SourceSpec
     /// <summary>Driver output resistance, ohm (0 = ideal).</summary>
     public double Resistance { get; init; }
 
+    /// <summary>
+    /// The shortest 10-90 % edge the run carries, s (0: edges as given). A rise or fall below it, a zero one included, is run as a
+    /// Gaussian-filtered step of this 10-90 time; <see cref="Simulate.Run"/> sets it from the grid (a few solver steps).
+    /// It does not enter <see cref="ShortestFeature"/>, so it never changes the time step.
+    /// </summary>
+    public double MinimumEdge { get; init; }
+
     /// <summary>The open-circuit voltage at time <paramref name="t"/>, V.</summary>
     public double Value(double t) => SourceWaveform.Evaluate(this, t);
 

@@ -51,12 +51,14 @@ public static class ScenarioLoader
         { throw new ScenarioException($"{file}:{ex.Start.Line}:{ex.Start.Column}: not valid YAML: {FirstLine(ex.InnerException?.Message ?? ex.Message)}"); }
         catch (InvalidOperationException)
         { throw new ScenarioException($"{file}: not valid YAML: the parser stopped inside an unbalanced bracket, brace or quote"); }
+        catch (ArgumentException)
+        { throw new ScenarioException($"{file}: not valid YAML: an alias ('*name') or anchor where a value was expected; scenarios use neither"); }
         if (stream.Documents.Count == 0 || stream.Documents[0].RootNode is not YamlMappingNode root)
             throw new ScenarioException($"{file}:1:1: a scenario is a mapping of keys (title, source, line, load, probes, simulation)");
 
         var top = new YamlMap(file, "", root, TopKeys);
         var source = ReadSource(top, file);
-        var line = ReadLine(top, "line", top.Sequence("line") ?? throw top.Error("missing required key 'line'"), file, new HashSet<string>(), source.Rise);
+        var line = ReadLine(top, "line", top.Sequence("line") ?? throw top.Error("missing required key 'line'"), file, new HashSet<string>());
         var load = ReadLoad(top, "load");
         var sim = ReadSimulation(top);
         var scenario = new Scenario
@@ -193,7 +195,7 @@ public static class ScenarioLoader
         return (t.ToArray(), v.ToArray());
     }
 
-    static List<LineElement> ReadLine(YamlMap parent, string key, YamlSequenceNode seq, string file, HashSet<string> branchNames, double scenarioRise)
+    static List<LineElement> ReadLine(YamlMap parent, string key, YamlSequenceNode seq, string file, HashSet<string> branchNames)
     {
         var items = new List<LineElement>();
         int i = 0;
@@ -206,10 +208,10 @@ public static class ScenarioLoader
             string kind = ((YamlScalarNode)m.Children.Keys.First()).Value!;
             items.Add(kind switch
             {
-                "segment" => ReadSegment(wrapper.Map("segment", SegmentKeys)!, scenarioRise),
+                "segment" => ReadSegment(wrapper.Map("segment", SegmentKeys)!),
                 "shunt" => new Shunt(ReadParts(wrapper.Map("shunt", LumpedKeys)!)),
                 "series" => new Model.Series(ReadParts(wrapper.Map("series", LumpedKeys)!)),
-                _ => ReadBranch(wrapper.Map("branch", BranchKeys)!, file, branchNames, scenarioRise),
+                _ => ReadBranch(wrapper.Map("branch", BranchKeys)!, file, branchNames),
             });
             i++;
         }
@@ -218,12 +220,12 @@ public static class ScenarioLoader
         return items;
     }
 
-    static Segment ReadSegment(YamlMap m, double rise)
+    static Segment ReadSegment(YamlMap m)
     {
         double length = m.Positive("length", Dimension.Length) ?? throw m.Error($"missing required key '{m.Join("length")}'");
         double? rGiven = m.NonNegative("r", Dimension.ResistancePerLength);
         double? gGiven = m.NonNegative("g", Dimension.ConductancePerLength);
-        if (m.Has("geometry")) return SegmentGeometry.Read(m, length, rGiven, gGiven, rise);
+        if (m.Has("geometry")) return SegmentGeometry.Read(m, length, rGiven, gGiven);
         if (m.Has("mode")) throw m.Error(m.Node("mode")!, m.Join("mode"), "only a segment with a coupled-pair geometry has a mode: remove this key or add a geometry");
         double r = rGiven ?? 0;
         double g = gGiven ?? 0;
@@ -278,12 +280,12 @@ public static class ScenarioLoader
         return parts;
     }
 
-    static Branch ReadBranch(YamlMap m, string file, HashSet<string> names, double scenarioRise)
+    static Branch ReadBranch(YamlMap m, string file, HashSet<string> names)
     {
         string name = m.Identifier("name");
         if (!names.Add(name)) throw m.Error(m.Node("name")!, m.Join("name"), $"branch name '{name}' is used twice");
         var seq = m.Sequence("line") ?? throw m.Error($"missing required key '{m.Join("line")}'");
-        var line = ReadLine(m, "line", seq, file, names, scenarioRise);
+        var line = ReadLine(m, "line", seq, file, names);
         return new Branch(name, line, ReadLoad(m, "load"));
     }
 

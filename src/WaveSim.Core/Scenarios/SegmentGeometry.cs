@@ -6,23 +6,24 @@ namespace WaveSim.Core.Scenarios;
 
 /// <summary>
 /// A segment given by its cross-section (<c>geometry: { kind: microstrip, width: 8 mil, … }</c>): L and C from the
-/// closed-form formulas of <see cref="CrossSection"/>, R and G as constants.
+/// closed-form formulas of <see cref="CrossSection"/>, R as a constant and the dielectric loss as a causal wideband model.
 /// </summary>
 /// <remarks>
 /// R is the DC resistance of the copper unless <c>at</c> is given, in which case it is the skin-effect resistance at that
-/// frequency (a constant-R model must choose one; DC keeps the settled levels right). G = ωC·tan δ at <c>at</c>, or at the
-/// source edge's bandwidth 0.35/t_r (exact for one pole, ln 9/2π; common practice) when <c>at</c> is not given.
-/// An explicit <c>r</c> or <c>g</c> beside the geometry overrides the derived value.
-/// With <c>loss: frequency</c> the segment instead carries the cross-section's frequency-dependent loss
-/// (<see cref="FrequencyLoss"/>: skin effect R_dc·√(1 + s/ω0) and the Djordjevic-Sarkar dielectric fitted to er and tan δ at
-/// <c>at</c>, or at 1 GHz without it); <c>loss: constant</c> (the default) keeps the constant R and G.
+/// frequency (a constant-R model must choose one; DC keeps the settled levels right). A <c>tand</c> is carried by the
+/// Djordjevic-Sarkar wideband dielectric (Djordjevic, Biljic, Likar-Smiljanic and Sarkar, IEEE Trans. EMC 43(4), 2001),
+/// fitted to er and tan δ at <c>at</c> (1 GHz without it): its loss is G = ωC·tan δ at that frequency and it conducts
+/// nothing at DC (G(0) = 0), as a loss tangent must. A constant G (which would leak at DC) is used only when the user writes
+/// <c>g</c>; an explicit <c>r</c> or <c>g</c> beside the geometry overrides the derived value.
+/// With <c>loss: frequency</c> the segment also carries the cross-section's skin effect
+/// (<see cref="FrequencyLoss"/>: R_dc·√(1 + s/ω0)); <c>loss: constant</c> (the default) keeps the constant R.
 /// A coupled pair (<c>kind: coupled-microstrip</c> or <c>coupled-stripline</c>) stands as one line in the mode given by
 /// <c>mode</c>: <c>differential</c> (the default; Z0 = Zdiff = 2 Z0o, odd-mode eps_eff, R of both strips in series) or
 /// <c>common</c> (Z0 = Zcomm = Z0e/2, even-mode eps_eff, the strips in parallel); see <see cref="CoupledLineParameters"/>.
 /// </remarks>
 internal static class SegmentGeometry
 {
-    public static Segment Read(YamlMap m, double length, double? r, double? g, double rise)
+    public static Segment Read(YamlMap m, double length, double? r, double? g)
     {
         foreach (string k in new[] { "z0", "delay", "velocity", "eps_eff", "l", "c" })
             if (m.Has(k)) throw m.Error(m.Node(k)!, m.Join(k), "a segment given by geometry takes its impedance and delay from it: remove this key");
@@ -54,9 +55,11 @@ internal static class SegmentGeometry
             if (mode != "constant")
                 throw m.Error(lossNode, m.Join("loss"), "beside a geometry, expected 'frequency' (skin effect and wideband dielectric from the cross-section) or 'constant'");
         }
-        double at = p.FrequencyHz ?? (rise > 0 ? 0.35 / rise : 0);
         double rDerived = p.FrequencyHz is { } f ? p.ResistanceAt(f) : p.RDc;
-        return new Segment(length, r ?? rDerived, p.L, g ?? p.ConductanceAt(at), p.C) { Derived = p };
+        var seg = new Segment(length, r ?? rDerived, p.L, g ?? 0, p.C) { Derived = p };
+        if (g is null && spec.Dimensions.TryGetValue("tand", out double tanD) && tanD > 0)
+            seg = seg with { Loss = SegmentLoss.DielectricFromGeometry(p, spec.Dimensions.TryGetValue("er", out double er1) ? er1 : 1, tanD) };
+        return seg;
     }
 
     /// <summary>The segment's <c>mode</c> for a coupled-pair geometry (default differential); null for a single line.</summary>

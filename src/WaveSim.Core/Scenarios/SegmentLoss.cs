@@ -15,7 +15,7 @@ internal static class SegmentLoss
     public static readonly string[] Keys = ["r_dc", "skin_at", "r_skin", "tand", "er", "at"];
 
     /// <summary>Default reference frequency of a geometry's er and tan δ when it gives no <c>at</c>, Hz (common practice, no source).</summary>
-    public const double DefaultReferenceFrequency = 1e9;
+    public const double DefaultReferenceFrequency = FrequencyLoss.DefaultReferenceFrequency;
 
     /// <summary>The segment with its <c>loss</c> mapping applied; unchanged when there is none.</summary>
     public static Segment Apply(YamlMap m, Segment seg, bool rGiven, bool gGiven)
@@ -69,16 +69,24 @@ internal static class SegmentLoss
         if (!skin && !diel) return null;
         var loss = new FrequencyLoss();
         if (skin) loss = loss with { RDc = p.RDc, SkinCorner = FrequencyLoss.CornerFromGeometry(p) };
-        if (diel)
-        {
-            // The filling factor q from the cross-section's own effective loss tangent, tan δ_eff = tan δ·er·q/ε_eff.
-            double q = Math.Min(1, p.LossTangent * p.EpsEff / (tand * er));
-            loss = loss with
-            {
-                Dielectric = DjordjevicSarkar.Fit(er, tand, p.FrequencyHz ?? DefaultReferenceFrequency),
-                ReferencePermittivity = er, Filling = q,
-            };
-        }
+        if (diel) loss = loss with { Dielectric = DielectricFromGeometry(p, er, tand).Dielectric, ReferencePermittivity = er, Filling = Filling(p, er, tand) };
         return loss;
     }
+
+    /// <summary>
+    /// The wideband dielectric alone of a cross-section with a loss tangent: the Djordjevic-Sarkar model fitted to er and tan δ at
+    /// the geometry's <c>at</c> (1 GHz without it), no conductor model. G(0) = 0, and at the reference frequency the loss is
+    /// G = ωC·tan δ_eff exactly.
+    /// </summary>
+    /// <param name="p">The cross-section's parameters.</param>
+    /// <param name="er">The substrate's er.</param>
+    /// <param name="tand">The substrate's tan δ, &gt; 0.</param>
+    public static FrequencyLoss DielectricFromGeometry(LineParameters p, double er, double tand) => new()
+    {
+        Dielectric = DjordjevicSarkar.Fit(er, tand, p.FrequencyHz ?? DefaultReferenceFrequency),
+        ReferencePermittivity = er, Filling = Filling(p, er, tand),
+    };
+
+    /// <summary>The filling factor q from the cross-section's own effective loss tangent, tan δ_eff = tan δ·er·q/ε_eff.</summary>
+    static double Filling(LineParameters p, double er, double tand) => Math.Min(1, p.LossTangent * p.EpsEff / (tand * er));
 }

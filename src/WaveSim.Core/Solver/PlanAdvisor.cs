@@ -21,8 +21,8 @@ public static class PlanAdvisor
             list.Add($"the run needs {plan.CellUpdates:G3} cell updates, over the 1e11 limit: run with --force, or shorten the duration");
         if (s.Simulation.OutputStep is { } h && h < plan.Dt)
             list.Add($"simulation.output_step {Quantity.Format(h, "s")} is finer than the solver's step {Quantity.Format(plan.Dt, "s")}: rows between steps are interpolated");
-        if (double.IsPositiveInfinity(s.Source.ShortestFeature))
-            list.Add("the source has an ideal (zero-time) edge: the step is limited by the shortest segment; give 'rise' for a band-limited edge");
+        foreach (var e in EdgeLimit.WidenedEdges(s.Source, plan))
+            list.Add($"{e.Key}: {EdgeLimit.Describe(e.TenNinety)} is shorter than the shortest edge the grid carries ({GridPlan.MinimumEdgeSteps.ToString(System.Globalization.CultureInfo.InvariantCulture)} time steps): it is run as a Gaussian-filtered step with a 10-90 % time of {Quantity.Format(plan.MinimumEdge, "s")}");
         return list;
     }
 }
