@@ -9,15 +9,8 @@ namespace WaveSim.Tests.Measurements.Cli;
 /// </summary>
 public class CaptureTimeSpanCliTests
 {
-    const string Scenario = @"title: unit slip
-source: { waveform: step, high: 1 V, rise: 200 ps, delay: 1 ns, resistance: 25 ohm }
-line:
-  - segment: { length: 0.15 m, z0: 50 ohm, delay: 1 ns }
-load: { r: 150 ohm, c: 2 pF }
-probes:
-  - { name: rx, at: load }
-simulation: { duration: 10 ns, output_step: 10 ps, resolution: 10 }
-";
+    /// <summary>The fit tests' small net (a 50 Ω, 1 ns trace from a 25 Ω driver into 150 Ω ∥ 2 pF).</summary>
+    const string Scenario = WaveSim.Tests.Fitting.FitScenarios.Truth;
 
     /// <summary>The probe's own waveform written with its time in ns (header time_ns), samples first..last, clock shifted.</summary>
     static string CaptureInNs(int first, int last, double shiftNs)

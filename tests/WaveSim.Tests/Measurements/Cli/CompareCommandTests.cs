@@ -7,15 +7,8 @@ namespace WaveSim.Tests.Measurements.Cli;
 /// <summary>`wavesim compare` on a capture made from the simulation itself, shifted in time and with seeded noise.</summary>
 public class CompareCommandTests
 {
-    const string Scenario = @"title: compare round trip
-source: { waveform: step, high: 1 V, rise: 200 ps, delay: 1 ns, resistance: 25 ohm }
-line:
-  - segment: { length: 0.15 m, z0: 50 ohm, delay: 1 ns }
-load: { r: 150 ohm, c: 2 pF }
-probes:
-  - { name: rx, at: load }
-simulation: { duration: 10 ns, output_step: 10 ps, resolution: 10 }
-";
+    /// <summary>The fit tests' small net (a 50 Ω, 1 ns trace from a 25 Ω driver into 150 Ω ∥ 2 pF).</summary>
+    const string Scenario = WaveSim.Tests.Fitting.FitScenarios.Truth;
 
     [Fact]
     public void A_shifted_noisy_copy_aligns_within_one_sample_and_its_RMS_difference_is_the_noise_RMS()

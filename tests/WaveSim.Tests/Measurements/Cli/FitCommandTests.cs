@@ -9,15 +9,7 @@ namespace WaveSim.Tests.Measurements.Cli;
 /// <summary>`wavesim fit` recovers the values a synthetic capture was made with.</summary>
 public class FitCommandTests
 {
-    const string Truth = @"title: fit target
-source: { waveform: step, high: 1 V, rise: 200 ps, delay: 1 ns, resistance: 25 ohm }
-line:
-  - segment: { length: 0.15 m, z0: 50 ohm, delay: 1 ns }   # the trace
-load: { r: 150 ohm, c: 2 pF }
-probes:
-  - { name: rx, at: load }
-simulation: { duration: 10 ns, output_step: 10 ps, resolution: 10 }
-";
+    const string Truth = WaveSim.Tests.Fitting.FitScenarios.Truth;
 
     [Fact]
     public void Fit_recovers_z0_delay_and_load_capacitance_within_2_percent_from_30_percent_off()
