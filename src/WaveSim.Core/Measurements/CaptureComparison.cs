@@ -43,9 +43,10 @@ public static class CaptureComparison
         ComparisonResult c = WaveformComparison.Compare(sim.Time, trace.Volts, capture.Time, capture.Volts, mode);
         CaptureTimeSpan.RequireOverlap(capture, c.OffsetSeconds, sim.Time[0], sim.Time[^1]);
         // Both sets of figures on the same grid and with the same options, so that their difference is the capture's doing.
-        SignalQualityOptions figureOptions = FigureOptions(sim.Scenario, probe);
-        SignalFigures simulated = SignalQuality.Compute(c.Time, c.Simulated, figureOptions);
-        SignalFigures captured = SignalQuality.Compute(c.Time, c.Captured, figureOptions);
+        // The simulation's edge heads for its DC level, as in `wavesim run` (a clock's record tail is no settled level).
+        SignalQualityOptions simOptions = FigureOptions(sim.Scenario, probe) with { FinalLevelV = trace.SettledVolts };
+        SignalFigures simulated = SignalQuality.Compute(c.Time, c.Simulated, simOptions);
+        SignalFigures captured = SignalQuality.Compute(c.Time, c.Captured, CaptureLevels(simOptions, c));
         var figures = SignalFigures.FigureNames
             .Where(name => simulated.HasThresholds || !name.StartsWith("noise_margin", StringComparison.Ordinal))
             .Select(name =>
@@ -55,6 +56,23 @@ public static class CaptureComparison
             })
             .ToList();
         return new CaptureComparisonResult(probe, c, simulated, captured, figures);
+    }
+
+    /// <summary>
+    /// The capture's levels: the simulation's, moved by the mean residual over the first 2 % and the last 5 % of the grid
+    /// (the windows the figures take their levels from). A level offset of the capture shows in its figures, and one noisy
+    /// first sample does not pass for a low level.
+    /// </summary>
+    static SignalQualityOptions CaptureLevels(SignalQualityOptions simOptions, ComparisonResult c)
+    {
+        int n = c.Residual.Length;
+        double head = c.Residual.Take(Math.Max(1, n / 50)).Average();
+        double tail = c.Residual.Skip(n - Math.Max(1, (int)Math.Ceiling(0.05 * n))).Average();
+        return simOptions with
+        {
+            InitialLevelV = c.Simulated[0] + head,
+            FinalLevelV = simOptions.FinalLevelV is { } f ? f + tail : null,
+        };
     }
 
     /// <summary>The figure options <c>wavesim run</c> uses for this probe: receiver thresholds at a load that has them, delays from the source edge.</summary>

@@ -6,8 +6,8 @@ namespace WaveSim.Core.Measurements;
 /// <param name="Simulated">The simulation linearly interpolated on <paramref name="Time"/>, V.</param>
 /// <param name="Captured">The shifted capture linearly interpolated on <paramref name="Time"/>, V.</param>
 /// <param name="Residual">Captured minus simulated on <paramref name="Time"/>, V.</param>
-/// <param name="RmsV">Root mean square of the residual, V.</param>
-/// <param name="PeakV">Largest absolute residual, V.</param>
+/// <param name="RmsV">Root mean square of captured minus simulated at the capture's own samples inside the overlap, V.</param>
+/// <param name="PeakV">Largest absolute difference at those samples, V.</param>
 /// <param name="RmsPct">RMS residual as a percentage of the simulated swing (max - min on the grid); NaN when the simulation is flat.</param>
 /// <param name="PeakPct">Peak residual as a percentage of the simulated swing; NaN when the simulation is flat.</param>
 public sealed record ComparisonResult(

@@ -51,9 +51,13 @@ public static class RunVerdicts
         return list;
     }
 
-    /// <summary>The driver's low and high levels (a table's lowest and highest value), V.</summary>
+    /// <summary>
+    /// The driver's lower and higher levels (a table's lowest and highest value), V. A driver that idles high (source.low, its
+    /// initial level, above source.high) still has its low level below its high one.
+    /// </summary>
     public static (double Low, double High) SourceLevels(SourceSpec src) =>
-        src.Waveform == WaveformKind.Table && src.TableVolts.Length > 0 ? (src.TableVolts.Min(), src.TableVolts.Max()) : (src.Low, src.High);
+        src.Waveform == WaveformKind.Table && src.TableVolts.Length > 0 ? (src.TableVolts.Min(), src.TableVolts.Max())
+            : (Math.Min(src.Low, src.High), Math.Max(src.Low, src.High));
 
     /// <summary>
     /// The source's edges within the record: crossings of its mid level by the open-circuit waveform sampled on the output
@@ -75,7 +79,9 @@ public static class RunVerdicts
                 bool rising = sd > 0;
                 // Interpolate between the last sample on the old side and this one.
                 double t = time[k - 1] + (mid - prev) / (v - prev) * (time[k] - time[k - 1]);
-                double ramp = src.Waveform == WaveformKind.Table ? 0 : 1.25 * (rising ? src.Rise : (src.Fall > 0 ? src.Fall : src.Rise));
+                // The rise is the ramp from source.low to source.high, whichever way that goes in volts.
+                bool towardHigh = rising == (src.High >= src.Low);
+                double ramp = src.Waveform == WaveformKind.Table ? 0 : 1.25 * (towardHigh ? src.Rise : (src.Fall > 0 ? src.Fall : src.Rise));
                 list.Add((rising, t, t - ramp / 2));
             }
             if (sd != 0) side = sd;

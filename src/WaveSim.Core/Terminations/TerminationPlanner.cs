@@ -60,7 +60,7 @@ public static class TerminationPlanner
 
     static TerminationDesign Thevenin(Scenario s, double z0, TerminationOptions o)
     {
-        double vcc = s.Source.High;
+        double vcc = Math.Max(s.Source.Low, s.Source.High);   // the supply is the higher level, also for a driver idling high
         double vt = o.TheveninLevelV ?? 0.5 * (s.Source.Low + s.Source.High);
         if (!(vcc > 0) || !(vt > 0 && vt < vcc))
         {
