@@ -63,6 +63,34 @@ public static class LumpedResponse
     public static StepResponse End(bool capacitive, double tau) =>
         capacitive ? new StepResponse(1, [(-2, -1 / tau)]) : new StepResponse(-1, [(2, -1 / tau)]);
 
+    /// <summary>
+    /// <paramref name="response"/> seen through a first-order low-pass of time constant <paramref name="tauF"/>: the edge
+    /// slowed by the parts and loss it passed on its way. Each term c·e^(pt) (the constant with p = 0) becomes
+    /// c/(1 + p·τf)·(e^(pt) − e^(−t/τf)), its convolution with e^(−t/τf)/τf.
+    /// </summary>
+    /// <param name="response">The step response.</param>
+    /// <param name="tauF">τf, s; zero or less returns the response unchanged.</param>
+    /// <returns>The filtered step response.</returns>
+    public static StepResponse Filtered(StepResponse response, double tauF)
+    {
+        ArgumentNullException.ThrowIfNull(response);
+        if (!(tauF > 0)) return response;
+        Complex pf = -1 / tauF;
+        var terms = new List<(Complex, Complex)>();
+        Complex atFilter = -response.Constant;
+        foreach (var (c, p0) in response.Terms)
+        {
+            Complex p = Near(p0, pf) ? p0 * (1 + 1e-6) : p0;   // equal poles: step off them
+            Complex k = c / (1 + p * tauF);
+            terms.Add((k, p));
+            atFilter -= k;
+        }
+        terms.Add((atFilter, pf));
+        return new StepResponse(response.Constant, terms);
+    }
+
+    static bool Near(Complex p, Complex q) => Complex.Abs(p - q) < 1e-6 * Complex.Abs(q);
+
     /// <summary>The layer values a reflectometer records for <paramref name="response"/> arriving at <paramref name="arrivalS"/>.</summary>
     /// <param name="response">The step response.</param>
     /// <param name="arrivalS">Round-trip time at which the edge's 50 % point reaches the part, s.</param>

@@ -5,10 +5,12 @@ namespace WaveSim.Core.Measurements;
 /// τ = Z·C) or from +1 to −1 (an L to ground, τ = L/Z), instead of peeling it into segments.
 /// </summary>
 /// <remarks>
-/// <para>Models: <see cref="LumpedResponse.End"/>. The last change of level in the trace that does not come back (found as
-/// <see cref="LumpedDiscontinuities"/> finds an excursion, but one that never returns) is where the end's reflection starts;
-/// from there to the end of the record the trace is fitted, as (ρ − ρ_b)/(1 − ρ_b²) on the line of the level ρ_b before it,
-/// by both models with the arrival time and τ free (<see cref="BoundedLeastSquares"/>).</para>
+/// <para>Models: <see cref="LumpedResponse.End"/>. The end's reflection starts at a change of level (a departure from a
+/// settled level, found as <see cref="LumpedDiscontinuities"/> finds one, outside the lumped excursions); the changes are
+/// tried from the last back (a later one can be a ghost inside the end's own approach, up to eight of them). From the change
+/// to the end of the record the trace is fitted, as (ρ − ρ_b)/(1 − ρ_b²) on the line of the level ρ_b before it,
+/// by both models with the arrival time, τ and a first-order low-pass τf on the edge (0 to four ramp lengths: the parts and
+/// loss the step passed on its way have slowed it) free (<see cref="BoundedLeastSquares"/>).</para>
 /// <para>Acceptance (common practice, no source): τ at least half the edge's 10-90 % rise time (a shorter one cannot be told
 /// from an open or a short at this edge, which is what the profile then reports), and an RMS residual of at most 2 % of the
 /// swing of 2 plus twice the noise.</para>
@@ -17,7 +19,8 @@ internal static class ReactiveEndFit
 {
     /// <summary>A recognised end.</summary>
     /// <param name="Capacitive">C to ground (true) or L to ground (false).</param>
-    /// <param name="ArrivalS">Round-trip time of the end, s.</param>
+    /// <param name="ArrivalS">Round-trip time of the end, s, including the delay τf of the fitted low-pass (the delay of the
+    /// parts before the end, which the caller removes).</param>
     /// <param name="TauS">Fitted τ, s.</param>
     /// <param name="LineOhms">Impedance of the line at the end, Ω.</param>
     /// <param name="FirstLayer">First layer that belongs to the end's reflection.</param>
@@ -39,9 +42,16 @@ internal static class ReactiveEndFit
     internal static Outcome? Find(double[] rho, double dt, double ramp, double rise, double z0, double threshold, double sigma,
         IReadOnlyList<LumpedDiscontinuity> lumped)
     {
-        int start = LastLevelChange(rho, threshold, lumped);
-        if (start < 0) return null;
-        double baseline = (rho[start - 1] + rho[start - 2] + rho[start - 3]) / 3;
+        // Latest first: a later change may be a ghost (the end's reflection bounced off a part before it) inside the end's
+        // own approach; if that one does not fit, the one before it may.
+        foreach (var (start, baseline) in Enumerable.Reverse(LevelChanges(rho, threshold, lumped)).Take(8))
+            if (FitFrom(rho, start, baseline, dt, ramp, rise, z0, sigma) is { } found)
+                return found;
+        return null;
+    }
+
+    static Outcome? FitFrom(double[] rho, int start, double baseline, double dt, double ramp, double rise, double z0, double sigma)
+    {
         if (Math.Abs(baseline) >= 0.9) return null;
         double scale = 1 - baseline * baseline;
         int lo = Math.Max(0, start - 3), m = rho.Length - lo;
@@ -49,7 +59,9 @@ internal static class ReactiveEndFit
         var y = new double[m];
         for (int i = 0; i < m; i++) y[i] = (rho[lo + i] - baseline) / scale;
         double tStart = start * dt, span = m * dt;
-        double[] lower = [Math.Max(0, tStart - 2 * ramp - dt), ramp / 20], upper = [tStart + ramp, 100 * span];
+        // The edge reaching the end has passed every part before it and is slower than the instrument's: a first-order
+        // low-pass τf on top of the instrument's ramp stands for that slowing, and is fitted too.
+        double[] lower = [Math.Max(0, tStart - 3 * ramp - dt), ramp / 20, 0], upper = [tStart + 4 * ramp, 100 * span, 4 * ramp];
 
         Outcome? best = null;
         double bestRms = double.PositiveInfinity;
@@ -57,14 +69,14 @@ internal static class ReactiveEndFit
         {
             double[] Residual(double[] x)
             {
-                double[] model = LumpedResponse.Layers(LumpedResponse.End(capacitive, x[1]), x[0], ramp, dt, lo, m);
+                double[] model = LumpedResponse.Layers(LumpedResponse.Filtered(LumpedResponse.End(capacitive, x[1]), x[2]), x[0], ramp, dt, lo, m);
                 for (int i = 0; i < m; i++) model[i] -= y[i];
                 return model;
             }
             foreach (double tau0 in new[] { ramp, 4 * ramp, span / 4, span })
-            foreach (double ts0 in new[] { tStart - ramp / 2, tStart })
+            foreach (double ts0 in new[] { tStart - ramp / 2, tStart, tStart + ramp })
             {
-                double[] x0 = [Math.Clamp(ts0, lower[0] + 1e-3 * ramp, upper[0] - 1e-3 * ramp), Math.Clamp(tau0, 2 * lower[1], upper[1] / 2)];
+                double[] x0 = [Math.Clamp(ts0, lower[0] + 1e-3 * ramp, upper[0] - 1e-3 * ramp), Math.Clamp(tau0, 2 * lower[1], upper[1] / 2), ramp / 4];
                 FitResult f;
                 try { f = BoundedLeastSquares.Fit(Residual, x0, lower, upper, 300); }
                 catch (NumericalException) { continue; }
@@ -72,7 +84,8 @@ internal static class ReactiveEndFit
                 {
                     bestRms = f.RmsResidual;
                     double z = StepReflectometry.ImpedanceOf(baseline, z0);
-                    best = new Outcome(capacitive, f.Values[0], f.Values[1], z, Math.Max(1, (int)Math.Floor((f.Values[0] - ramp / 2) / dt)));
+                    // The low-pass delays the edge by τf, which the caller takes off again for the parts found before the end.
+                    best = new Outcome(capacitive, f.Values[0] + f.Values[2], f.Values[1], z, Math.Max(1, (int)Math.Floor((f.Values[0] - ramp / 2) / dt)));
                 }
             }
         }
@@ -80,20 +93,21 @@ internal static class ReactiveEndFit
         return best;
     }
 
-    /// <summary>Start of the last departure from a settled level that never returns to it, outside the lumped excursions; -1 if none.</summary>
-    static int LastLevelChange(double[] rho, double threshold, IReadOnlyList<LumpedDiscontinuity> lumped)
+    /// <summary>Every departure from a settled level outside the lumped excursions: its first layer and that level.</summary>
+    static List<(int Start, double Baseline)> LevelChanges(double[] rho, double threshold, IReadOnlyList<LumpedDiscontinuity> lumped)
     {
-        double quiet = threshold / 2;
-        int last = -1;
-        for (int i = 3; i < rho.Length; i++)
+        var found = new List<(int, double)>();
+        for (int i = 3 + LumpedDiscontinuities.Gap; i < rho.Length; i++)
         {
-            double baseline = (rho[i - 1] + rho[i - 2] + rho[i - 3]) / 3;
-            bool settled = Math.Abs(rho[i - 1] - baseline) <= quiet && Math.Abs(rho[i - 2] - baseline) <= quiet
-                                                                     && Math.Abs(rho[i - 3] - baseline) <= quiet;
-            if (!settled || Math.Abs(rho[i] - baseline) <= threshold || lumped.Any(e => i >= e.StartIndex - 3 && i <= e.EndIndex + 3))
+            // No gap here: with one, a slow exponential approach (a slope between a third and a half of the quiet band per
+            // layer) would pass for a departure. The baseline is then taken from before the onset's first two layers.
+            if (!LumpedDiscontinuities.Departs(rho, i, threshold, out _, gap: 0)
+                || lumped.Any(e => i >= e.StartIndex - 3 && i <= e.EndIndex + 3))
                 continue;
-            last = i;
+            double baseline = (rho[i - 3] + rho[i - 4] + rho[i - 5]) / 3;
+            int onset = LumpedDiscontinuities.Onset(rho, i, baseline, threshold / 2);
+            if (found.Count == 0 || found[^1].Item1 != onset) found.Add((onset, baseline));
         }
-        return last;
+        return found;
     }
 }

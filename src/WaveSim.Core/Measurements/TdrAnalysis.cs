@@ -132,7 +132,7 @@ public static class TdrAnalysis
         double velocity, double threshold, double sigma, int maxWidth, double ramp, double rise)
     {
         var kept = new List<(LumpedDiscontinuity, LumpedFit.Outcome)>();
-        LumpedFit.Outcome FitOf(LumpedDiscontinuity e) => LumpedFit.Fit(rho, e.StartIndex, e.EndIndex, Baseline(rho, e.StartIndex), dt, ramp, threshold);
+        LumpedFit.Outcome FitOf(LumpedDiscontinuity e) => LumpedFit.Fit(rho, e.StartIndex, e.EndIndex, e.BaselineRho, dt, ramp, threshold);
         foreach (var e in LumpedDiscontinuities.Find(rho[..stop], dt, z0, velocity, threshold, maxWidth))
             kept.Add((e, FitOf(e)));
         int wide = Math.Max(maxWidth, (int)Math.Ceiling(60 * rise / dt));
@@ -140,7 +140,7 @@ public static class TdrAnalysis
         {
             if (e.EndIndex - e.StartIndex < maxWidth || kept.Any(k => e.StartIndex <= k.Item1.EndIndex + 3 && k.Item1.StartIndex <= e.EndIndex + 3))
                 continue;
-            double b = Baseline(rho, e.StartIndex), peak = 0;
+            double b = e.BaselineRho, peak = 0;
             for (int k = e.StartIndex; k <= e.EndIndex; k++) peak = Math.Max(peak, Math.Abs(rho[k] - b));
             var fit = FitOf(e);
             if (fit.Rms <= 0.1 * peak + 2 * sigma)
@@ -148,9 +148,6 @@ public static class TdrAnalysis
         }
         return kept.OrderBy(k => k.Item1.StartIndex).ToList();
     }
-
-    static double Baseline(double[] rho, int start) =>
-        start >= 3 ? (rho[start - 1] + rho[start - 2] + rho[start - 3]) / 3 : 0;
 
     /// <summary>Layer peeling up to an open or short end (or the first layer where the recursion breaks down).</summary>
     static (double[] Ohms, TdrEnd End, int Stop) PeelUntilEnd(double[] rho, double z0)
@@ -208,7 +205,7 @@ public static class TdrAnalysis
 
     static IEnumerable<TdrLumped> Lumped(LumpedDiscontinuity e, LumpedFit.Outcome fit, double[] rho, double dt, double z0, double velocity)
     {
-        double baseline = Baseline(rho, e.StartIndex);
+        double baseline = e.BaselineRho;
         double zLocal = StepReflectometry.ImpedanceOf(baseline, z0);
         if (fit.Pair)
         {
