@@ -124,24 +124,36 @@ public static class TdrAnalysis
     }
 
     /// <summary>
-    /// Lumped excursions before <paramref name="stop"/>, each with its fit: those that return within 12 rise times (short
-    /// enough to be lumped whatever their shape, as before), then longer ones up to 60 rise times that the lumped models fit
-    /// closely (RMS residual at most 10 % of the excursion's peak plus twice the noise), which a section of line does not.
+    /// Lumped excursions before <paramref name="stop"/> that peak at twice the threshold or more, each with its fit: those that
+    /// return within 12 rise times (short enough to be lumped whatever their shape, as before), then longer ones up to 60 rise
+    /// times that the lumped models fit closely (RMS residual at most 10 % of the excursion's peak plus twice the noise), which a
+    /// section of line does not.
     /// </summary>
     static List<(LumpedDiscontinuity Found, LumpedFit.Outcome Fit)> FindExcursions(double[] rho, int stop, double dt, double z0,
         double velocity, double threshold, double sigma, int maxWidth, double ramp, double rise)
     {
         var kept = new List<(LumpedDiscontinuity, LumpedFit.Outcome)>();
         LumpedFit.Outcome FitOf(LumpedDiscontinuity e) => LumpedFit.Fit(rho, e.StartIndex, e.EndIndex, e.BaselineRho, dt, ramp, threshold);
+        double Peak(LumpedDiscontinuity e)
+        {
+            double peak = 0;
+            for (int k = e.StartIndex; k <= e.EndIndex; k++) peak = Math.Max(peak, Math.Abs(rho[k] - e.BaselineRho));
+            return peak;
+        }
+        // An excursion must peak at twice the threshold: fainter ones are as likely ghosts of the stronger reflections around
+        // them (a part's reflection bounced between it and a step), which the layer peeling removes from the profile but which
+        // remain in ρ.
         foreach (var e in LumpedDiscontinuities.Find(rho[..stop], dt, z0, velocity, threshold, maxWidth))
-            kept.Add((e, FitOf(e)));
+            if (Peak(e) >= 2 * threshold)
+                kept.Add((e, FitOf(e)));
         int wide = Math.Max(maxWidth, (int)Math.Ceiling(60 * rise / dt));
         foreach (var e in LumpedDiscontinuities.Find(rho[..stop], dt, z0, velocity, threshold, wide))
         {
             if (e.EndIndex - e.StartIndex < maxWidth || kept.Any(k => e.StartIndex <= k.Item1.EndIndex + 3 && k.Item1.StartIndex <= e.EndIndex + 3))
                 continue;
-            double b = e.BaselineRho, peak = 0;
-            for (int k = e.StartIndex; k <= e.EndIndex; k++) peak = Math.Max(peak, Math.Abs(rho[k] - b));
+            double peak = Peak(e);
+            if (peak < 2 * threshold)
+                continue;
             var fit = FitOf(e);
             if (fit.Rms <= 0.1 * peak + 2 * sigma)
                 kept.Add((e, fit));
