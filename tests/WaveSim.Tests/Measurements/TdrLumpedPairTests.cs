@@ -18,6 +18,45 @@ public class TdrLumpedPairTests
     static void Near(double truth, double value, double fraction, string what) =>
         Assert.True(Math.Abs(value - truth) <= fraction * truth, $"{what}: {value:G4} against {truth:G4}");
 
+    [Fact]
+    public void The_pair_model_matches_the_circuit_and_its_moments_give_L_and_C_in_closed_form()
+    {
+        // tdr-lumped.md: for series L then shunt C on a matched line, with a = L/Z and b = C·Z, ∫ρ dt = (a − b)/2 and
+        // ∫t·ρ dt = (a² − b² − 2ab)/4 about the arrival; so with d = 2·M0, a + b = d + sqrt(2d² − 8·M1). 12 nH, 2.5 pF,
+        // 75 Ω: a = 160 ps, b = 187.5 ps, M0 = −13.75 ps, M1 = −17 389 ps², a + b = 347.5 ps.
+        double a = 12e-9 / Z, b = 2.5e-12 * Z, rise = 100e-12, dt = 10e-12;
+        var trace = Make(Part.SeriesLThenShuntC, Z, l: 12e-9, c: 2.5e-12, atM: 0.3, V, rise, after: 4e-9);
+        double arrival = trace.ReferenceTimeS + 2 * 0.3 / V;
+        double m0 = 0, m1 = 0;
+        for (int k = 1; k < trace.Time.Length; k++)
+        {
+            double t = trace.Time[k], h = t - trace.Time[k - 1];
+            double rho = trace.Volts[k] - trace.Incident(t);
+            m0 += rho * h;
+            m1 += rho * (t - arrival) * h;
+        }
+        Assert.Equal((a - b) / 2, m0, 0.2e-12);
+        Assert.Equal((a * a - b * b - 2 * a * b) / 4, m1, 0.01 * Math.Abs(m1));
+        double d = 2 * m0, sum = d + Math.Sqrt(2 * d * d - 8 * m1);
+        Near(a, (sum + d) / 2, 0.02, "a from the moments");
+        Near(b, (sum - d) / 2, 0.02, "b from the moments");
+
+        // The closed-form model the analysis fits (LumpedResponse) against the integrated circuit, layer by layer.
+        int first = (int)Math.Floor((arrival - trace.ReferenceTimeS - 2 * rise) / dt), count = 200;
+        double[] model = LumpedResponse.Layers(LumpedResponse.Pair(a, b, seriesFirst: true), arrival - trace.ReferenceTimeS, trace.RampS, dt, first, count);
+        for (int i = 0; i < count; i++)
+        {
+            double centre = trace.ReferenceTimeS + (first + i) * dt, mean = 0;
+            for (int j = 0; j < 10; j++)
+            {
+                double t = centre - dt / 2 + (j + 0.5) * dt / 10;
+                int k = (int)Math.Round(t / 1e-12);
+                mean += (trace.Volts[k] - trace.Incident(trace.Time[k])) / 10;
+            }
+            Assert.True(Math.Abs(model[i] - mean) < 0.005, $"layer {first + i}: model {model[i]:G4}, circuit {mean:G4}");
+        }
+    }
+
     [Theory]
     [InlineData(200e-12, 0.0)]
     [InlineData(200e-12, 0.001)]
