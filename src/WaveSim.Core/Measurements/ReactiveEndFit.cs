@@ -17,6 +17,9 @@ namespace WaveSim.Core.Measurements;
 /// </remarks>
 internal static class ReactiveEndFit
 {
+    /// <summary>Longest tail fitted, layers: a reactive end's approach is the last thing in a record, never most of it.</summary>
+    const int MaxLayers = 2000;
+
     /// <summary>A recognised end.</summary>
     /// <param name="Capacitive">C to ground (true) or L to ground (false).</param>
     /// <param name="ArrivalS">Round-trip time of the end, s, including the delay τf of the fitted low-pass (the delay of the
@@ -55,7 +58,7 @@ internal static class ReactiveEndFit
         if (Math.Abs(baseline) >= 0.9) return null;
         double scale = 1 - baseline * baseline;
         int lo = Math.Max(0, start - 3), m = rho.Length - lo;
-        if (m < 6) return null;
+        if (m < 6 || m > MaxLayers) return null;   // a tail that long is not one end's approach (and would cost)
         var y = new double[m];
         for (int i = 0; i < m; i++) y[i] = (rho[lo + i] - baseline) / scale;
         double tStart = start * dt, span = m * dt;

@@ -15,10 +15,15 @@ namespace WaveSim.Core.Measurements;
 /// <para>Profile: <see cref="LayerPeeling.Profile"/>; the naive Z0ref(1+ρ)/(1-ρ) alongside. The profile stops where the
 /// impedance passes 10 × or 1/10 of the reference (an open or a short end; beyond, the recursion only amplifies noise).</para>
 /// <para>Lumped elements: <see cref="LumpedDiscontinuities.Find"/> on ρ, with a threshold of 1 % or six times the noise,
-/// whichever is larger, and excursions up to 12 rise times long; shorter sections of line are read as lumped, which is what
-/// they are electrically (a short high-impedance section acts as a series L, a low one as a shunt C). The position is the
-/// centroid of the excursion less the element's time constant τ (Z0·C/2 or L/(2·Z0)): the centroid of the response
-/// −exp(−t/τ) lies τ after the arrival, and the box and ramp are centred.</para>
+/// whichever is larger; excursions up to 12 rise times long are lumped whatever their shape (a short section of line is,
+/// electrically), longer ones up to 60 rise times only when a lumped model fits them closely; every excursion must peak at
+/// twice the threshold. Each is fitted by <see cref="LumpedFit"/> as a series L, a shunt C or a pair of both at one place;
+/// a pair whose parts are both resolvable is reported as both, at the fitted arrival (an L-C doublet's area alone is the
+/// difference of the parts). A single part keeps its value from the area, and its position is the centroid of the
+/// excursion less its time constant τ (Z0·C/2 or L/(2·Z0)): the centroid of the response −exp(−t/τ) lies τ after the
+/// arrival, and the box and ramp are centred.</para>
+/// <para>End: <see cref="ReactiveEndFit"/> recognises a capacitive or inductive end by its exponential approach to ±1 and
+/// reports it as one load; the profile and the segments stop where its reflection starts. Rules: docs/tdr.md.</para>
 /// <para>Segments: <see cref="ImpedanceSegments.Group"/> with a tolerance of 2.5 % of Z0ref; then layers inside lumped
 /// excursions and pieces shorter than v·rise (the edge's spatial extent, out and back) are given to their neighbours, the
 /// neighbours joined when they agree, and each segment's impedance is the median of its layers (robust to the few
