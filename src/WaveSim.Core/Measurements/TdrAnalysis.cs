@@ -226,7 +226,8 @@ public static class TdrAnalysis
         double zLocal = StepReflectometry.ImpedanceOf(baseline, z0);
         if (fit.Pair)
         {
-            // Both parts from the fit; the place is the fitted arrival at the pair (about where the doublet crosses zero).
+            // Both parts from the fit, placed at the fitted arrival: the doublet's zero crossing lies later by a time set by L and C
+            // (123 ps for 12 nH and 2.5 pF on 75 ohm), not by the edge.
             double atPair = Math.Max(0, velocity * fit.ArrivalS / 2);
             var l = new TdrLumped(LumpedKind.SeriesInductance, atPair, fit.A * zLocal, e.AreaS, fit.A / 2, true);
             var c = new TdrLumped(LumpedKind.ShuntCapacitance, atPair, fit.B / zLocal, e.AreaS, fit.B / 2, true);
