@@ -85,7 +85,7 @@ public class TdrLumpedPairTests
     {
         // Γ(s) = s(a − b − ab·s)/(ab·s² + (a + b)s + 2) (tdr-lumped.md): the dip comes first.
         var trace = Make(Part.ShuntCThenSeriesL, 50, l: 5e-9, c: 1.5e-12, atM: 0.3, 2e8, 100e-12, after: 3e-9);
-        var r = TdrAnalysis.Analyse(trace with { ReferenceOhms = 50 }, 2e8);
+        var r = TdrAnalysis.Analyse(trace, 2e8);
 
         Assert.Equal(2, r.Lumped.Count);
         Assert.Equal(LumpedKind.ShuntCapacitance, r.Lumped[0].Kind);
@@ -132,7 +132,7 @@ public class TdrLumpedPairTests
     {
         // 1 pF on 50 Ω: area −Z0·C/2 = −25 ps (published-checks.md §11); no second part may be invented beside it.
         var trace = Make(Part.ShuntC, 50, l: 0, c: 1e-12, atM: 0.1, 2e8, 35e-12, after: 2e-9);
-        var r = TdrAnalysis.Analyse(trace with { ReferenceOhms = 50 }, 2e8);
+        var r = TdrAnalysis.Analyse(trace, 2e8);
 
         var c = Assert.Single(r.Lumped);
         Assert.False(c.Paired);
