@@ -9,8 +9,10 @@ namespace WaveSim.Core.Measurements;
 /// settled level, found as <see cref="LumpedDiscontinuities"/> finds one, outside the lumped excursions); the changes are
 /// tried from the last back (a later one can be a ghost inside the end's own approach, up to eight of them). From the change
 /// to the end of the record the trace is fitted, as (ρ − ρ_b)/(1 − ρ_b²) on the line of the level ρ_b before it,
-/// by both models with the arrival time, τ and a first-order low-pass τf on the edge (0 to four ramp lengths: the parts and
-/// loss the step passed on its way have slowed it) free (<see cref="BoundedLeastSquares"/>).</para>
+/// by both models with the arrival time and τ free, and a first-order low-pass τf on the edge (the parts the step passed on
+/// its way have slowed it): first fixed at their round-trip delay 2·Στ, which keeps the delay and so the position right to
+/// first order; if that does not fit, free between 0 and four ramp lengths (loss, or parts too faint to be found)
+/// (<see cref="BoundedLeastSquares"/>).</para>
 /// <para>Acceptance (common practice, no source): τ at least half the edge's 10-90 % rise time (a shorter one cannot be told
 /// from an open or a short at this edge, which is what the profile then reports), and an RMS residual of at most 2 % of the
 /// swing of 2 plus twice the noise.</para>
@@ -42,18 +44,27 @@ internal static class ReactiveEndFit
     /// <param name="threshold">Detection threshold in ρ.</param>
     /// <param name="sigma">Noise of one layer's ρ.</param>
     /// <param name="lumped">Excursions taken as lumped parts (a start inside one is not the end).</param>
+    /// <param name="delays">The one-way delay τ of the parts of each of <paramref name="lumped"/>, s.</param>
     internal static Outcome? Find(double[] rho, double dt, double ramp, double rise, double z0, double threshold, double sigma,
-        IReadOnlyList<LumpedDiscontinuity> lumped)
+        IReadOnlyList<LumpedDiscontinuity> lumped, IReadOnlyList<double> delays)
     {
         // Latest first: a later change may be a ghost (the end's reflection bounced off a part before it) inside the end's
         // own approach; if that one does not fit, the one before it may.
         foreach (var (start, baseline) in Enumerable.Reverse(LevelChanges(rho, threshold, lumped)).Take(8))
-            if (FitFrom(rho, start, baseline, dt, ramp, rise, z0, sigma) is { } found)
+        {
+            // The low-pass first fixed at the round-trip delay of the parts before (its delay is τf: the position comes out
+            // right to first order), then free (loss, or parts too faint to be found) if that does not fit.
+            double passed = 2 * lumped.Select((e, i) => e.EndIndex < start ? delays[i] : 0).Sum();
+            var found = FitFrom(rho, start, baseline, dt, ramp, rise, z0, sigma, passed)
+                        ?? FitFrom(rho, start, baseline, dt, ramp, rise, z0, sigma, null);
+            if (found is not null)
                 return found;
+        }
         return null;
     }
 
-    static Outcome? FitFrom(double[] rho, int start, double baseline, double dt, double ramp, double rise, double z0, double sigma)
+    static Outcome? FitFrom(double[] rho, int start, double baseline, double dt, double ramp, double rise, double z0, double sigma,
+        double? tauF)
     {
         if (Math.Abs(baseline) >= 0.9) return null;
         double scale = 1 - baseline * baseline;
@@ -65,6 +76,11 @@ internal static class ReactiveEndFit
         // The edge reaching the end has passed every part before it and is slower than the instrument's: a first-order
         // low-pass τf on top of the instrument's ramp stands for that slowing, and is fitted too.
         double[] lower = [Math.Max(0, tStart - 3 * ramp - dt), ramp / 20, 0], upper = [tStart + 4 * ramp, 100 * span, 4 * ramp];
+        if (tauF is not null)
+        {
+            lower = lower[..2];
+            upper = upper[..2];
+        }
 
         Outcome? best = null;
         double bestRms = double.PositiveInfinity;
@@ -72,7 +88,7 @@ internal static class ReactiveEndFit
         {
             double[] Residual(double[] x)
             {
-                double[] model = LumpedResponse.Layers(LumpedResponse.Filtered(LumpedResponse.End(capacitive, x[1]), x[2]), x[0], ramp, dt, lo, m);
+                double[] model = LumpedResponse.Layers(LumpedResponse.Filtered(LumpedResponse.End(capacitive, x[1]), tauF ?? x[2]), x[0], ramp, dt, lo, m);
                 for (int i = 0; i < m; i++) model[i] -= y[i];
                 return model;
             }
@@ -80,6 +96,7 @@ internal static class ReactiveEndFit
             foreach (double ts0 in new[] { tStart - ramp / 2, tStart, tStart + ramp })
             {
                 double[] x0 = [Math.Clamp(ts0, lower[0] + 1e-3 * ramp, upper[0] - 1e-3 * ramp), Math.Clamp(tau0, 2 * lower[1], upper[1] / 2), ramp / 4];
+                if (tauF is not null) x0 = x0[..2];
                 FitResult f;
                 try { f = BoundedLeastSquares.Fit(Residual, x0, lower, upper, 300); }
                 catch (NumericalException) { continue; }
@@ -88,7 +105,7 @@ internal static class ReactiveEndFit
                     bestRms = f.RmsResidual;
                     double z = StepReflectometry.ImpedanceOf(baseline, z0);
                     // The low-pass delays the edge by τf, which the caller takes off again for the parts found before the end.
-                    best = new Outcome(capacitive, f.Values[0] + f.Values[2], f.Values[1], z, Math.Max(1, (int)Math.Floor((f.Values[0] - ramp / 2) / dt)));
+                    best = new Outcome(capacitive, f.Values[0] + (tauF ?? f.Values[2]), f.Values[1], z, Math.Max(1, Math.Min(start, (int)Math.Floor((f.Values[0] - ramp / 2) / dt))));
                 }
             }
         }
@@ -100,16 +117,19 @@ internal static class ReactiveEndFit
     static List<(int Start, double Baseline)> LevelChanges(double[] rho, double threshold, IReadOnlyList<LumpedDiscontinuity> lumped)
     {
         var found = new List<(int, double)>();
+        int lastTested = int.MinValue;
         for (int i = 3 + LumpedDiscontinuities.Gap; i < rho.Length; i++)
         {
-            // No gap here: with one, a slow exponential approach (a slope between a third and a half of the quiet band per
-            // layer) would pass for a departure. The baseline is then taken from before the onset's first two layers.
-            if (!LumpedDiscontinuities.Departs(rho, i, threshold, out _, gap: 0)
+            // With the baseline two layers back (as for lumped parts), an edge slowed by the parts it passed is still caught
+            // at its onset. A slow approach can pass for a run of departures too; a run counts once, at its first layer, and
+            // the fit rejects it.
+            if (!LumpedDiscontinuities.Departs(rho, i, threshold, out double baseline)
                 || lumped.Any(e => i >= e.StartIndex - 3 && i <= e.EndIndex + 3))
                 continue;
-            double baseline = (rho[i - 3] + rho[i - 4] + rho[i - 5]) / 3;
-            int onset = LumpedDiscontinuities.Onset(rho, i, baseline, threshold / 2);
-            if (found.Count == 0 || found[^1].Item1 != onset) found.Add((onset, baseline));
+            bool continues = i <= lastTested + 3;
+            lastTested = i;
+            if (continues) continue;
+            found.Add((LumpedDiscontinuities.Onset(rho, i, baseline, threshold / 2), baseline));
         }
         return found;
     }

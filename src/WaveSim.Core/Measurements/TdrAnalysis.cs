@@ -104,7 +104,8 @@ public static class TdrAnalysis
         // A capacitive or inductive end: its slow approach to ±1 is one load, not a chain of segments.
         double? endValue = null;
         double endArrival = stop * dt;
-        var reactive = ReactiveEndFit.Find(rho, dt, trace.RampS, trace.RiseS, z0, threshold, sigma, excursions.Select(e => e.Found).ToList());
+        var reactive = ReactiveEndFit.Find(rho, dt, trace.RampS, trace.RiseS, z0, threshold, sigma, excursions.Select(e => e.Found).ToList(),
+            excursions.Select(e => Lumped(e.Found, e.Fit, rho, dt, z0, velocityMps).Sum(l => l.TauS)).ToList());
         if (reactive is not null)
         {
             end = reactive.Capacitive ? TdrEnd.Capacitive : TdrEnd.Inductive;

@@ -115,6 +115,34 @@ public class TdrLumpedPairTests
     }
 
     [Fact]
+    public void Behind_the_connector_the_22_pF_end_is_still_recognised_on_the_solvers_trace()
+    {
+        // The truth is the scenario's own values. The edge reaching the end has passed the connector and is slowed by it
+        // (each part delays it by its τ each way), which the end fit takes up with its low-pass.
+        var s = TestScenarios.Parse(@"
+source: { waveform: step, high: 1 V, rise: 100 ps }
+line:
+  - segment: { length: 2.5 m, z0: 75 ohm, velocity: 0.66 c }
+  - series: { l: 12 nH }
+  - shunt: { c: 2.5 pF }
+  - segment: { length: 2.5 m, z0: 75 ohm, velocity: 0.66 c }
+load: { c: 22 pF }
+simulation: { duration: 60 ns, resolution: 10 }
+");
+        var r = TdrAnalysis.Analyse(Reflectometer.Simulate(s, 100e-12, Z), V);
+
+        double riseDistance = V * 100e-12 / 2;
+        Assert.Equal(2, r.Lumped.Count);
+        Near(12e-9, r.Lumped[0].Value, 0.10, "L");
+        Near(2.5e-12, r.Lumped[1].Value, 0.10, "C");
+        Assert.All(r.Lumped, p => Assert.InRange(p.AtM, 2.5 - riseDistance, 2.5 + riseDistance));
+        Assert.Equal(TdrEnd.Capacitive, r.End);
+        Near(22e-12, r.EndValue ?? double.NaN, 0.10, "end C");
+        Assert.InRange(r.EndM, 5 - riseDistance, 5 + riseDistance);
+        Assert.InRange(Assert.Single(r.Segments).Z0Ohm, Z - 1, Z + 1);
+    }
+
+    [Fact]
     public void A_40_nH_far_end_to_ground_is_an_inductive_end()
     {
         // An L at the end: ρ = −1 + 2·exp(−t/τ), τ = L/Z = 533 ps (tdr-lumped.md, reactive ends).
