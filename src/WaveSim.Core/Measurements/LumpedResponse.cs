@@ -46,10 +46,7 @@ public static class LumpedResponse
         if (b <= tiny) return new StepResponse(0, [(1, -2 / a)]);
         if (a <= tiny) return new StepResponse(0, [(-1, -2 / b)]);
         double ab = a * b, sum = a + b;
-        if (Math.Abs(sum * sum - 8 * ab) < 1e-9 * sum * sum) b *= 1 + 1e-6;   // a double pole: step off it
-        ab = a * b;
-        sum = a + b;
-        Complex root = Complex.Sqrt(sum * sum - 8 * ab);
+        Complex root = Complex.Sqrt(Discriminant(a, b));
         Complex p1 = (-sum + root) / (2 * ab), p2 = (-sum - root) / (2 * ab);
         double n0 = a - b, n1 = seriesFirst ? ab : -ab;
         (Complex, Complex) Term(Complex p) => ((n0 + n1 * p) / (2 * ab * p + sum), p);
@@ -65,31 +62,72 @@ public static class LumpedResponse
 
     /// <summary>
     /// <paramref name="response"/> seen through a first-order low-pass of time constant <paramref name="tauF"/>: the edge
-    /// slowed by the parts and loss it passed on its way. Each term c·e^(pt) (the constant with p = 0) becomes
-    /// c/(1 + p·τf)·(e^(pt) − e^(−t/τf)), its convolution with e^(−t/τf)/τf.
+    /// slowed by the parts and loss it passed on its way (see <see cref="Filtered(StepResponse, Complex)"/>).
     /// </summary>
     /// <param name="response">The step response.</param>
     /// <param name="tauF">τf, s; zero or less returns the response unchanged.</param>
     /// <returns>The filtered step response.</returns>
-    public static StepResponse Filtered(StepResponse response, double tauF)
+    public static StepResponse Filtered(StepResponse response, double tauF) =>
+        tauF > 0 ? Filtered(response, new Complex(-1 / tauF, 0)) : response;
+
+    /// <summary>
+    /// <paramref name="response"/> seen through the unit-gain section −q/(s − q). Each term c·e^(pt) (the constant with
+    /// p = 0) becomes k·(e^(pt) − e^(qt)) with k = c·q/(q − p), its convolution with the section's impulse response −q·e^(qt).
+    /// A chain of such sections with conjugate poles is the transmission of the parts a step passed (<see cref="TransmissionPoles"/>).
+    /// </summary>
+    /// <param name="response">The step response.</param>
+    /// <param name="pole">q, 1/s, with a negative real part.</param>
+    /// <returns>The filtered step response.</returns>
+    public static StepResponse Filtered(StepResponse response, Complex pole)
     {
         ArgumentNullException.ThrowIfNull(response);
-        if (!(tauF > 0)) return response;
-        Complex pf = -1 / tauF;
         var terms = new List<(Complex, Complex)>();
-        Complex atFilter = -response.Constant;
+        Complex atPole = -response.Constant;
         foreach (var (c, p0) in response.Terms)
         {
-            Complex p = Near(p0, pf) ? p0 * (1 + 1e-6) : p0;   // equal poles: step off them
-            Complex k = c / (1 + p * tauF);
+            Complex p = Near(p0, pole) ? p0 * (1 - TwinPoleOffset) : p0;   // equal poles: step off them
+            Complex k = c * pole / (pole - p);
             terms.Add((k, p));
-            atFilter -= k;
+            atPole -= k;
         }
-        terms.Add((atFilter, pf));
+        terms.Add((atPole, pole));
         return new StepResponse(response.Constant, terms);
     }
 
-    static bool Near(Complex p, Complex q) => Complex.Abs(p - q) < 1e-6 * Complex.Abs(q);
+    /// <summary>
+    /// Poles of the one-way transmission of a series L and a shunt C at one place (either may be zero): with a = L/Z, b = C·Z,
+    /// T(s) = 2/(ab·s² + (a + b)·s + 2) = Π −pᵢ/(s − pᵢ) over the roots pᵢ (1 + Γ for the shunt C alone, 1/(1 + s·a/2) for the
+    /// series L alone). Its delay at low frequency is (a + b)/2, the τ of the parts.
+    /// </summary>
+    /// <param name="a">L/Z, s (≥ 0).</param>
+    /// <param name="b">C·Z, s (≥ 0).</param>
+    /// <returns>The poles, 1/s; none when both are zero.</returns>
+    public static IReadOnlyList<Complex> TransmissionPoles(double a, double b)
+    {
+        const double tiny = 1e-18;
+        if (a <= tiny && b <= tiny) return [];
+        if (b <= tiny) return [new Complex(-2 / a, 0)];
+        if (a <= tiny) return [new Complex(-2 / b, 0)];
+        double ab = a * b, sum = a + b;
+        Complex root = Complex.Sqrt(Discriminant(a, b));
+        return [(-sum + root) / (2 * ab), (-sum - root) / (2 * ab)];
+    }
+
+    /// <summary>
+    /// (a + b)² − 8ab, kept at least 1e-4·(a + b)² away from zero: at a double pole the two terms' coefficients grow without
+    /// bound and cancel, which leaves the fit's difference quotients in rounding noise. The roots then differ by 1 %.
+    /// </summary>
+    static double Discriminant(double a, double b)
+    {
+        double sum = a + b, d = sum * sum - 8 * a * b, floor = 1e-4 * sum * sum;
+        return Math.Abs(d) >= floor ? d : d < 0 ? -floor : floor;
+    }
+
+    /// <summary>Relative offset given to a repeated pole (a part passed twice): small for the response, large enough that
+    /// the two terms' coefficients (about 1/offset) cancel without eating the fit's difference quotients.</summary>
+    public const double TwinPoleOffset = 1e-3;
+
+    static bool Near(Complex p, Complex q) => Complex.Abs(p - q) < 0.1 * TwinPoleOffset * Complex.Abs(q);
 
     /// <summary>The layer values a reflectometer records for <paramref name="response"/> arriving at <paramref name="arrivalS"/>.</summary>
     /// <param name="response">The step response.</param>

@@ -1,3 +1,5 @@
+using System.Numerics;
+
 namespace WaveSim.Core.Measurements;
 
 /// <summary>
@@ -9,10 +11,10 @@ namespace WaveSim.Core.Measurements;
 /// settled level, found as <see cref="LumpedDiscontinuities"/> finds one, outside the lumped excursions); the changes are
 /// tried from the last back (a later one can be a ghost inside the end's own approach, up to eight of them). From the change
 /// to the end of the record the trace is fitted, as (ρ − ρ_b)/(1 − ρ_b²) on the line of the level ρ_b before it,
-/// by both models with the arrival time and τ free, and a first-order low-pass τf on the edge (the parts the step passed on
-/// its way have slowed it): first fixed at their round-trip delay 2·Στ, which keeps the delay and so the position right to
-/// first order; if that does not fit, free between 0 and four ramp lengths (loss, or parts too faint to be found)
-/// (<see cref="BoundedLeastSquares"/>).</para>
+/// by both models with the arrival time and τ free (<see cref="BoundedLeastSquares"/>). The edge reaching the end has passed
+/// the parts before it, which slowed it: the model first passes it through their transmission out and back
+/// (<see cref="LumpedResponse.TransmissionPoles"/>); if that does not fit, through a first-order low-pass τf fitted between 0
+/// and four ramp lengths instead (loss, or parts too faint to be found).</para>
 /// <para>Acceptance (common practice, no source): τ at least half the edge's 10-90 % rise time (a shorter one cannot be told
 /// from an open or a short at this edge, which is what the profile then reports), and an RMS residual of at most 2 % of the
 /// swing of 2 plus twice the noise.</para>
@@ -44,17 +46,18 @@ internal static class ReactiveEndFit
     /// <param name="threshold">Detection threshold in ρ.</param>
     /// <param name="sigma">Noise of one layer's ρ.</param>
     /// <param name="lumped">Excursions taken as lumped parts (a start inside one is not the end).</param>
-    /// <param name="delays">The one-way delay τ of the parts of each of <paramref name="lumped"/>, s.</param>
+    /// <param name="poles">The transmission poles of the parts of each of <paramref name="lumped"/>
+    /// (<see cref="LumpedResponse.TransmissionPoles"/>).</param>
     internal static Outcome? Find(double[] rho, double dt, double ramp, double rise, double z0, double threshold, double sigma,
-        IReadOnlyList<LumpedDiscontinuity> lumped, IReadOnlyList<double> delays)
+        IReadOnlyList<LumpedDiscontinuity> lumped, IReadOnlyList<IReadOnlyList<Complex>> poles)
     {
         // Latest first: a later change may be a ghost (the end's reflection bounced off a part before it) inside the end's
         // own approach; if that one does not fit, the one before it may.
         foreach (var (start, baseline) in Enumerable.Reverse(LevelChanges(rho, threshold, lumped)).Take(8))
         {
-            // The low-pass first fixed at the round-trip delay of the parts before (its delay is τf: the position comes out
-            // right to first order), then free (loss, or parts too faint to be found) if that does not fit.
-            double passed = 2 * lumped.Select((e, i) => e.EndIndex < start ? delays[i] : 0).Sum();
+            // The edge first through the transmission of the parts before, out and back (exact for each part on a matched
+            // line); then through a free first-order low-pass (loss, or parts too faint to be found) if that does not fit.
+            var passed = lumped.SelectMany((e, i) => e.EndIndex < start ? poles[i].Concat(poles[i].Select(p => p * (1 + LumpedResponse.TwinPoleOffset))) : []).ToList();
             var found = FitFrom(rho, start, baseline, dt, ramp, rise, z0, sigma, passed)
                         ?? FitFrom(rho, start, baseline, dt, ramp, rise, z0, sigma, null);
             if (found is not null)
@@ -64,7 +67,7 @@ internal static class ReactiveEndFit
     }
 
     static Outcome? FitFrom(double[] rho, int start, double baseline, double dt, double ramp, double rise, double z0, double sigma,
-        double? tauF)
+        IReadOnlyList<Complex>? passed)
     {
         if (Math.Abs(baseline) >= 0.9) return null;
         double scale = 1 - baseline * baseline;
@@ -75,8 +78,10 @@ internal static class ReactiveEndFit
         double tStart = start * dt, span = m * dt;
         // The edge reaching the end has passed every part before it and is slower than the instrument's: a first-order
         // low-pass τf on top of the instrument's ramp stands for that slowing, and is fitted too.
-        double[] lower = [Math.Max(0, tStart - 3 * ramp - dt), ramp / 20, 0], upper = [tStart + 4 * ramp, 100 * span, 4 * ramp];
-        if (tauF is not null)
+        // The arrival is that of the edge before the filter, earlier than the onset by up to the filter's delay.
+        double filterDelay = passed is null ? 4 * ramp : passed.Sum(p => (-1 / p).Real);
+        double[] lower = [Math.Max(0, tStart - 3 * ramp - dt - filterDelay), ramp / 20, 0], upper = [tStart + 4 * ramp, 100 * span, 4 * ramp];
+        if (passed is not null)
         {
             lower = lower[..2];
             upper = upper[..2];
@@ -88,15 +93,18 @@ internal static class ReactiveEndFit
         {
             double[] Residual(double[] x)
             {
-                double[] model = LumpedResponse.Layers(LumpedResponse.Filtered(LumpedResponse.End(capacitive, x[1]), tauF ?? x[2]), x[0], ramp, dt, lo, m);
+                var response = LumpedResponse.End(capacitive, x[1]);
+                if (passed is null) response = LumpedResponse.Filtered(response, x[2]);
+                else foreach (Complex p in passed) response = LumpedResponse.Filtered(response, p);
+                double[] model = LumpedResponse.Layers(response, x[0], ramp, dt, lo, m);
                 for (int i = 0; i < m; i++) model[i] -= y[i];
                 return model;
             }
             foreach (double tau0 in new[] { ramp, 4 * ramp, span / 4, span })
-            foreach (double ts0 in new[] { tStart - ramp / 2, tStart, tStart + ramp })
+            foreach (double ts0 in new[] { tStart - ramp / 2, tStart, tStart + ramp, tStart - filterDelay })
             {
                 double[] x0 = [Math.Clamp(ts0, lower[0] + 1e-3 * ramp, upper[0] - 1e-3 * ramp), Math.Clamp(tau0, 2 * lower[1], upper[1] / 2), ramp / 4];
-                if (tauF is not null) x0 = x0[..2];
+                if (passed is not null) x0 = x0[..2];
                 FitResult f;
                 try { f = BoundedLeastSquares.Fit(Residual, x0, lower, upper, 300); }
                 catch (NumericalException) { continue; }
@@ -104,8 +112,10 @@ internal static class ReactiveEndFit
                 {
                     bestRms = f.RmsResidual;
                     double z = StepReflectometry.ImpedanceOf(baseline, z0);
-                    // The low-pass delays the edge by τf, which the caller takes off again for the parts found before the end.
-                    best = new Outcome(capacitive, f.Values[0] + (tauF ?? f.Values[2]), f.Values[1], z, Math.Max(1, Math.Min(start, (int)Math.Floor((f.Values[0] - ramp / 2) / dt))));
+                    // The filter delays the edge by τf (or by the parts' 2·Στ), which the caller takes off again for the parts
+                    // found before the end.
+                    double delay = passed is null ? f.Values[2] : filterDelay;
+                    best = new Outcome(capacitive, f.Values[0] + delay, f.Values[1], z, Math.Max(1, Math.Min(start, (int)Math.Floor((f.Values[0] - ramp / 2) / dt))));
                 }
             }
         }

@@ -105,7 +105,7 @@ public static class TdrAnalysis
         double? endValue = null;
         double endArrival = stop * dt;
         var reactive = ReactiveEndFit.Find(rho, dt, trace.RampS, trace.RiseS, z0, threshold, sigma, excursions.Select(e => e.Found).ToList(),
-            excursions.Select(e => Lumped(e.Found, e.Fit, rho, dt, z0, velocityMps).Sum(l => l.TauS)).ToList());
+            excursions.Select(e => TransmissionPoles(e.Found, e.Fit, rho, dt, z0, velocityMps)).ToList());
         if (reactive is not null)
         {
             end = reactive.Capacitive ? TdrEnd.Capacitive : TdrEnd.Inductive;
@@ -220,6 +220,12 @@ public static class TdrAnalysis
         double sd = Math.Sqrt(head.Sum(x => (x - mean) * (x - mean)) / (head.Count - 1));
         return sd / trace.IncidentVolts / Math.Sqrt(Math.Max(1, dt / sampleStep));
     }
+
+    /// <summary>Transmission poles of the parts an excursion is read as: a pair's from its fit, a single part's from its τ.</summary>
+    static IReadOnlyList<System.Numerics.Complex> TransmissionPoles(LumpedDiscontinuity e, LumpedFit.Outcome fit, double[] rho, double dt, double z0, double velocity) =>
+        fit.Pair
+            ? LumpedResponse.TransmissionPoles(fit.A, fit.B)
+            : Lumped(e, fit, rho, dt, z0, velocity).Select(l => new System.Numerics.Complex(-1 / l.TauS, 0)).ToList();
 
     static IEnumerable<TdrLumped> Lumped(LumpedDiscontinuity e, LumpedFit.Outcome fit, double[] rho, double dt, double z0, double velocity)
     {
