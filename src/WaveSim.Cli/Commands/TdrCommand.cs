@@ -64,14 +64,24 @@ public static class TdrCommand
             string? yaml = pr.GetValue(toScenario) is null ? null : TdrScenarioWriter.Yaml(result, title);
             string dir = CommonOptions.OutputDir(pr.GetValue(outDir), path, "-tdr");
             var summary = TdrOutputs.Json(result);
-            using (var output = new OutputFolder(dir))
+            // The scenario file is staged beside its target before the folder is committed and moved into place after it,
+            // so a failure anywhere before the commit leaves neither.
+            string? staged = yaml is null ? null : Stage(pr.GetValue(toScenario)!, yaml);
+            try
             {
-                TdrOutputs.WriteCsv(result, output.File("tdr.csv"));
-                File.WriteAllText(output.File("tdr.json"), RunSummary.Text(summary));
-                File.WriteAllBytes(output.File("tdr.png"), LineChart.RenderPng(TdrOutputs.Chart(result, title, cap is null ? s : null), 1200, 800));
-                output.Commit();
+                using (var output = new OutputFolder(dir))
+                {
+                    TdrOutputs.WriteCsv(result, output.File("tdr.csv"));
+                    File.WriteAllText(output.File("tdr.json"), RunSummary.Text(summary));
+                    File.WriteAllBytes(output.File("tdr.png"), LineChart.RenderPng(TdrOutputs.Chart(result, title, cap is null ? s : null), 1200, 800));
+                    output.Commit();
+                }
+                if (staged is not null) File.Move(staged, Path.GetFullPath(pr.GetValue(toScenario)!), overwrite: true);
             }
-            if (yaml is not null) WriteWhole(pr.GetValue(toScenario)!, yaml);
+            finally
+            {
+                if (staged is not null && File.Exists(staged)) File.Delete(staged);
+            }
 
             var o = pr.InvocationConfiguration.Output;
             foreach (string w in result.Warnings) pr.InvocationConfiguration.Error.WriteLine("warning: " + w);
@@ -110,15 +120,15 @@ public static class TdrCommand
         return s.Line.OfType<Segment>().First().Velocity;
     }
 
-    /// <summary>Writes a file whole: to a temporary name beside it, then moved over.</summary>
-    static void WriteWhole(string path, string text)
+    /// <summary>Writes <paramref name="text"/> whole to a temporary name beside <paramref name="path"/>; returns that name.</summary>
+    static string Stage(string path, string text)
     {
         string full = Path.GetFullPath(path);
         string? parent = Path.GetDirectoryName(full);
         if (parent is not null) Directory.CreateDirectory(parent);
         string temp = full + ".partial-" + Guid.NewGuid().ToString("N");
         File.WriteAllText(temp, text);
-        File.Move(temp, full, overwrite: true);
+        return temp;
     }
 
     static void Print(TextWriter o, TdrResult r, string dir, string? scenarioFile)
@@ -128,11 +138,26 @@ public static class TdrCommand
         o.WriteLine($"  {"from",10} {"to",10} {"Z0",10}");
         foreach (var seg in r.Segments)
             o.WriteLine($"  {Quantity.Format(seg.StartM, "m", 3),10} {Quantity.Format(seg.EndM, "m", 3),10} {Quantity.Format(seg.Z0Ohm, "Ω", 4),10}");
-        foreach (var l in r.Lumped)
-            o.WriteLine(l.Kind == LumpedKind.ShuntCapacitance
-                ? $"  shunt C {Quantity.Format(l.Value, "F", 3)} at {Quantity.Format(l.AtM, "m", 3)}"
-                : $"  series L {Quantity.Format(l.Value, "H", 3)} at {Quantity.Format(l.AtM, "m", 3)}");
-        o.WriteLine($"  end: {r.End.ToString().ToLower(CultureInfo.InvariantCulture)} at {Quantity.Format(r.EndM, "m", 3)}");
+        static string Part(TdrLumped l) => l.Kind == LumpedKind.ShuntCapacitance
+            ? $"shunt C {Quantity.Format(l.Value, "F", 3)}"
+            : $"series L {Quantity.Format(l.Value, "H", 3)}";
+        for (int i = 0; i < r.Lumped.Count; i++)
+        {
+            var l = r.Lumped[i];
+            if (l.Paired && i + 1 < r.Lumped.Count && r.Lumped[i + 1].Paired)
+            {
+                o.WriteLine($"  {Part(l)} then {Part(r.Lumped[i + 1])} at {Quantity.Format(l.AtM, "m", 3)}");
+                i++;
+            }
+            else o.WriteLine($"  {Part(l)} at {Quantity.Format(l.AtM, "m", 3)}");
+        }
+        string endText = r.End switch
+        {
+            TdrEnd.Capacitive => $"capacitive, C {Quantity.Format(r.EndValue ?? double.NaN, "F", 3)} to ground,",
+            TdrEnd.Inductive => $"inductive, L {Quantity.Format(r.EndValue ?? double.NaN, "H", 3)} to ground,",
+            _ => r.End.ToString().ToLower(CultureInfo.InvariantCulture),
+        };
+        o.WriteLine($"  end: {endText} at {Quantity.Format(r.EndM, "m", 3)}");
         o.WriteLine($"wrote {Path.Combine(dir, "tdr.csv")}, tdr.json, tdr.png" + (scenarioFile is null ? "" : ", " + scenarioFile));
     }
 }

@@ -14,14 +14,18 @@ namespace WaveSim.Core.Measurements;
 /// <para>On a stretch whose level is ρ_b (impedance Z1 = Z0(1+ρ_b)/(1-ρ_b)) the element reflects -Z1·C/2 (or
 /// L/(2·Z1)) locally, seen through the step into Z1 and back scaled by (1+ρ_b)(1-ρ_b); so C = -2·A / (Z0 (1+ρ_b)²)
 /// and L = 2·Z0·A / (1-ρ_b)². This first-order correction ignores multiple reflections between earlier steps.</para>
-/// <para>Detection: an excursion starts where ρ leaves the baseline (the mean of the three samples before it, which
-/// must themselves agree within half the threshold) by more than the threshold, and ends where three samples in
-/// a row are back within half the threshold of that baseline. If it does not return within the allowed width it
+/// <para>Detection: an excursion is found where ρ leaves the baseline (the mean of three samples that agree within half
+/// the threshold, ending two samples before) by more than the threshold; it starts at the first sample after the baseline
+/// that is more than half the threshold from it, and ends where three samples in a row are back within half the threshold
+/// of that baseline. If it does not return within the allowed width it
 /// is a change of impedance, not a lumped element, and is skipped.</para>
 /// </remarks>
 public static class LumpedDiscontinuities
 {
     const int QuietRun = 3;
+
+    /// <summary>Samples between the baseline and the sample tested against it.</summary>
+    internal const int Gap = 2;
 
     /// <summary>Finds lumped discontinuities in a reflection step response.</summary>
     /// <param name="rho">Reflection step response ρ = v_r / v_inc, evenly sampled, sample 0 at the reference plane.</param>
@@ -44,18 +48,15 @@ public static class LumpedDiscontinuities
 
         var found = new List<LumpedDiscontinuity>();
         double quiet = threshold / 2;
-        int i = QuietRun;
+        int i = QuietRun + Gap;
         while (i < rho.Length)
         {
-            double baseline = (rho[i - 1] + rho[i - 2] + rho[i - 3]) / 3;
-            bool settled = Math.Abs(rho[i - 1] - baseline) <= quiet && Math.Abs(rho[i - 2] - baseline) <= quiet
-                                                                     && Math.Abs(rho[i - 3] - baseline) <= quiet;
-            if (!settled || Math.Abs(rho[i] - baseline) <= threshold)
+            if (!Departs(rho, i, threshold, out double baseline))
             {
                 i++;
                 continue;
             }
-
+            int start = Onset(rho, i, baseline, quiet);
             int end = FindReturn(rho, i, baseline, quiet, maxWidthSamples);
             if (end < 0)
             {
@@ -64,8 +65,8 @@ public static class LumpedDiscontinuities
             }
 
             double area = 0;
-            int extreme = i;
-            for (int k = i; k <= end; k++)
+            int extreme = start;
+            for (int k = start; k <= end; k++)
             {
                 double d = rho[k] - baseline;
                 area += d * sampleSeconds;
@@ -76,12 +77,41 @@ public static class LumpedDiscontinuities
             double distance = velocityMetresPerSecond * t / 2;
             found.Add(area < 0
                 ? new LumpedDiscontinuity(LumpedKind.ShuntCapacitance, t, distance, area,
-                    -2 * area / (referenceOhms * (1 + baseline) * (1 + baseline)), i, end)
+                    -2 * area / (referenceOhms * (1 + baseline) * (1 + baseline)), start, end, baseline)
                 : new LumpedDiscontinuity(LumpedKind.SeriesInductance, t, distance, area,
-                    2 * referenceOhms * area / ((1 - baseline) * (1 - baseline)), i, end));
+                    2 * referenceOhms * area / ((1 - baseline) * (1 - baseline)), start, end, baseline));
             i = end + 1 + QuietRun;
         }
         return found;
+    }
+
+    /// <summary>
+    /// True when sample <paramref name="i"/> is more than <paramref name="threshold"/> from a settled baseline: the mean of
+    /// three samples that agree within half the threshold, taken <see cref="Gap"/> samples before it, so that the first
+    /// layers of a gradual onset (an edge spans about 2.5 layers of half its rise time) do not drag the baseline along.
+    /// </summary>
+    /// <param name="rho">The trace.</param>
+    /// <param name="i">The sample tested; at least 3 + <paramref name="gap"/>.</param>
+    /// <param name="threshold">The detection threshold.</param>
+    /// <param name="baseline">The mean of the three baseline samples.</param>
+    /// <param name="gap">Samples skipped between the baseline and <paramref name="i"/>.</param>
+    internal static bool Departs(double[] rho, int i, double threshold, out double baseline, int gap = Gap)
+    {
+        double quiet = threshold / 2;
+        int b = i - gap;
+        baseline = (rho[b - 1] + rho[b - 2] + rho[b - 3]) / 3;
+        bool settled = Math.Abs(rho[b - 1] - baseline) <= quiet && Math.Abs(rho[b - 2] - baseline) <= quiet
+                                                                 && Math.Abs(rho[b - 3] - baseline) <= quiet;
+        return settled && Math.Abs(rho[i] - baseline) > threshold;
+    }
+
+    /// <summary>The first sample after the baseline that leaves it by more than <paramref name="quiet"/>.</summary>
+    internal static int Onset(double[] rho, int i, double baseline, double quiet)
+    {
+        int start = i;
+        for (int k = i - Gap; k < i; k++)
+            if (Math.Abs(rho[k] - baseline) > quiet) { start = k; break; }
+        return start;
     }
 
     /// <summary>Last sample of the excursion starting at <paramref name="start"/>, or -1 if it does not come back in time.</summary>

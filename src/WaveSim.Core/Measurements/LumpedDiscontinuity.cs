@@ -8,4 +8,6 @@ namespace WaveSim.Core.Measurements;
 /// <param name="Value">The element: farads for a shunt C, henries for a series L.</param>
 /// <param name="StartIndex">First sample of the excursion.</param>
 /// <param name="EndIndex">Last sample of the excursion.</param>
-public sealed record LumpedDiscontinuity(LumpedKind Kind, double TimeS, double DistanceM, double AreaS, double Value, int StartIndex, int EndIndex);
+/// <param name="BaselineRho">ρ of the settled level before it.</param>
+public sealed record LumpedDiscontinuity(LumpedKind Kind, double TimeS, double DistanceM, double AreaS, double Value, int StartIndex, int EndIndex,
+    double BaselineRho = 0);

@@ -15,10 +15,15 @@ namespace WaveSim.Core.Measurements;
 /// <para>Profile: <see cref="LayerPeeling.Profile"/>; the naive Z0ref(1+ρ)/(1-ρ) alongside. The profile stops where the
 /// impedance passes 10 × or 1/10 of the reference (an open or a short end; beyond, the recursion only amplifies noise).</para>
 /// <para>Lumped elements: <see cref="LumpedDiscontinuities.Find"/> on ρ, with a threshold of 1 % or six times the noise,
-/// whichever is larger, and excursions up to 12 rise times long; shorter sections of line are read as lumped, which is what
-/// they are electrically (a short high-impedance section acts as a series L, a low one as a shunt C). The position is the
-/// centroid of the excursion less the element's time constant τ (Z0·C/2 or L/(2·Z0)): the centroid of the response
-/// −exp(−t/τ) lies τ after the arrival, and the box and ramp are centred.</para>
+/// whichever is larger; excursions up to 12 rise times long are lumped whatever their shape (a short section of line is,
+/// electrically), longer ones up to 60 rise times only when a lumped model fits them closely; every excursion must peak at
+/// twice the threshold. Each is fitted by <see cref="LumpedFit"/> as a series L, a shunt C or a pair of both at one place;
+/// a pair whose parts are both resolvable is reported as both, at the fitted arrival (an L-C doublet's area alone is the
+/// difference of the parts). A single part keeps its value from the area, and its position is the centroid of the
+/// excursion less its time constant τ (Z0·C/2 or L/(2·Z0)): the centroid of the response −exp(−t/τ) lies τ after the
+/// arrival, and the box and ramp are centred.</para>
+/// <para>End: <see cref="ReactiveEndFit"/> recognises a capacitive or inductive end by its exponential approach to ±1 and
+/// reports it as one load; the profile and the segments stop where its reflection starts. Rules: docs/tdr.md.</para>
 /// <para>Segments: <see cref="ImpedanceSegments.Group"/> with a tolerance of 2.5 % of Z0ref; then layers inside lumped
 /// excursions and pieces shorter than v·rise (the edge's spatial extent, out and back) are given to their neighbours, the
 /// neighbours joined when they agree, and each segment's impedance is the median of its layers (robust to the few
@@ -90,22 +95,76 @@ public static class TdrAnalysis
         double[] naive = rho.Select(r => StepReflectometry.ImpedanceOf(r, z0)).ToArray();
 
         var (layers, end, stop) = PeelUntilEnd(rho, z0);
-        double endM = velocityMps * stop * dt / 2;
-        if (end == TdrEnd.Open)
-            warnings.Add($"the profile ends in an open (or far higher impedance) at {Quantity.Format(endM, "m")}");
-        else if (end == TdrEnd.Short)
-            warnings.Add($"the profile ends in a short (or far lower impedance) at {Quantity.Format(endM, "m")}");
 
         double sigma = NoiseOfRho(trace, dt, sampleStep);
         double threshold = Math.Max(0.01, 6 * sigma);
         int maxWidth = Math.Max(8, (int)Math.Ceiling(12 * trace.RiseS / dt));
-        var excursions = LumpedDiscontinuities.Find(rho[..stop], dt, z0, velocityMps, threshold, maxWidth);
-        var lumped = excursions.Select(e => Lumped(e, rho, dt, z0, velocityMps)).ToList();
+        var excursions = FindExcursions(rho, stop, dt, z0, velocityMps, threshold, sigma, maxWidth, trace.RampS, trace.RiseS);
 
-        var segments = Segments(layers, stop, excursions, dt, velocityMps, trace.RiseS, SegmentTolerance * z0, maxWidth);
-        (segments, lumped) = UndoLumpedDelays(segments, lumped, velocityMps);
+        // A capacitive or inductive end: its slow approach to ±1 is one load, not a chain of segments.
+        double? endValue = null;
+        double endArrival = stop * dt;
+        var reactive = ReactiveEndFit.Find(rho, dt, trace.RampS, trace.RiseS, z0, threshold, sigma, excursions.Select(e => e.Found).ToList(),
+            excursions.Select(e => TransmissionPoles(e.Found, e.Fit, rho, dt, z0, velocityMps)).ToList());
+        if (reactive is not null)
+        {
+            end = reactive.Capacitive ? TdrEnd.Capacitive : TdrEnd.Inductive;
+            endValue = reactive.Value;
+            endArrival = reactive.ArrivalS;
+            stop = Math.Min(stop, reactive.FirstLayer);
+            for (int k = stop; k < layers.Length; k++) layers[k] = double.NaN;
+            excursions = excursions.Where(e => e.Found.EndIndex < stop).ToList();
+        }
+        var lumped = excursions.SelectMany(e => Lumped(e.Found, e.Fit, rho, dt, z0, velocityMps)).ToList();
+        var segments = Segments(layers, stop, excursions.Select(e => e.Found).ToList(), dt, velocityMps, trace.RiseS, SegmentTolerance * z0, maxWidth);
+        if (reactive is not null && segments.Count > 0)
+            segments = [.. segments.Take(segments.Count - 1), segments[^1] with { EndM = velocityMps * endArrival / 2 }];
+        double endM;
+        (segments, lumped, endM) = UndoLumpedDelays(segments, lumped, velocityMps, velocityMps * endArrival / 2);
+        if (end == TdrEnd.Open)
+            warnings.Add($"the profile ends in an open (or far higher impedance) at {Quantity.Format(endM, "m")}");
+        else if (end == TdrEnd.Short)
+            warnings.Add($"the profile ends in a short (or far lower impedance) at {Quantity.Format(endM, "m")}");
         return new TdrResult(z0, velocityMps, dt, trace.IncidentVolts, trace.RiseS, time, distance, port, rho, naive, layers,
-            segments, lumped, end, endM, warnings);
+            segments, lumped, end, endM, warnings, endValue);
+    }
+
+    /// <summary>
+    /// Lumped excursions before <paramref name="stop"/> that peak at twice the threshold or more, each with its fit: those that
+    /// return within 12 rise times (short enough to be lumped whatever their shape, as before), then longer ones up to 60 rise
+    /// times that the lumped models fit closely (RMS residual at most 10 % of the excursion's peak plus twice the noise), which a
+    /// section of line does not.
+    /// </summary>
+    static List<(LumpedDiscontinuity Found, LumpedFit.Outcome Fit)> FindExcursions(double[] rho, int stop, double dt, double z0,
+        double velocity, double threshold, double sigma, int maxWidth, double ramp, double rise)
+    {
+        var kept = new List<(LumpedDiscontinuity, LumpedFit.Outcome)>();
+        LumpedFit.Outcome FitOf(LumpedDiscontinuity e) => LumpedFit.Fit(rho, e.StartIndex, e.EndIndex, e.BaselineRho, dt, ramp, threshold);
+        double Peak(LumpedDiscontinuity e)
+        {
+            double peak = 0;
+            for (int k = e.StartIndex; k <= e.EndIndex; k++) peak = Math.Max(peak, Math.Abs(rho[k] - e.BaselineRho));
+            return peak;
+        }
+        // An excursion must peak at twice the threshold: fainter ones are as likely ghosts of the stronger reflections around
+        // them (a part's reflection bounced between it and a step), which the layer peeling removes from the profile but which
+        // remain in ρ.
+        foreach (var e in LumpedDiscontinuities.Find(rho[..stop], dt, z0, velocity, threshold, maxWidth))
+            if (Peak(e) >= 2 * threshold)
+                kept.Add((e, FitOf(e)));
+        int wide = Math.Max(maxWidth, (int)Math.Ceiling(60 * rise / dt));
+        foreach (var e in LumpedDiscontinuities.Find(rho[..stop], dt, z0, velocity, threshold, wide))
+        {
+            if (e.EndIndex - e.StartIndex < maxWidth || kept.Any(k => e.StartIndex <= k.Item1.EndIndex + 3 && k.Item1.StartIndex <= e.EndIndex + 3))
+                continue;
+            double peak = Peak(e);
+            if (peak < 2 * threshold)
+                continue;
+            var fit = FitOf(e);
+            if (fit.Rms <= 0.1 * peak + 2 * sigma)
+                kept.Add((e, fit));
+        }
+        return kept.OrderBy(k => k.Item1.StartIndex).ToList();
     }
 
     /// <summary>Layer peeling up to an open or short end (or the first layer where the recursion breaks down).</summary>
@@ -162,9 +221,25 @@ public static class TdrAnalysis
         return sd / trace.IncidentVolts / Math.Sqrt(Math.Max(1, dt / sampleStep));
     }
 
-    static TdrLumped Lumped(LumpedDiscontinuity e, double[] rho, double dt, double z0, double velocity)
+    /// <summary>Transmission poles of the parts an excursion is read as: a pair's from its fit, a single part's from its τ.</summary>
+    static IReadOnlyList<System.Numerics.Complex> TransmissionPoles(LumpedDiscontinuity e, LumpedFit.Outcome fit, double[] rho, double dt, double z0, double velocity) =>
+        fit.Pair
+            ? LumpedResponse.TransmissionPoles(fit.A, fit.B)
+            : Lumped(e, fit, rho, dt, z0, velocity).Select(l => new System.Numerics.Complex(-1 / l.TauS, 0)).ToList();
+
+    static IEnumerable<TdrLumped> Lumped(LumpedDiscontinuity e, LumpedFit.Outcome fit, double[] rho, double dt, double z0, double velocity)
     {
-        double baseline = e.StartIndex >= 3 ? (rho[e.StartIndex - 1] + rho[e.StartIndex - 2] + rho[e.StartIndex - 3]) / 3 : 0;
+        double baseline = e.BaselineRho;
+        double zLocal = StepReflectometry.ImpedanceOf(baseline, z0);
+        if (fit.Pair)
+        {
+            // Both parts from the fit, placed at the fitted arrival: the doublet's zero crossing lies later by a time set by L and C
+            // (123 ps for 12 nH and 2.5 pF on 75 ohm), not by the edge.
+            double atPair = Math.Max(0, velocity * fit.ArrivalS / 2);
+            var l = new TdrLumped(LumpedKind.SeriesInductance, atPair, fit.A * zLocal, e.AreaS, fit.A / 2, true);
+            var c = new TdrLumped(LumpedKind.ShuntCapacitance, atPair, fit.B / zLocal, e.AreaS, fit.B / 2, true);
+            return fit.SeriesFirst ? [l, c] : [c, l];
+        }
         double sum = 0, moment = 0;
         for (int k = e.StartIndex; k <= e.EndIndex; k++)
         {
@@ -174,24 +249,23 @@ public static class TdrAnalysis
         }
         double centroid = sum != 0 ? moment / sum : e.TimeS;
         // Time constant of the element as seen on a line of the local impedance (first-order, as in LumpedDiscontinuities).
-        double zLocal = StepReflectometry.ImpedanceOf(baseline, z0);
         double tau = e.Kind == LumpedKind.ShuntCapacitance ? zLocal * e.Value / 2 : e.Value / (2 * zLocal);
         double at = Math.Max(0, velocity * (centroid - tau) / 2);
-        return new TdrLumped(e.Kind, at, e.Value, e.AreaS, tau);
+        return [new TdrLumped(e.Kind, at, e.Value, e.AreaS, tau)];
     }
 
     /// <summary>
     /// Moves everything beyond each lumped element back by v·τ: the element delays the step by about τ on the way out and
     /// again on the way back, which would otherwise read as v·τ of extra line.
     /// </summary>
-    static (IReadOnlyList<ImpedanceSegment>, List<TdrLumped>) UndoLumpedDelays(IReadOnlyList<ImpedanceSegment> segments,
-        List<TdrLumped> lumped, double velocity)
+    static (IReadOnlyList<ImpedanceSegment>, List<TdrLumped>, double EndM) UndoLumpedDelays(IReadOnlyList<ImpedanceSegment> segments,
+        List<TdrLumped> lumped, double velocity, double endM)
     {
         var ordered = lumped.OrderBy(l => l.AtM).ToList();
         double Shift(double x) => ordered.Where(l => l.AtM < x - 1e-12).Sum(l => velocity * l.TauS);
         var movedSegments = segments.Select(s => new ImpedanceSegment(s.StartM - Shift(s.StartM), s.EndM - Shift(s.EndM), s.Z0Ohm)).ToList();
         var movedLumped = ordered.Select(l => l with { AtM = l.AtM - Shift(l.AtM) }).ToList();
-        return (movedSegments, movedLumped);
+        return (movedSegments, movedLumped, endM - Shift(endM));
     }
 
     static IReadOnlyList<ImpedanceSegment> Segments(double[] ohms, int stop, IReadOnlyList<LumpedDiscontinuity> excursions,

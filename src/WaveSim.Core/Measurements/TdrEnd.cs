@@ -11,4 +11,10 @@ public enum TdrEnd
 
     /// <summary>The impedance fell below the reference / 10: a short (or one far below the reference).</summary>
     Short,
+
+    /// <summary>The reflection rises from −1 to +1 with τ = Z·C: a capacitance to ground at the end (an open behind it).</summary>
+    Capacitive,
+
+    /// <summary>The reflection falls from +1 to −1 with τ = L/Z: an inductance to ground at the end (a short behind it).</summary>
+    Inductive,
 }

@@ -17,6 +17,8 @@ namespace WaveSim.Core.Measurements;
 /// <param name="End">How the profile ends.</param>
 /// <param name="EndM">Where it ends, m.</param>
 /// <param name="Warnings">One-line notes for the user.</param>
+/// <param name="EndValue">For a <see cref="TdrEnd.Capacitive"/> end its capacitance, F; for an <see cref="TdrEnd.Inductive"/>
+/// one its inductance, H; otherwise null.</param>
 public sealed record TdrResult(
     double ReferenceOhms,
     double VelocityMps,
@@ -33,4 +35,5 @@ public sealed record TdrResult(
     IReadOnlyList<TdrLumped> Lumped,
     TdrEnd End,
     double EndM,
-    IReadOnlyList<string> Warnings);
+    IReadOnlyList<string> Warnings,
+    double? EndValue = null);

@@ -8,8 +8,9 @@ namespace WaveSim.Core.Measurements;
 /// <remarks>
 /// Segments get their length from the profile and a delay of length / v; lumped elements sit between segments at their
 /// distance (a segment they fall inside is split there; one within a rise time of a segment end is moved onto it, so no
-/// sliver of line forces a tiny time step). The source is the reflectometer that took the trace, probed at its port; the far
-/// end is open or shorted when the profile ended so, otherwise terminated in the last segment's impedance.
+/// sliver of line forces a tiny time step), the two parts of a pair one after the other in the order found. The source is the
+/// reflectometer that took the trace, probed at its port; the far end is open or shorted when the profile ended so, a C or an
+/// L to ground when the end was recognised as capacitive or inductive, otherwise terminated in the last segment's impedance.
 /// </remarks>
 public static class TdrScenarioWriter
 {
@@ -51,6 +52,8 @@ public static class TdrScenarioWriter
         {
             TdrEnd.Open => "open",
             TdrEnd.Short => "short",
+            TdrEnd.Capacitive => $"{{ c: {Num(result.EndValue!.Value)} F }}",
+            TdrEnd.Inductive => $"{{ l: {Num(result.EndValue!.Value)} H }}",
             _ => $"{{ r: {Num(result.Segments[^1].Z0Ohm)} ohm }}",
         };
         double window = result.TimeS[^1] + 2 * result.RiseS;

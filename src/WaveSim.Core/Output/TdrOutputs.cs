@@ -12,7 +12,8 @@ namespace WaveSim.Core.Output;
 /// <summary>The files of <c>wavesim tdr</c>: tdr.csv, tdr.json and the impedance chart.</summary>
 public static class TdrOutputs
 {
-    /// <summary>tdr.json: segments [{start_m, end_m, z0_ohm}], lumped [{at_m, shunt_c_F | series_l_H}], and the settings used (SI).</summary>
+    /// <summary>tdr.json: segments [{start_m, end_m, z0_ohm}], lumped [{at_m, shunt_c_F | series_l_H, pair}], the end (with
+    /// end_c_F or end_l_H when capacitive or inductive), and the settings used (SI).</summary>
     /// <param name="r">The analysis.</param>
     /// <returns>The JSON object.</returns>
     public static JsonObject Json(TdrResult r)
@@ -22,10 +23,15 @@ public static class TdrOutputs
         {
             ["start_m"] = s.StartM, ["end_m"] = s.EndM, ["z0_ohm"] = s.Z0Ohm,
         }).ToArray());
-        var lumped = new JsonArray(r.Lumped.Select(l => (JsonNode)(l.Kind == LumpedKind.ShuntCapacitance
-            ? new JsonObject { ["at_m"] = l.AtM, ["shunt_c_F"] = l.Value }
-            : new JsonObject { ["at_m"] = l.AtM, ["series_l_H"] = l.Value })).ToArray());
-        return new JsonObject
+        var lumped = new JsonArray(r.Lumped.Select(l =>
+        {
+            var o = l.Kind == LumpedKind.ShuntCapacitance
+                ? new JsonObject { ["at_m"] = l.AtM, ["shunt_c_F"] = l.Value }
+                : new JsonObject { ["at_m"] = l.AtM, ["series_l_H"] = l.Value };
+            if (l.Paired) o["pair"] = true;
+            return (JsonNode)o;
+        }).ToArray());
+        var json = new JsonObject
         {
             ["segments"] = segments,
             ["lumped"] = lumped,
@@ -38,6 +44,9 @@ public static class TdrOutputs
             ["incident_V"] = r.IncidentVolts,
             ["warnings"] = new JsonArray(r.Warnings.Select(w => (JsonNode)JsonValue.Create(w)!).ToArray()),
         };
+        if (r.End == TdrEnd.Capacitive) json["end_c_F"] = r.EndValue;
+        if (r.End == TdrEnd.Inductive) json["end_l_H"] = r.EndValue;
+        return json;
     }
 
     /// <summary>tdr.csv: time_s (round trip from the reference plane), distance_m, port_V, rho, z_naive_ohm, z_layer_ohm.</summary>
