@@ -30,7 +30,7 @@ simulation: { duration: 12 ns, output_step: 1 ns }
     public void The_verdict_overshoot_is_the_lattice_peak_not_the_peak_of_the_output_samples()
     {
         var r = TestScenarios.Run(Net);
-        // The 1 ns output samples miss the peak: their largest value is well below 1.35 V (1.125 V at 2 ns by the same sum).
+        // The 1 ns output samples miss the peak: their largest value is well below 1.35 V (1.0875 V at 2 ns by the same sum; ReferenceData/edge-windows.md §3).
         Assert.True(r.Probe("rx").Volts.Max() < Peak - 0.1);
         var edge = RunVerdicts.Judge(r).Single().Edges.Single();
         // Settled high is the open end's DC level, 1 V: overshoot 35 % of the 1 V swing, to 0.05 % (exact leapfrog at Courant 1,

@@ -6,7 +6,8 @@ namespace WaveSim.Tests.Output;
 /// First-edge figures of a clock stop where the next source edge reaches the probe; they never run across later edges, and
 /// an edge that has not settled by then is "not settled before next edge", not a settling time spanning edges. Expected values
 /// from the lattice diagram (Johnson and Graham, High-Speed Digital Design, 1993, ch. 4; from memory) with
-/// Γ = (R − Z0)/(R + Z0) (Pozar, Microwave Engineering, 4th ed. 2012, eq. 2.35; ReferenceData/published-checks.md §10).
+/// Γ = (R − Z0)/(R + Z0) (Pozar, Microwave Engineering, 4th ed. 2012, eq. 2.35; ReferenceData/published-checks.md §10);
+/// the derived values are restated in ReferenceData/edge-windows.md §1 and §2.
 /// </summary>
 public class FirstEdgeWindowTests
 {

@@ -9,7 +9,8 @@ namespace WaveSim.Tests.Reports;
 /// threshold beside the count, where a count of 0 over the record used to read as "never switched". Net: a 0 to 3.3 V step
 /// through 50 ohm into a matched 50 ohm line, terminated by 50 ohm to VTT = 1.65 V. Voltage divider (superposition): settled
 /// low = 1.65 × 50/100 = 0.825 V, settled high = (3.3 + 1.65)/2 = 2.475 V; Γ = 0 at both ends (Pozar, Microwave Engineering,
-/// 4th ed. 2012, eq. 2.35), so the edge goes 0.825 → 2.475 V once. Against Vil 0.8 V the low is 25 mV too high.
+/// 4th ed. 2012, eq. 2.35), so the edge goes 0.825 → 2.475 V once. Against Vil 0.8 V the low is 25 mV too high
+/// (ReferenceData/edge-windows.md §4).
 /// </summary>
 public class CrossingsColumnTests
 {

@@ -5,7 +5,8 @@ namespace WaveSim.Tests.Solver;
 
 /// <summary>
 /// The memory limit's advice names only what shrinks the estimate, and the library names no command-line option. Estimates by
-/// hand from the plan's own accounting (GridPlan.MemoryBytes: 16 bytes per cell, 8 bytes per value of every output row).
+/// hand from the plan's own accounting (GridPlan.MemoryBytes: 16 bytes per cell, 8 bytes per value of every output row;
+/// ReferenceData/edge-windows.md §6).
 /// </summary>
 public class PlanLimitTests
 {

@@ -89,7 +89,7 @@ public class QuantityTests
         Assert.Equal(expected, Quantity.Format(v, unit));
 
     // Engineering notation puts one prefix per factor of 1000 and no exponent beside it (the SI prefixes, BIPM, The International
-    // System of Units, 9th ed. 2019, §3): a value is rounded to its digits before the prefix is chosen, and a value far below the
+    // System of Units, 9th ed. 2019, §3; ReferenceData/edge-windows.md §5): a value is rounded to its digits before the prefix is chosen, and a value far below the
     // smallest prefix is zero to the shown resolution.
     [Theory]
     [InlineData(-5.19e-23, "s", 3, "0 s")]          // a delay that is zero up to rounding (two equal instants subtracted)
