@@ -26,6 +26,12 @@ public static class CommandGuard
             error.WriteLine("error: " + ex.Message);
             return ExitCodes.NumericalFailure;
         }
+        catch (Core.Solver.PlanLimitException ex)
+        {
+            // The library knows no flags: the command line says how to run beyond the limits.
+            error.WriteLine("error: " + OneLine(ex.Message) + " " + ForceHint);
+            return ExitCodes.BadInput;
+        }
         catch (Exception ex) when (ex is InputException or UnitException or IOException or UnauthorizedAccessException)
         {
             error.WriteLine("error: " + OneLine(ex.Message));
@@ -40,4 +46,7 @@ public static class CommandGuard
     }
 
     static string OneLine(string s) => s.ReplaceLineEndings(" ");
+
+    /// <summary>What every command that runs a plan adds to a limit message: its option to go beyond the limits.</summary>
+    public const string ForceHint = "(use --force to run anyway)";
 }

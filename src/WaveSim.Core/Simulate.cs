@@ -15,14 +15,15 @@ public static class Simulate
     /// <see cref="GridPlan.MinimumEdge"/> are widened to it (<see cref="SourceSpec.MinimumEdge"/>); the result's scenario carries
     /// the source as run.
     /// </summary>
-    /// <exception cref="InputException">The plan exceeds the memory or cell-update limits (unless forced), or the network is singular.</exception>
+    /// <exception cref="PlanLimitException">The plan exceeds the memory or cell-update limits (unless forced).</exception>
+    /// <exception cref="InputException">The network is singular.</exception>
     /// <exception cref="NumericalException">The solution became NaN or infinite.</exception>
     /// <exception cref="OperationCanceledException">The token was cancelled.</exception>
     public static SimulationResult Run(Scenario scenario, SimulationOptions? options = null, CancellationToken ct = default)
     {
         options ??= new SimulationOptions();
         var plan = GridPlan.For(scenario);
-        if (!options.Force) CheckLimits(plan);
+        if (!options.Force) CheckLimits(scenario, plan);
         var run = scenario with { Source = scenario.Source with { MinimumEdge = plan.MinimumEdge } };
         return new LeapfrogSolver(run, plan).Run(options, ct);
     }
@@ -35,12 +36,11 @@ public static class Simulate
         plan.Segments.Where(s => s.Segment.Loss is not null)
             .Select(s => (s.Where, DispersiveKernel.FitFor(s.Segment, scenario, plan.Dt))).ToList();
 
-    /// <summary>Throws when the plan is beyond the limits a run accepts without --force.</summary>
-    public static void CheckLimits(GridPlan plan)
+    /// <summary>Throws when the plan is beyond the limits a run accepts unless forced (<see cref="PlanLimits"/>).</summary>
+    /// <exception cref="PlanLimitException">The plan needs more memory or cell updates than the limits.</exception>
+    public static void CheckLimits(Scenario scenario, GridPlan plan)
     {
-        if (plan.MemoryBytes > GridPlan.MemoryLimitBytes)
-            throw new InputException($"the run needs about {Quantity.Format(plan.MemoryBytes, "B", 3)} of memory (limit 2 GB); lower simulation.resolution or output_step, or pass --force");
-        if (plan.CellUpdates > GridPlan.CellUpdateLimit)
-            throw new InputException($"the run needs {plan.CellUpdates:G3} cell updates (limit 1e11); shorten the duration or lower simulation.resolution, or pass --force");
+        var exceeded = PlanLimits.Exceeded(scenario, plan);
+        if (exceeded.Count > 0) throw new PlanLimitException(exceeded);
     }
 }

@@ -33,14 +33,15 @@ public static class CheckCommand
             else
             {
                 o.WriteLine($"{s.Title}");
-                PrintPlan(o, plan);
+                PrintPlan(o, plan, s);
                 if (EdgeLimit.HasRampedEdges(s.Source) && plan.CarriesAnyEdge)
                     o.WriteLine("  source edges: run as given (every segment at Courant number 1, where the grid carries any edge exactly)");
                 else if (EdgeLimit.HasRampedEdges(s.Source))
                     o.WriteLine($"  source edges: the grid carries 10-90 % edges down to {Quantity.Format(plan.MinimumEdge, "s")} ({GridPlan.MinimumEdgeSteps.ToString(System.Globalization.CultureInfo.InvariantCulture)} time steps); shorter ones are run as Gaussian-filtered steps of that time");
                 foreach (var (where, fit) in Simulate.LossFits(s, plan))
                     o.WriteLine($"  {where}: frequency-dependent loss fitted with {fit.SeriesPoles.Length} series and {fit.ShuntPoles.Length} shunt poles; largest error over the band: internal impedance {100 * fit.InternalMaxError:F3} %, permittivity {100 * fit.PermittivityMaxError:F3} %");
-                foreach (var p in problems) o.WriteLine("problem: " + p);
+                var limits = PlanLimits.Exceeded(s, plan).Select(x => x.Message).ToHashSet();
+                foreach (var p in problems) o.WriteLine("problem: " + p + (limits.Contains(p) ? " " + CommandGuard.ForceHint : ""));
                 if (problems.Count == 0) o.WriteLine("no problems found");
             }
             return ExitCodes.Ok;
@@ -49,9 +50,13 @@ public static class CheckCommand
     }
 
     /// <summary>Prints the plan as an aligned table.</summary>
-    public static void PrintPlan(TextWriter o, GridPlan plan)
+    public static void PrintPlan(TextWriter o, GridPlan plan, Core.Model.Scenario scenario)
     {
         o.WriteLine($"time step {Quantity.Format(plan.Dt, "s")} (limit {Quantity.Format(plan.DtLimit, "s")}), {plan.Steps} steps, {plan.TotalCells} cells, {plan.CellUpdates:G3} cell updates, memory about {Quantity.Format(plan.MemoryBytes, "B", 3)}");
+        // The output step thins the CSV only; the figures come from their own record, at the figure step.
+        string output = scenario.Simulation.OutputStep is { } h ? Quantity.Format(h, "s") : $"every step ({Quantity.Format(plan.Dt, "s")})";
+        string figure = plan.FigureStep is { } hf ? $"{Quantity.Format(hf, "s")} ({plan.FigureRows} samples per probe)" : "the output step";
+        o.WriteLine($"output step {output} ({plan.OutputRows} rows), figure step {figure}");
         o.WriteLine($"  {"segment",-22} {"length",10} {"Z0",10} {"delay",10} {"cells",8} {"Courant",9}");
         foreach (var sp in plan.Segments)
         {

@@ -142,7 +142,9 @@ public static class RunCommand
         o.WriteLine($"{r.Scenario.Title}: {r.Plan.Steps} steps of {Quantity.Format(r.Plan.Dt, "s")} on {r.Plan.TotalCells} cells in {r.Elapsed.TotalSeconds:F2} s");
         o.WriteLine($"  {"probe",-12} {"final",10} {"min",10} {"max",10} {"overshoot",10} {"delay",10} {"rise",10} {"settling",10}");
         foreach (var (p, f) in figures)
-            o.WriteLine($"  {p.Name,-12} {V(p.Volts[^1]),10} {V(p.FigureVolts.Min()),10} {V(p.FigureVolts.Max()),10} {Pct(f.OvershootPct),10} {T(f.Delay50S),10} {T(f.Rise1090S ?? f.Fall9010S),10} {T(f.SettlingS),10}");
+            o.WriteLine($"  {p.Name,-12} {V(p.Volts[^1]),10} {V(p.FigureVolts.Min()),10} {V(p.FigureVolts.Max()),10} {Pct(f.OvershootPct),10} {T(f.Delay50S),10} {T(f.Rise1090S ?? f.Fall9010S),10} {(f.UnsettledAtNextEdge ? "unsettled" : T(f.SettlingS)),10}");
+        foreach (var (p, f) in figures.Where(x => x.Figures.UnsettledAtNextEdge))
+            o.WriteLine($"  {p.Name}: not settled before next edge (its first-edge figures end where the next source edge reaches it, at {T(f.FirstEdgeWindowEndS)})");
         foreach (var e in eyes)
         {
             var f = e.Diagram?.Figures;

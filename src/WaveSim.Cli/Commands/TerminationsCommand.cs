@@ -92,18 +92,19 @@ public static class TerminationsCommand
         o.WriteLine($"Z0 {Quantity.Format(r.Z0, "Ω", 3)} (first segment), line delay {Quantity.Format(r.LineDelayS, "s", 3)}, receiver '{r.ReceiverProbe}'; limits: overshoot {r.Options.MaxOvershootPct:G3} %, settling {Quantity.Format(r.Options.MaxSettlingS, "s", 3)}");
         bool eyes = r.Outcomes.Any(x => x.ReceiverEye is not null);
         string eyeHead = eyes ? $" {"eye height",10} {"eye width",9}" : "";
-        o.WriteLine($"  {"strategy",-9} {"overshoot",9} {"undershoot",10} {"settling",9} {"crossings",9} {"delay",9}{eyeHead} {"P high",9} {"P low",9} {"P avg",9}  verdict");
+        o.WriteLine($"  {"strategy",-9} {"overshoot",9} {"undershoot",10} {"settling",9} {"edge-1 crossings",16} {"delay",9}{eyeHead} {"P high",9} {"P low",9} {"P avg",9}  verdict");
         foreach (var x in r.Outcomes)
         {
             if (x.Receiver is not { } f) { o.WriteLine($"  {x.Design.Name,-9} not applicable: {x.Design.Note}"); continue; }
             var e = x.ReceiverEye?.Diagram?.Figures;
             string eye = !eyes ? "" : e is null ? $" {"-",10} {"-",9}"
                 : e.HasThresholds ? $" {V(e.EyeHeightThresholdsV),10} {T(e.EyeWidthThresholdsS),9}" : $" {V(e.EyeHeightV),10} {T(e.EyeWidthS),9}";
-            o.WriteLine($"  {x.Design.Name,-9} {Pct(f.OvershootPct),9} {Pct(f.UndershootPct),10} {T(f.SettlingS),9} {f.ThresholdCrossings,9} {T(f.Delay50S),9}{eye} {W(x.PowerHighW),9} {W(x.PowerLowW),9} {W(x.PowerAverageW),9}  {x.Verdict}");
+            o.WriteLine($"  {x.Design.Name,-9} {Pct(f.OvershootPct),9} {Pct(f.UndershootPct),10} {Settling(f),9} {x.VerdictAt(r.ReceiverProbe)?.FirstEdgeCrossingsText() ?? "-",16} {T(f.Delay50S),9}{eye} {W(x.PowerHighW),9} {W(x.PowerLowW),9} {W(x.PowerAverageW),9}  {x.Verdict}");
             if (x.Design.Note is { } change) o.WriteLine($"  {"",-9} ({change})");
         }
         var judged = r.Outcomes.SelectMany(x => x.Verdicts).Where(v => v.Judged).Select(v => v.Thresholds is null ? $"{v.Probe} (at the mid level)" : v.Probe).Distinct();
         o.WriteLine($"  receivers judged: {string.Join(", ", judged)}; P high and P low are static (DC), P avg the simulated mean over the record; rules: docs/verdicts.md");
+        o.WriteLine("  figures are the receiver's first edge, up to the next source edge (\"unsettled\": not settled before the next edge); edge-1 crossings: of the threshold band, 1 expected, with a settled level that misses its threshold beside it");
         if (eyes) o.WriteLine("  (bit pattern: the verdict is judged on the receiver's eye" + (r.Outcomes.Any(x => x.ReceiverEye?.Thresholds is not null) ? ", measured against the receiver thresholds)" : ")"));
         o.WriteLine($"parts (simulated with {r.Options.Series}; computed value, nearest E24, nearest E96; capacitors: next E24 value up):");
         foreach (var x in r.Outcomes.Where(x => x.Design.Parts.Count > 0))
@@ -118,6 +119,7 @@ public static class TerminationsCommand
     }
 
     static string T(double? t) => t is { } x ? Quantity.Format(x, "s", 3) : "-";
+    static string Settling(Core.Analysis.SignalFigures f) => f.UnsettledAtNextEdge ? "unsettled" : T(f.SettlingS);
     static string V(double? v) => v is { } x ? Quantity.Format(x, "V", 3) : "-";
     static string W(double? w) => w is { } x ? Quantity.Format(x, "W", 3) : "-";
     static string Pct(double? p) => p is { } x ? x.ToString("F1", CultureInfo.InvariantCulture) + " %" : "-";

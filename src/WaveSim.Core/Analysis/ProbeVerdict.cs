@@ -57,6 +57,26 @@ public sealed record ProbeVerdict(string Probe, bool Judged, ReceiverThresholds?
         return $"{Probe}: " + string.Join("; ", groups);
     }
 
+    /// <summary>
+    /// The "first-edge crossings" cell of the termination and report tables: how many times the first edge crosses the threshold
+    /// band (rule 2's count, from the region the edge comes from; 1 is right), and beside it the settled level that misses its
+    /// threshold (rule 1) when one does, since such a receiver cannot register every edge whatever the count shows
+    /// ("1; low 828 mV above VIL 800 mV", "3 (1 expected)"). "-" when not judged or judged on an eye.
+    /// </summary>
+    public string FirstEdgeCrossingsText()
+    {
+        if (!Judged || Edges.Count == 0) return "-";
+        int n = Edges[0].Crossings;
+        string count = n.ToString(System.Globalization.CultureInfo.InvariantCulture) + (n == 1 ? "" : " (1 expected)");
+        string hi = Thresholds is null ? "the mid level" : "VIH", lo = Thresholds is null ? "the mid level" : "VIL";
+        var levels = new List<string>();
+        if (MarginLowV < 0) levels.Add($"low {V(LowV!.Value)} above {lo} {V(LowThresholdV)}");
+        if (MarginHighV < 0) levels.Add($"high {V(HighV!.Value)} below {hi} {V(HighThresholdV)}");
+        return levels.Count == 0 ? count : count + "; " + string.Join(", ", levels);
+    }
+
+    static string V(double v) => Units.Quantity.Format(v, "V", 3);
+
     /// <summary>True when the rule was judged and missed.</summary>
     public bool Missed(VerdictRule rule) => Failures.Any(f => f.Rule == rule);
 

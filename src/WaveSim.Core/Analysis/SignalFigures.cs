@@ -81,6 +81,18 @@ public sealed record SignalFigures
     /// <summary>Edges through the Vil–Vih band that reverse by more than the tolerance (empty without thresholds).</summary>
     public IReadOnlyList<NonMonotonicEdge> NonMonotonicEdges { get; init; } = [];
 
+    /// <summary>
+    /// Where the first edge's figures end [s]: the instant the source's next edge starts at the probe
+    /// (<see cref="SignalQualityOptions.NextEdgeTimeS"/>), or null when they run to the end of the record (or of a pulse's plateau).
+    /// </summary>
+    public double? FirstEdgeWindowEndS { get; init; }
+
+    /// <summary>
+    /// True when the first edge had not settled within the band by the time the next source edge reached the probe: then
+    /// <see cref="SettlingS"/> is null, since a settling time measured past that instant would span later edges.
+    /// </summary>
+    public bool UnsettledAtNextEdge { get; init; }
+
     /// <summary>True when both thresholds were given; then the two noise-margin keys are present in the output.</summary>
     public bool HasThresholds { get; init; }
 

@@ -29,7 +29,7 @@ public static class SignalQuality
     /// </summary>
     /// <param name="time">Sample instants [s], strictly increasing, at least 2.</param>
     /// <param name="volts">Sample values [V], same length as <paramref name="time"/>, finite.</param>
-    /// <param name="options">Thresholds, source edge instant, expected levels, band; null for the defaults.</param>
+    /// <param name="options">Thresholds, source edge instant, next edge instant, expected levels, band; null for the defaults.</param>
     /// <returns>The figures; null members where a figure does not apply. A waveform that never moves gives
     /// low_V = high_V = its level, all edge figures null and 0 crossings.</returns>
     /// <remarks>
@@ -40,7 +40,8 @@ public static class SignalQuality
     /// the plateau (mean of the most populated of 100 histogram bins between the midpoint and the extreme, on
     /// the side the first edge goes), and the post-transition region ends where the second edge starts (the last
     /// local extreme before the waveform returns to its 10 % level). Figures are normalised u = (v − initial)/(final − initial),
-    /// so a falling edge is handled like a rising one. Crossing instants are interpolated linearly.
+    /// so a falling edge is handled like a rising one. Crossing instants are interpolated linearly. With
+    /// <see cref="SignalQualityOptions.NextEdgeTimeS"/> the post-transition region also ends before the next source edge.
     /// </remarks>
     /// <exception cref="InputException">Arrays missing, of different lengths, shorter than 2, not finite,
     /// time not strictly increasing, or options out of range.</exception>
@@ -108,10 +109,17 @@ public static class SignalQuality
             HasThresholds = thresholdsGiven,
         };
 
-        int i50 = FirstAtOrAbove(u, 0, n - 1, Mid);
-        if (i50 < 0) return figures;   // never reaches half way: no edge figures
+        // The first edge's window ends where the next source edge reaches the probe: its figures never run across later edges.
+        int last = n - 1;
+        if (options.NextEdgeTimeS is { } next)
+        {
+            while (last > 0 && time[last] >= next) last--;
+            figures = figures with { FirstEdgeWindowEndS = next };
+        }
+        int i50 = FirstAtOrAbove(u, 0, last, Mid);
+        if (i50 < 0) return figures;   // never reaches half way before the next edge: no edge figures
         double t50 = i50 == 0 ? time[0] : WaveformMath.CrossingTime(time, u, i50 - 1, Mid);
-        int wEnd = PostTransitionEnd(u, i50, pulse);
+        int wEnd = Math.Min(last, PostTransitionEnd(u, i50, pulse));
 
         double? duration = TransitionDuration(time, u, i50, wEnd);
 
@@ -148,6 +156,7 @@ public static class SignalQuality
             Fall9010S = rising ? null : duration,
             Delay50S = options.SourceEdgeTimeS is { } src ? t50 - src : null,
             SettlingS = settledAt - reference,
+            UnsettledAtNextEdge = settledAt is null && last < n - 1,
         };
     }
 

@@ -47,6 +47,13 @@ public sealed record SignalQualityOptions
     /// </summary>
     public double? FinalLevelV { get; init; }
 
+    /// <summary>
+    /// Instant [s] the source's next edge starts at the probe, or null when the first edge is the last in the record. The
+    /// first edge's figures (overshoot, undershoot, ringback, rise or fall, settling) are measured before it, never across
+    /// later edges; an edge that has not settled by then has no settling time (<see cref="SignalFigures.UnsettledAtNextEdge"/>).
+    /// </summary>
+    public double? NextEdgeTimeS { get; init; }
+
     /// <summary>True when both receiver thresholds are given.</summary>
     public bool HasThresholds => VihV is not null && VilV is not null;
 
@@ -61,6 +68,7 @@ public sealed record SignalQualityOptions
         CheckFinite(SourceEdgeTimeS, "source edge time");
         CheckFinite(InitialLevelV, "initial level");
         CheckFinite(FinalLevelV, "final level");
+        CheckFinite(NextEdgeTimeS, "next edge time");
         if (VihV is { } vih && VilV is { } vil && !(vih > vil))
             throw new InputException($"Vih ({vih} V) must be greater than Vil ({vil} V).");
     }

@@ -11,11 +11,13 @@ public static class RunSummary
 {
     /// <summary>
     /// Signal-quality figures for every probe, with the receiver thresholds applied at loads that have them, computed from the
-    /// figure record (<see cref="SimulationResult.FigureTime"/>, the solver's steps), never from the thinned output record.
+    /// figure record (<see cref="SimulationResult.FigureTime"/>, the solver's steps), never from the thinned output record. The
+    /// first-edge figures of a clock or pulse are measured from its first edge to the start of the next source edge at the probe.
     /// </summary>
     public static IReadOnlyList<(ProbeTrace Probe, SignalFigures Figures)> Figures(SimulationResult r, double settleBand = SignalQualityOptions.DefaultSettleBand)
     {
         var list = new List<(ProbeTrace, SignalFigures)>();
+        var edges = RunVerdicts.SourceEdges(r.Scenario.Source, r.FigureTime);
         for (int i = 0; i < r.Probes.Count; i++)
         {
             var spec = r.Scenario.Probes[i];
@@ -28,6 +30,8 @@ public static class RunSummary
                 VilV = rx?.Vil,
                 SourceEdgeTimeS = src.FirstEdgeMidpoint,
                 FinalLevelV = r.Probes[i].SettledVolts,
+                // A clock or a pulse: the first edge's figures end where the next source edge reaches the probe.
+                NextEdgeTimeS = RunVerdicts.NextEdgeStart(r.Scenario, i, edges),
             };
             list.Add((r.Probes[i], SignalQuality.Compute(r.FigureTime, r.Probes[i].FigureVolts, options)));
         }

@@ -26,7 +26,8 @@ public static class RunVerdicts
         if (bits) eyes ??= RunEyes.Compute(r);
         double[]? low = null, high = null;
         bool dcTried = false;
-        var edges = SourceEdges(s.Source, r.Time);
+        // The figure record (the solver's steps), never the thinned output record: output_step must not move a verdict.
+        var edges = SourceEdges(s.Source, r.FigureTime);
         var list = new List<ProbeVerdict>(s.Probes.Count);
         for (int i = 0; i < s.Probes.Count; i++)
         {
@@ -39,17 +40,24 @@ public static class RunVerdicts
                 list.Add(ProbeVerdict.NotJudged(spec.Name) with { Note = "not judged: the network has no DC solution, so its settled levels are unknown" });
                 continue;
             }
-            double delay = RunEyes.DelayTo(s.Line, spec, 0), end = r.Time[^1];
+            double delay = RunEyes.DelayTo(s.Line, spec, 0), end = r.FigureTime[^1];
             var delayed = edges.Where(e => e.Mid + delay <= end)
                 .Select(e => new SourceEdge(e.Rising, e.Mid, e.Start + delay)).ToArray();
             EyeJudgement? eye = null;
             if (bits && eyes!.FirstOrDefault(x => x.Probe.Name == spec.Name) is { } pe) eye = new EyeJudgement(pe.Diagram?.Figures, pe.Note);
             else if (bits) eye = new EyeJudgement(null, "no eye at this probe");
             var p = r.Probes[i];
-            list.Add(ReceiverVerdict.Judge(p.Name, r.Time, p.Volts, rx, mid, low[i], high[i], delayed, limits, eye));
+            list.Add(ReceiverVerdict.Judge(p.Name, r.FigureTime, p.FigureVolts, rx, mid, low[i], high[i], delayed, limits, eye));
         }
         return list;
     }
+
+    /// <summary>
+    /// The instant the source's second edge starts at probe <paramref name="probe"/>, s: the end of the window its first-edge
+    /// figures are measured in. Null when the record holds no second edge. <paramref name="edges"/> from <see cref="SourceEdges"/>.
+    /// </summary>
+    internal static double? NextEdgeStart(Scenario s, int probe, IReadOnlyList<(bool Rising, double Mid, double Start)> edges) =>
+        edges.Count >= 2 ? edges[1].Start + RunEyes.DelayTo(s.Line, s.Probes[probe], 0) : null;
 
     /// <summary>
     /// The driver's lower and higher levels (a table's lowest and highest value), V. A driver that idles high (source.low, its
@@ -63,7 +71,7 @@ public static class RunVerdicts
     /// The source's edges within the record: crossings of its mid level by the open-circuit waveform sampled on the output
     /// instants (linear interpolation between them), each starting half its ramp before that instant.
     /// </summary>
-    static List<(bool Rising, double Mid, double Start)> SourceEdges(SourceSpec src, double[] time)
+    internal static List<(bool Rising, double Mid, double Start)> SourceEdges(SourceSpec src, double[] time)
     {
         var (lo, hi) = SourceLevels(src);
         double mid = 0.5 * (lo + hi);

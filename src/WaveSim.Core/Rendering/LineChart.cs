@@ -289,10 +289,23 @@ public static class LineChart
         return (min - headroom, max + headroom);
     }
 
-    /// <summary>A usable range from data extremes: no data → −1..1, a flat line → ±10 % (or ±1) around it.</summary>
-    static (double, double) Widened(double min, double max)
+    /// <summary>
+    /// Least span of a fitted Y range, as a fraction of the magnitude of its middle: 0.001. A figure that varies by less (a
+    /// noise margin that changes by 1e-13 V over a sweep, rounding in the solver) is drawn nearly flat on a span of 0.1 % of
+    /// its value, not on a span of its rounding noise, whose ticks would need a dozen digits. A chart a few hundred pixels
+    /// high cannot show a smaller relative change anyway (common practice, no source).
+    /// </summary>
+    public const double MinimumRelativeSpan = 1e-3;
+
+    /// <summary>
+    /// A usable range from data extremes: no data → −1..1, a flat line → ±10 % (or ±1) around it, a nearly flat one → at
+    /// least <see cref="MinimumRelativeSpan"/> of its middle's magnitude, centred on it.
+    /// </summary>
+    internal static (double, double) Widened(double min, double max)
     {
         if (!double.IsFinite(min) || !double.IsFinite(max)) return (-1, 1);
+        double mid = 0.5 * (min + max), least = MinimumRelativeSpan * Math.Abs(mid);
+        if (max > min && max - min < least) return (mid - 0.5 * least, mid + 0.5 * least);
         if (max > min) return (min, max);
         double half = min == 0 ? 1 : Math.Abs(min) * 0.1;
         return (min - half, max + half);

@@ -62,8 +62,12 @@ public static class HtmlReport
         Figures(w, input, checks);
 
         w.El("h2", "Waveforms");
-        var chart = RunPictures.Waveforms(r, currents: false);
-        w.Image("waveforms", LineChart.RenderPng(chart, ReportImages.WaveformWidth, ReportImages.WaveformHeight),
+        // The same default window as run's waveforms.png: a long clock or bit stream shows its start-up and first edges.
+        var picture = RunPictures.Waveforms(r, new WaveformOptions());
+        if (picture.Limited)
+            w.El("p", $"The picture shows {picture.Shown.Describe()}: the start-up and the first {picture.EdgesShown} of " +
+                $"{picture.SourceEdges} source edges. The figures and verdicts cover the whole record.", ("class", "note"), ("id", "waveform-window"));
+        w.Image("waveforms", LineChart.RenderPng(picture.Chart, ReportImages.WaveformWidth, ReportImages.WaveformHeight),
             ReportImages.WaveformWidth, ReportImages.WaveformHeight, "Probe voltages against time");
         w.El("h2", "Space-time map");
         w.El("p", "Voltage along the main line (across) against time (down).", ("class", "note"));
@@ -112,7 +116,7 @@ public static class HtmlReport
         w.El("h2", "Signal quality");
         var head = new List<string> { "probe", "at", "final", "min", "max", "overshoot", "undershoot", "above high", "below low", "ringback",
             "rise 10-90", "fall 90-10",
-            "delay 50 %", "settling", "threshold crossings", "noise margin high", "noise margin low" };
+            "delay 50 %", "settling", "first-edge crossings", "noise margin high", "noise margin low" };
         if (bits) head.AddRange(["eye height vs thresholds", "eye width vs thresholds"]);
         head.Add("verdict");
         w.Raw("<div class=\"wide\">\n<table id=\"figures\">\n").HeaderRow(head);
@@ -120,13 +124,15 @@ public static class HtmlReport
         {
             var (p, f) = input.Figures[i];
             var c = checks[i];
-            string crossings = f.ThresholdCrossings.ToString(CultureInfo.InvariantCulture) + (c.ExpectedCrossings is { } e ? $" (expected {e})" : "");
+            // Judged: the first edge's crossings of the band with any level failure beside them; else the record's 50 % crossings.
+            string crossings = c.Verdict.Judged && c.Verdict.Edges.Count > 0
+                ? c.Verdict.FirstEdgeCrossingsText() : f.ThresholdCrossings.ToString(CultureInfo.InvariantCulture);
             var cells = new List<(string, string?)>
             {
-                (p.Name, null), (p.Location, null), (V(p.Volts[^1]), null), (V(p.Volts.Min()), null), (V(p.Volts.Max()), null),
+                (p.Name, null), (p.Location, null), (V(p.FigureVolts[^1]), null), (V(p.FigureVolts.Min()), null), (V(p.FigureVolts.Max()), null),
                 (Pct(f.OvershootPct), Cls(c.OvershootOk)), (Pct(f.UndershootPct), null), (V(f.AboveHighV), null), (V(f.BelowLowV), null),
                 (V(f.RingbackV), Cls(c.RingbackOk)), (T(f.Rise1090S), null), (T(f.Fall9010S), null),
-                (T(f.Delay50S), null), (T(f.SettlingS), Cls(c.SettlingOk)), (crossings, Cls(c.CrossingsOk)),
+                (T(f.Delay50S), null), (Settling(f), Cls(c.SettlingOk)), (crossings, Cls(c.CrossingsOk)),
                 // A bit stream has no single settled level: its margins are in the eye columns.
                 (bits ? "-" : V(f.NoiseMarginHighV), Cls(c.MarginHighOk)), (bits ? "-" : V(f.NoiseMarginLowV), Cls(c.MarginLowOk)),
             };
@@ -155,8 +161,10 @@ public static class HtmlReport
         var lim = input.Limits;
         w.El("p", "Pass/fail rule: " + ReceiverCheck.Rule + $" Limits: overshoot {lim.MaxOvershootPct.ToString("G3", CultureInfo.InvariantCulture)} %, " +
             $"settling {Quantity.Format(lim.MaxSettlingS, "s", 3)} within ±{(lim.SettleBand * 100).ToString("G3", CultureInfo.InvariantCulture)} % of the swing.", ("id", "rule"));
-        w.El("p", "Figures refer to the first edge and the level it settles to, except above high and below low, the worst " +
-            "excursions beyond those levels over the whole record; a dash means the figure does not apply. " +
+        w.El("p", "Figures refer to the first edge and the level it settles to, measured up to the next source edge at the probe, " +
+            "except above high and below low, the worst excursions beyond those levels over the whole record; a dash means the " +
+            "figure does not apply. First-edge crossings counts the first edge's crossings of the threshold band (1 is right) and " +
+            "names a settled level that misses its threshold beside the count. " +
             "Noise margin high = settled high level − Vih; noise margin low = Vil − settled low level.", ("class", "note"));
     }
 
@@ -179,14 +187,14 @@ public static class HtmlReport
         w.El("p", $"Z0 {Quantity.Format(t.Z0, "Ω", 3)} (first segment), line delay {Quantity.Format(t.LineDelayS, "s", 3)}, receiver '{t.ReceiverProbe}'; " +
             $"limits: overshoot {t.Options.MaxOvershootPct.ToString("G3", CultureInfo.InvariantCulture)} %, settling {Quantity.Format(t.Options.MaxSettlingS, "s", 3)}; " +
             $"parts simulated with {t.Options.Series} values; power avg is the mean over the record of the simulated v·i in the termination's resistors.");
-        w.Raw("<table id=\"terminations\">\n").HeaderRow(["strategy", "change to the net as drawn", "parts", "overshoot", "undershoot", "settling", "threshold crossings", "delay 50 %", "power avg", "verdict"]);
+        w.Raw("<table id=\"terminations\">\n").HeaderRow(["strategy", "change to the net as drawn", "parts", "overshoot", "undershoot", "settling", "first-edge crossings", "delay 50 %", "power avg", "verdict"]);
         foreach (var o in t.Outcomes)
         {
             string parts = o.Design.Parts.Count == 0 ? "-" : string.Join("; ", o.Design.Parts.Select(p => $"{p.Label} {Quantity.Format(p.Used, p.Unit, 3)}"));
             var f = o.Receiver;
             string change = o.Design.Kind == TerminationKind.AsDrawn ? o.Design.Note ?? "none: the scenario unchanged" : o.Result is null ? "-" : o.Design.Note ?? "-";
-            w.Row([(o.Design.Name, null), (change, null), (parts, null), (Pct(f?.OvershootPct), null), (Pct(f?.UndershootPct), null), (T(f?.SettlingS), null),
-                (f is null ? "-" : f.ThresholdCrossings.ToString(CultureInfo.InvariantCulture), null), (T(f?.Delay50S), null),
+            w.Row([(o.Design.Name, null), (change, null), (parts, null), (Pct(f?.OvershootPct), null), (Pct(f?.UndershootPct), null), (f is null ? "-" : Settling(f), null),
+                (o.VerdictAt(t.ReceiverProbe)?.FirstEdgeCrossingsText() ?? "-", null), (T(f?.Delay50S), null),
                 (o.PowerAverageW is { } pw ? Quantity.Format(pw, "W", 3) : "-", null),
                 (o.Result is null ? "n/a: " + o.Design.Note : o.Verdict, o.Result is null ? null : Cls(o.MeetsLimits))]);
         }
@@ -215,5 +223,6 @@ public static class HtmlReport
     static string V(double v) => Quantity.Format(v, "V", 3);
     static string V(double? v) => v is { } x ? V(x) : "-";
     static string T(double? t) => t is { } x ? Quantity.Format(x, "s", 3) : "-";
+    static string Settling(SignalFigures f) => f.UnsettledAtNextEdge ? "not settled before next edge" : T(f.SettlingS);
     static string Pct(double? p) => p is { } x ? x.ToString("F1", CultureInfo.InvariantCulture) + " %" : "-";
 }

@@ -15,10 +15,7 @@ public static class PlanAdvisor
         foreach (var sp in plan.Segments)
             if (sp.Segment.Derived is { } d)
                 foreach (var w in d.Warnings) list.Add($"{sp.Where}.geometry: {w}");
-        if (plan.MemoryBytes > GridPlan.MemoryLimitBytes)
-            list.Add($"the run needs about {Quantity.Format(plan.MemoryBytes, "B", 3)} of memory, over the 2 GB limit: run with --force, or lower resolution or output_step");
-        if (plan.CellUpdates > GridPlan.CellUpdateLimit)
-            list.Add($"the run needs {plan.CellUpdates:G3} cell updates, over the 1e11 limit: run with --force, or shorten the duration");
+        list.AddRange(PlanLimits.Exceeded(s, plan).Select(x => x.Message));
         if (s.Simulation.OutputStep is { } h && h < plan.Dt)
             list.Add($"simulation.output_step {Quantity.Format(h, "s")} is finer than the solver's step {Quantity.Format(plan.Dt, "s")}: rows between steps are interpolated");
         foreach (var e in EdgeLimit.WidenedEdges(s.Source, plan))

@@ -61,7 +61,8 @@ public sealed class SweepGrid
             { throw new InputException($"sweep point {i} ({string.Join(", ", changes.Select(c => c.KeyPath + "=" + c.Item2))}): {ex.Message}"); }
             if (!force)
             {
-                try { Simulate.CheckLimits(Simulate.Plan(v)); }
+                try { Simulate.CheckLimits(v, Simulate.Plan(v)); }
+                catch (Solver.PlanLimitException ex) { throw new Solver.PlanLimitException(ex.Exceeded, $"sweep point {i}: "); }
                 catch (InputException ex) { throw new InputException($"sweep point {i}: {ex.Message}"); }
             }
             points[i] = new SweepPoint(i, axes.Select((a, k) => a.Values[idx[k]]).ToArray(), v);

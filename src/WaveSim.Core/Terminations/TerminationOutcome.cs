@@ -21,6 +21,9 @@ public sealed record TerminationOutcome(TerminationDesign Design, SimulationResu
     /// <summary>Mean power over the record in the termination's resistors, from the simulated v·i (<see cref="TerminationPower.Average"/>), W.</summary>
     public double? PowerAverageW { get; init; }
 
+    /// <summary>The verdict of the judged probe named <paramref name="probe"/>, or null.</summary>
+    public ProbeVerdict? VerdictAt(string probe) => Verdicts.FirstOrDefault(v => v.Probe == probe && v.Judged);
+
     /// <summary>Every rule missed, at every judged receiver, in probe order.</summary>
     public IReadOnlyList<VerdictFailure> Failures => Verdicts.SelectMany(v => v.Failures).ToArray();
 

@@ -29,7 +29,7 @@ public static class TerminationStudy
         var designs = TerminationPlanner.Design(s, options);
         var sim = new SimulationOptions { Force = options.Force, TrackBranchAverages = true };
         if (!options.Force)
-            foreach (var d in designs.Where(d => d.Variant is not null)) Simulate.CheckLimits(Simulate.Plan(d.Variant!));
+            foreach (var d in designs.Where(d => d.Variant is not null)) Simulate.CheckLimits(d.Variant!, Simulate.Plan(d.Variant!));
         var outcomes = new TerminationOutcome[designs.Count];
         int done = 0;
         var gate = new object();

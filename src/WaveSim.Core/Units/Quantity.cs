@@ -122,15 +122,36 @@ public static partial class Quantity
     /// <summary>Formats an SI value with an engineering prefix and a unit symbol, e.g. 2.5e-9 → "2.5 ns".</summary>
     /// <param name="value">The value in SI units.</param>
     /// <param name="unit">The unit symbol, e.g. "s", "V", "Ω".</param>
-    /// <param name="digits">Significant digits (default 4).</param>
+    /// <param name="digits">Significant digits (default 4, at least 1).</param>
+    /// <remarks>
+    /// Never an exponent beside a prefix: the value is rounded to <paramref name="digits"/> first, so 999.7 ns at 3 digits is
+    /// "1 µs", not "1E+03 ns". Below the smallest prefix (femto) the figure is shown to 10^−(digits−1) of it, so a value that is
+    /// zero up to rounding (5e-23 s, a difference of two equal instants) prints as "0 s".
+    /// </remarks>
     public static string Format(double value, string unit, int digits = 4)
     {
-        if (value == 0 || !double.IsFinite(value)) return $"{value.ToString(CultureInfo.InvariantCulture)} {unit}";
+        digits = Math.Clamp(digits, 1, 15);
+        if (!double.IsFinite(value)) return $"{value.ToString(CultureInfo.InvariantCulture)} {unit}";
         (string p, double f)[] scale = [("T", 1e12), ("G", 1e9), ("M", 1e6), ("k", 1e3), ("", 1), ("m", 1e-3), ("µ", 1e-6), ("n", 1e-9), ("p", 1e-12), ("f", 1e-15)];
         double a = Math.Abs(value);
-        foreach (var (p, f) in scale)
-            if (a >= f * 0.9999999)
-                return $"{(value / f).ToString("G" + digits, CultureInfo.InvariantCulture)} {p}{unit}";
-        return $"{(value / 1e-15).ToString("G" + digits, CultureInfo.InvariantCulture)} f{unit}";
+        for (int i = 0; i < scale.Length; i++)
+        {
+            if (a < scale[i].f * 0.9999999) continue;
+            // Round the mantissa to the significant digits; a carry to 1000 moves up one prefix (999.7 n → 1 µ).
+            double m = RoundSignificant(value / scale[i].f, digits);
+            if (Math.Abs(m) >= 1000 && i > 0) { i--; m = RoundSignificant(m / 1000, digits); }
+            return $"{Plain(m, digits)} {scale[i].p}{unit}";
+        }
+        // Smaller than 1 f: a fixed resolution of 10^-(digits-1) f, so rounding noise shows as 0.
+        double tiny = Math.Round(value / 1e-15, Math.Min(digits - 1, 15));
+        return tiny == 0 ? $"0 {unit}" : $"{Plain(tiny, digits)} f{unit}";
     }
+
+    /// <summary>x rounded to <paramref name="digits"/> significant digits, exactly as the "G" format rounds it.</summary>
+    static double RoundSignificant(double x, int digits) =>
+        double.Parse(x.ToString("G" + digits.ToString(CultureInfo.InvariantCulture), CultureInfo.InvariantCulture), CultureInfo.InvariantCulture);
+
+    /// <summary>Fixed-point text of an already rounded mantissa (no exponent, no trailing zeros, no "-0").</summary>
+    static string Plain(double m, int digits) =>
+        m == 0 ? "0" : m.ToString("0." + new string('#', Math.Max(1, digits)), CultureInfo.InvariantCulture);
 }

@@ -67,7 +67,7 @@ public class HtmlReportTests
         var report = ReportScenarios.Build(ReportScenarios.Matched);
         var table = ById(Parse(report.Html), "figures");
         var rx = DataRows(table).Single(r => r[0].Value == "rx");
-        Assert.Equal("pass", (string?)rx[Column(table, "threshold crossings")].Attribute("class"));
+        Assert.Equal("pass", (string?)rx[Column(table, "first-edge crossings")].Attribute("class"));
         Assert.Equal("pass", (string?)rx[Column(table, "noise margin high")].Attribute("class"));
         Assert.Equal("pass", (string?)rx[Column(table, "noise margin low")].Attribute("class"));
         Assert.Equal("pass", (string?)rx[Column(table, "verdict")].Attribute("class"));
@@ -87,9 +87,9 @@ public class HtmlReportTests
         var report = ReportScenarios.Build(ReportScenarios.Ringing);
         var table = ById(Parse(report.Html), "figures");
         var rx = DataRows(table).Single(r => r[0].Value == "rx");
-        var crossings = rx[Column(table, "threshold crossings")];
+        var crossings = rx[Column(table, "first-edge crossings")];
         Assert.Equal("fail", (string?)crossings.Attribute("class"));
-        Assert.Equal("3 (expected 1)", crossings.Value);
+        Assert.Equal("3 (1 expected)", crossings.Value);
         // The same lattice: the first arrival of 1.667 V is the worst excursion, 0.667 V above the settled 1 V.
         Assert.Equal("667 mV", rx[Column(table, "above high")].Value);
         Assert.Equal("pass", (string?)rx[Column(table, "noise margin high")].Attribute("class"));

@@ -87,4 +87,24 @@ public class QuantityTests
     [InlineData(50, "Ω", "50 Ω")]
     public void Formats_with_an_engineering_prefix(double v, string unit, string expected) =>
         Assert.Equal(expected, Quantity.Format(v, unit));
+
+    // Engineering notation puts one prefix per factor of 1000 and no exponent beside it (the SI prefixes, BIPM, The International
+    // System of Units, 9th ed. 2019, §3; ReferenceData/edge-windows.md §5): a value is rounded to its digits before the prefix is chosen, and a value far below the
+    // smallest prefix is zero to the shown resolution.
+    [Theory]
+    [InlineData(-5.19e-23, "s", 3, "0 s")]          // a delay that is zero up to rounding (two equal instants subtracted)
+    [InlineData(5.19e-23, "s", 3, "0 s")]
+    [InlineData(-0.0, "V", 3, "0 V")]
+    [InlineData(0.5e-15, "s", 3, "0.5 fs")]         // below 1 fs: fixed resolution of 0.01 fs at 3 digits
+    [InlineData(999.7e-9, "s", 3, "1 µs")]          // rounds up to 1000 ns: the next prefix, not "1E+03 ns"
+    [InlineData(16e-9, "s", 1, "20 ns")]            // one digit: not "2E+01 ns"
+    [InlineData(2.5e16, "V", 4, "25000 TV")]        // beyond the largest prefix: plain digits
+    [InlineData(1.2345e-9, "s", 4, "1.234 ns")]     // as before: 1.2345 is 1.23449999... in binary
+    [InlineData(-3.3e-3, "V", 3, "-3.3 mV")]
+    public void Never_prints_an_exponent_beside_a_prefix(double v, string unit, int digits, string expected)
+    {
+        string text = Quantity.Format(v, unit, digits);
+        Assert.Equal(expected, text);
+        Assert.DoesNotContain("E", text.Replace(unit, ""));
+    }
 }
