@@ -4,7 +4,7 @@ namespace WaveSim.Core.Analysis;
 
 /// <summary>
 /// Openings of an eye diagram (SI units; null where they do not apply). Definitions:
-/// <see cref="EyeAnalysis.Compute"/> and the README's "Eye figures" section.
+/// <see cref="EyeAnalysis.Compute"/> and the "Eye figures" section of docs/signal-figures.md.
 /// </summary>
 public sealed record EyeFigures
 {

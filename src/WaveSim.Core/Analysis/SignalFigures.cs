@@ -5,7 +5,7 @@ namespace WaveSim.Core.Analysis;
 /// <summary>
 /// Signal-quality figures of one probe waveform, for its first edge and the level that edge settles to.
 /// SI units; null where a figure does not apply (no edge, no threshold given, not settled in the record).
-/// Definitions: the README's "Signal-quality figures" section and <see cref="SignalQuality.Compute"/>.
+/// Definitions: docs/signal-figures.md and <see cref="SignalQuality.Compute"/>.
 /// </summary>
 public sealed record SignalFigures
 {

@@ -8,7 +8,7 @@ namespace WaveSim.Core.Analysis;
 /// Reference levels, transition duration, overshoot, undershoot and settling follow the terms of
 /// IEEE Std 181-2011, "IEEE Standard for Transitions, Pulses, and Related Waveforms" (from memory), with the
 /// state levels taken as described below instead of by histogram. Ringback, noise margins and threshold
-/// crossings are signal-integrity practice (common practice, no source). Exact definitions: the README's "Signal-quality figures" section.
+/// crossings are signal-integrity practice (common practice, no source). Exact definitions: docs/signal-figures.md.
 /// </remarks>
 public static class SignalQuality
 {

@@ -34,7 +34,7 @@ public static class SweepPanelGaps
         return lines;
     }
 
-    /// <summary>Why <paramref name="figure"/> is null in <paramref name="f"/>, in the terms of the README's figure definitions.</summary>
+    /// <summary>Why <paramref name="figure"/> is null in <paramref name="f"/>, in the terms of the figure definitions in docs/signal-figures.md.</summary>
     static string Why(SignalFigures f, string figure)
     {
         if (figure is "noise_margin_high_V" or "noise_margin_low_V" && !f.HasThresholds) return "the probe has no receiver thresholds";

@@ -102,7 +102,7 @@ simulation: { duration: 3 ns, output_step: 10 ps }
     [Fact]
     public void A_plan_beyond_the_limits_is_refused_with_its_estimate_and_writes_nothing()
     {
-        // 100 cells at 5 ps for 10 s: 2e12 steps, 2e14 cell updates and 1e12 output rows, over the 2 GB and 1e11 limits (the README's rule).
+        // 100 cells at 5 ps for 10 s: 2e12 steps, 2e14 cell updates and 1e12 output rows, over the 2 GB and 1e11 limits (docs/run.md, --force).
         using var cli = new CliRunner();
         string outDir = Path.Combine(cli.Dir, "out");
         var (code, _, err) = CliRunner.Run("run", cli.Write("big.yaml", Good.Replace("duration: 3 ns", "duration: 10 s")), "--out", outDir);

@@ -55,7 +55,7 @@ simulation: { duration: 12 ns, resolution: 12 }
         // every frequency down to DC (sqrt(R/G) = 50 ohm too) and γ = sqrt(RG) + jω sqrt(LC), so a line matched at both ends
         // passes the source's open-circuit voltage as v_rx(t) = exp(−R·len/Z0) · Vs(t − TD)/2 and v_src(t) = Vs(t)/2, exactly,
         // including the DC offset of the 0.1 V low level. L = 250 nH/m, C = 100 pF/m, R = 5 ohm/m, G = 2 mS/m, len = 4 m:
-        // TD = 20 ns, exp(−0.4). Vs is the Gaussian pulse as the README defines it (FWHM = width, peak at delay + 2·width),
+        // TD = 20 ns, exp(−0.4). Vs is the Gaussian pulse as docs/scenario-format.md defines it (FWHM = width, peak at delay + 2·width),
         // written out here; smooth, so the grid's error is second order (Taflove and Hagness 2005, ch. 2; §9).
         // Tolerance, derived: the trapezoidal time error is about (dt²/12)·max|v″| = 0.5 V·(dt/σ)²/12 = 1.4e-4 V at dt = 25 ps
         // (resolution 40), σ = 0.425 ns; the check allows 0.5 % of the far-end peak (the §7 tolerance), 1.7e-3 V, ten times that.

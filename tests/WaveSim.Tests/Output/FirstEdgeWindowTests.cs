@@ -27,7 +27,7 @@ simulation: { duration: 25 ns, output_step: 100 ps }
     public void A_clean_clock_that_ends_high_has_no_undershoot_and_settles_on_its_first_edge()
     {
         var f = RunSummary.Figures(TestScenarios.Run(MatchedClock)).Single().Figures;
-        // Linear 0-100 % ramp of 1.25 × 100 ps = 125 ps (README source format). The load enters ±5 % of 0.5 V when its ramp is
+        // Linear 0-100 % ramp of 1.25 × 100 ps = 125 ps (docs/scenario-format.md). The load enters ±5 % of 0.5 V when its ramp is
         // 95 % done: at 1 ns + Td + 0.95 × 125 ps; settling counts from the source's 50 % instant, 1 ns + 62.5 ps.
         const double Td = 0.5e-9, Ramp = 125e-12;
         double settling = Td + 0.95 * Ramp - 0.5 * Ramp;   // 556.25 ps; over the whole record it was the last rise's, 20.6 ns

@@ -11,7 +11,7 @@ namespace WaveSim.Tests.Output;
 public class SeriesPartFiguresTests
 {
     const double Rs = 10, Rser = 33, Z0 = 50, Td = 1e-9, Rise = 100e-12, Delay = 0.5e-9;
-    const double Ramp = 1.25 * Rise;   // the source's 0-100 % ramp (README: edges ramp over 1.25 × the 10-90 % time)
+    const double Ramp = 1.25 * Rise;   // the source's 0-100 % ramp (docs/scenario-format.md: edges ramp over 1.25 × the 10-90 % time)
 
     static string SeriesFirst(string low, string high) => $@"
 source: {{ waveform: step, low: {low}, high: {high}, rise: 100 ps, delay: 0.5 ns, resistance: 10 ohm }}
