@@ -104,7 +104,7 @@ public static class TerminationsCommand
         }
         var judged = r.Outcomes.SelectMany(x => x.Verdicts).Where(v => v.Judged).Select(v => v.Thresholds is null ? $"{v.Probe} (at the mid level)" : v.Probe).Distinct();
         o.WriteLine($"  receivers judged: {string.Join(", ", judged)}; P high and P low are static (DC), P avg the simulated mean over the record; rules: docs/verdicts.md");
-        o.WriteLine("  figures are the receiver's first edge, up to the next source edge (\"unsettled\": not settled before the next edge); edge-1 crossings: of the threshold band, 1 expected, with a settled level that misses its threshold beside it");
+        o.WriteLine("  figures are the receiver's first edge, up to the next source edge (\"unsettled\": not settled before the next edge), settling counted from the edge's arrival at the receiver; edge-1 crossings: of the threshold band, 1 expected, with a settled level that misses its threshold beside it");
         if (eyes) o.WriteLine("  (bit pattern: the verdict is judged on the receiver's eye" + (r.Outcomes.Any(x => x.ReceiverEye?.Thresholds is not null) ? ", measured against the receiver thresholds)" : ")"));
         o.WriteLine($"parts (simulated with {r.Options.Series}; computed value, nearest E24, nearest E96; capacitors: next E24 value up):");
         foreach (var x in r.Outcomes.Where(x => x.Design.Parts.Count > 0))

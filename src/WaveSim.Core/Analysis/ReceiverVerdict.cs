@@ -20,7 +20,7 @@ public static class ReceiverVerdict
         "on every edge of the record, rising and falling: (2) the edge crosses the threshold band between Vil and Vih exactly once, " +
         "(3) without turning back inside it by more than 1 % of the swing, (4) never comes back into the band before the next edge " +
         "(ringback), (5) overshoots the level it settles to by no more than the overshoot limit and (6) settles within the settling band " +
-        "and limit, measured from the source edge's 50 % instant, before the next edge starts. A bit pattern is judged on its eye " +
+        "and limit, measured from the edge's arrival at the probe (the source edge's 50 % instant plus the line delay), before the next edge starts. A bit pattern is judged on its eye " +
         "instead of (2) to (6): its height and width against the thresholds must both be above zero. Common practice, no source; " +
         "docs/verdicts.md has the exact definitions.";
 
@@ -142,7 +142,8 @@ public static class ReceiverVerdict
         if (overshoot > limits.MaxOvershootPct)
             failed.Add((VerdictRule.Overshoot, $"overshoot {overshoot.ToString("F1", System.Globalization.CultureInfo.InvariantCulture)} % > {limits.MaxOvershootPct.ToString("G3", System.Globalization.CultureInfo.InvariantCulture)} %"));
 
-        // (6) Settling: inside ±band·swing of the target from some instant to the window's end, measured from the source's 50 % instant.
+        // (6) Settling: inside ±band·swing of the target from some instant to the window's end, measured from the edge's arrival at
+        // the probe: the flight down the line is no ringing, and a long cable must not fail every termination.
         double half = limits.SettleBand * swing;
         double? settling = null;
         if (Math.Abs(v[i1] - target) > half)
@@ -152,9 +153,9 @@ public static class ReceiverVerdict
             int lastOut = -1;
             for (int i = i1; i >= i0; i--) if (Math.Abs(v[i] - target) > half) { lastOut = i; break; }
             double settledAt = lastOut < 0 ? t[i0] : WaveformMath.CrossingTime(t, v, lastOut, v[lastOut] > target ? target + half : target - half);
-            settling = Math.Max(0, settledAt - edge.SourceMidS);
+            settling = Math.Max(0, settledAt - edge.ArrivalMidS);
             if (settling > limits.MaxSettlingS)
-                failed.Add((VerdictRule.Settling, $"settles in {Quantity.Format(settling.Value, "s", 3)} > {Quantity.Format(limits.MaxSettlingS, "s", 3)}"));
+                failed.Add((VerdictRule.Settling, $"settles in {Quantity.Format(settling.Value, "s", 3)} after arriving > {Quantity.Format(limits.MaxSettlingS, "s", 3)}"));
         }
         var ev = new EdgeVerdict(index, edge, crossings, reversal, ringback, overshoot, settling, lastEdge ? t[n - 1] : windowEnd,
             failed.Select(f => f.Item1).ToArray());

@@ -55,7 +55,10 @@ public sealed record SignalFigures
     /// <summary>First 50 % crossing minus the source's 50 % instant [s]; needs <see cref="SignalQualityOptions.SourceEdgeTimeS"/>.</summary>
     public double? Delay50S { get; init; }
 
-    /// <summary>Time [s] from the source edge (or the first sample) after which the waveform stays inside ±band·swing of the final level.</summary>
+    /// <summary>
+    /// Time [s] from the edge's arrival at the probe (the source edge's 50 % instant plus <see cref="SignalQualityOptions.LineDelayS"/>;
+    /// the first sample without a source edge instant) after which the waveform stays inside ±band·swing of the final level.
+    /// </summary>
     public double? SettlingS { get; init; }
 
     /// <summary>True when no edge through the 10 %–90 % band reverses by more than the tolerance; null without edges.</summary>

@@ -42,6 +42,8 @@ public static class SignalQuality
     /// local extreme before the waveform returns to its 10 % level). Figures are normalised u = (v − initial)/(final − initial),
     /// so a falling edge is handled like a rising one. Crossing instants are interpolated linearly. With
     /// <see cref="SignalQualityOptions.NextEdgeTimeS"/> the post-transition region also ends before the next source edge.
+    /// Settling is counted from <see cref="SignalQualityOptions.SourceEdgeTimeS"/> plus <see cref="SignalQualityOptions.LineDelayS"/>,
+    /// the edge's arrival at the probe (or from the first sample without a source edge instant).
     /// </remarks>
     /// <exception cref="InputException">Arrays missing, of different lengths, shorter than 2, not finite,
     /// time not strictly increasing, or options out of range.</exception>
@@ -144,7 +146,8 @@ public static class SignalQuality
         }
 
         double? settledAt = SettledInstant(time, u, wEnd, options.SettleBand);
-        double reference = options.SourceEdgeTimeS ?? time[0];
+        // From the edge's arrival at the probe, not from the source: the flight down the line is delay_50_s, not settling.
+        double reference = options.SourceEdgeTimeS is { } edgeAt ? edgeAt + options.LineDelayS : time[0];
 
         return figures with
         {

@@ -32,9 +32,17 @@ public sealed record SignalQualityOptions
 
     /// <summary>
     /// Instant [s] at which the source's first edge crosses its own 50 % level, or null.
-    /// Needed for delay_50_s; also the reference for settling_s (otherwise the first sample time).
+    /// Needed for delay_50_s; with <see cref="LineDelayS"/> also the reference for settling_s (otherwise the first sample time).
     /// </summary>
     public double? SourceEdgeTimeS { get; init; }
+
+    /// <summary>
+    /// One-way line delay [s] from the driver to the probe (the sum of the segment delays; lumped parts add none). Default 0;
+    /// must be finite and at least 0. settling_s is measured from the edge's arrival at the probe,
+    /// <see cref="SourceEdgeTimeS"/> + this delay, so that it counts the ringing at the probe and not the flight down the line.
+    /// Ignored without <see cref="SourceEdgeTimeS"/>; delay_50_s (the flight figure) does not use it.
+    /// </summary>
+    public double LineDelayS { get; init; }
 
     /// <summary>
     /// Level [V] before the first edge (e.g. the source's initial level), or null to take the first sample.
@@ -66,6 +74,8 @@ public sealed record SignalQualityOptions
         CheckFinite(VihV, "Vih");
         CheckFinite(VilV, "Vil");
         CheckFinite(SourceEdgeTimeS, "source edge time");
+        if (!(LineDelayS >= 0 && double.IsFinite(LineDelayS)))
+            throw new InputException($"line delay {LineDelayS} is out of range: expected a finite delay of 0 s or more.");
         CheckFinite(InitialLevelV, "initial level");
         CheckFinite(FinalLevelV, "final level");
         CheckFinite(NextEdgeTimeS, "next edge time");

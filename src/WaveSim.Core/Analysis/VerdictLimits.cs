@@ -6,13 +6,13 @@ public sealed record VerdictLimits
     /// <summary>Default overshoot limit, % of the swing at the receiver: 10.</summary>
     public const double DefaultMaxOvershootPct = 10;
 
-    /// <summary>Default settling limit, from the source edge's 50 % instant: 5 ns.</summary>
+    /// <summary>Default settling limit, from the edge's arrival at the probe: 5 ns.</summary>
     public const double DefaultMaxSettlingS = 5e-9;
 
     /// <summary>Largest acceptable overshoot of any edge, % of the swing between the settled levels.</summary>
     public double MaxOvershootPct { get; init; } = DefaultMaxOvershootPct;
 
-    /// <summary>Largest acceptable settling time of any edge, s, from the source edge's 50 % instant.</summary>
+    /// <summary>Largest acceptable settling time of any edge, s, from its arrival at the probe (the source edge's 50 % instant plus the line delay).</summary>
     public double MaxSettlingS { get; init; } = DefaultMaxSettlingS;
 
     /// <summary>Half-width of the settling band as a fraction of the swing (default 0.05).</summary>

@@ -75,7 +75,8 @@ public static class CaptureComparison
         };
     }
 
-    /// <summary>The figure options <c>wavesim run</c> uses for this probe: receiver thresholds at a load that has them, delays from the source edge.</summary>
+    /// <summary>The figure options <c>wavesim run</c> uses for this probe: receiver thresholds at a load that has them, delays from the
+    /// source edge, settling from the edge's arrival at the probe.</summary>
     /// <param name="s">The scenario.</param>
     /// <param name="probe">Probe name (must exist).</param>
     /// <returns>The options.</returns>
@@ -83,7 +84,10 @@ public static class CaptureComparison
     {
         ProbeSpec spec = s.Probes.First(p => p.Name == probe);
         ReceiverThresholds? rx = spec.Anchor == ProbeAnchor.Load ? RunSummary.LoadOf(s, spec.BranchPath).Receiver : null;
-        return new SignalQualityOptions { VihV = rx?.Vih, VilV = rx?.Vil, SourceEdgeTimeS = s.Source.FirstEdgeMidpoint };
+        return new SignalQualityOptions
+        {
+            VihV = rx?.Vih, VilV = rx?.Vil, SourceEdgeTimeS = s.Source.FirstEdgeMidpoint, LineDelayS = RunEyes.DelayTo(s.Line, spec, 0),
+        };
     }
 
     /// <summary>Throws a one-line error naming the probes when <paramref name="probe"/> is not one of the scenario's.</summary>

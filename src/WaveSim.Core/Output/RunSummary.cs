@@ -12,7 +12,8 @@ public static class RunSummary
     /// <summary>
     /// Signal-quality figures for every probe, with the receiver thresholds applied at loads that have them, computed from the
     /// figure record (<see cref="SimulationResult.FigureTime"/>, the solver's steps), never from the thinned output record. The
-    /// first-edge figures of a clock or pulse are measured from its first edge to the start of the next source edge at the probe.
+    /// first-edge figures of a clock or pulse are measured from its first edge to the start of the next source edge at the probe,
+    /// and settling from the edge's arrival at the probe (the source edge's 50 % instant plus the line delay to the probe).
     /// </summary>
     public static IReadOnlyList<(ProbeTrace Probe, SignalFigures Figures)> Figures(SimulationResult r, double settleBand = SignalQualityOptions.DefaultSettleBand)
     {
@@ -29,6 +30,8 @@ public static class RunSummary
                 VihV = rx?.Vih,
                 VilV = rx?.Vil,
                 SourceEdgeTimeS = src.FirstEdgeMidpoint,
+                // Settling counts from the edge's arrival here, as the verdict's rule 6 does.
+                LineDelayS = RunEyes.DelayTo(r.Scenario.Line, spec, 0),
                 FinalLevelV = r.Probes[i].SettledVolts,
                 // A clock or a pulse: the first edge's figures end where the next source edge reaches the probe.
                 NextEdgeTimeS = RunVerdicts.NextEdgeStart(r.Scenario, i, edges),

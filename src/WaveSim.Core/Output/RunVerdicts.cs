@@ -42,7 +42,7 @@ public static class RunVerdicts
             }
             double delay = RunEyes.DelayTo(s.Line, spec, 0), end = r.FigureTime[^1];
             var delayed = edges.Where(e => e.Mid + delay <= end)
-                .Select(e => new SourceEdge(e.Rising, e.Mid, e.Start + delay)).ToArray();
+                .Select(e => new SourceEdge(e.Rising, e.Mid, e.Start + delay, delay)).ToArray();
             EyeJudgement? eye = null;
             if (bits && eyes!.FirstOrDefault(x => x.Probe.Name == spec.Name) is { } pe) eye = new EyeJudgement(pe.Diagram?.Figures, pe.Note);
             else if (bits) eye = new EyeJudgement(null, "no eye at this probe");

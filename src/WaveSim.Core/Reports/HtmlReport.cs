@@ -163,7 +163,8 @@ public static class HtmlReport
             $"settling {Quantity.Format(lim.MaxSettlingS, "s", 3)} within ±{(lim.SettleBand * 100).ToString("G3", CultureInfo.InvariantCulture)} % of the swing.", ("id", "rule"));
         w.El("p", "Figures refer to the first edge and the level it settles to, measured up to the next source edge at the probe, " +
             "except above high and below low, the worst excursions beyond those levels over the whole record; a dash means the " +
-            "figure does not apply. First-edge crossings counts the first edge's crossings of the threshold band (1 is right) and " +
+            "figure does not apply. Settling counts from the edge's arrival at the probe (the source edge's 50 % instant plus the line " +
+            "delay), delay from the source edge's 50 % instant. First-edge crossings counts the first edge's crossings of the threshold band (1 is right) and " +
             "names a settled level that misses its threshold beside the count. " +
             "Noise margin high = settled high level − Vih; noise margin low = Vil − settled low level.", ("class", "note"));
     }

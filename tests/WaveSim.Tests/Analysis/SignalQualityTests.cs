@@ -45,6 +45,19 @@ public class SignalQualityTests
     }
 
     [Fact]
+    public void Settling_counts_from_the_edge_arrival_and_delay_from_the_source_edge()
+    {
+        // The same record, seen at a probe 0.4 ns of line from the driver: the edge arrives at 0.5 + 0.4 ns. Settling (band entry
+        // at 1.5 ns + 0.3 ns · 0.05/0.14, by construction) counts from there; delay_50_s still counts the flight from 0.5 ns.
+        var (t, v) = RingingRise();
+        var f = SignalQuality.Compute(t, v, new SignalQualityOptions { SourceEdgeTimeS = 0.5 * Ns, LineDelayS = 0.4 * Ns });
+        Near(1.5 * Ns + 0.3 * Ns * 0.05 / 0.14 - (0.5 * Ns + 0.4 * Ns), f.SettlingS);
+        Near(1 * Ns + 0.5 / 6 * Ns - 0.5 * Ns, f.Delay50S);
+        Assert.Throws<InputException>(() => SignalQuality.Compute(t, v, new SignalQualityOptions { SourceEdgeTimeS = 0, LineDelayS = -1e-9 }));
+        Assert.Throws<InputException>(() => SignalQuality.Compute(t, v, new SignalQualityOptions { LineDelayS = double.PositiveInfinity }));
+    }
+
+    [Fact]
     public void Thresholds_give_noise_margins_ringback_margin_and_band_crossings()
     {
         var (t, v) = RingingRise();

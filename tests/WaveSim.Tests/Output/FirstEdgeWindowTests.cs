@@ -28,9 +28,10 @@ simulation: { duration: 25 ns, output_step: 100 ps }
     {
         var f = RunSummary.Figures(TestScenarios.Run(MatchedClock)).Single().Figures;
         // Linear 0-100 % ramp of 1.25 × 100 ps = 125 ps (docs/scenario-format.md). The load enters ±5 % of 0.5 V when its ramp is
-        // 95 % done: at 1 ns + Td + 0.95 × 125 ps; settling counts from the source's 50 % instant, 1 ns + 62.5 ps.
+        // 95 % done: at 1 ns + Td + 0.95 × 125 ps; settling counts from the edge's arrival at the load, the source's 50 % instant
+        // plus the line delay, 1 ns + 62.5 ps + Td (ReferenceData/settling.md §3).
         const double Td = 0.5e-9, Ramp = 125e-12;
-        double settling = Td + 0.95 * Ramp - 0.5 * Ramp;   // 556.25 ps; over the whole record it was the last rise's, 20.6 ns
+        double settling = 0.95 * Ramp - 0.5 * Ramp;   // 56.25 ps; from the source's 50 % instant it was Td more, 556.25 ps
         Assert.Equal(settling, f.SettlingS!.Value, 2e-12);
         Assert.Equal(0, f.UndershootPct!.Value, 0.05);      // was 100 %: the falling edges taken for a ring-down
         Assert.Equal(0, f.OvershootPct!.Value, 0.05);
