@@ -112,7 +112,8 @@ public static class TerminationsCommand
             string parts = string.Join("; ", x.Design.Parts.Select(p => p.E96 is { } e96
                 ? $"{p.Label} {Quantity.Format(p.Ideal, p.Unit, 4)} -> E24 {Quantity.Format(p.E24, p.Unit, 3)}, E96 {Quantity.Format(e96, p.Unit, 3)}"
                 : $"{p.Label} {Quantity.Format(p.Ideal, p.Unit, 4)} -> {Quantity.Format(p.E24, p.Unit, 3)}"));
-            if (x.Design.Kind == TerminationKind.Thevenin) parts += $"; level {Quantity.Format(x.Design.TheveninV, "V", 3)}";
+            if (TerminationReport.TheveninLevel(x.Design) is { } level)
+                parts += $"; level asked {Quantity.Format(x.Design.TargetTheveninV, "V", 3)}, the {r.Options.Series} pair gives {Quantity.Format(level, "V", 3)}";
             o.WriteLine($"  {x.Design.Name,-9} {parts}");
         }
         o.WriteLine($"wrote {Path.Combine(dir, "terminations.csv")}, terminations.png");

@@ -1,6 +1,7 @@
 using System.CommandLine;
 using System.Reflection;
 using System.Text.Json.Nodes;
+using WaveSim.Core.Output;
 
 namespace WaveSim.Cli.Commands;
 
@@ -29,7 +30,7 @@ public static class VersionInfoCommand
             var o = pr.InvocationConfiguration.Output;
             if (pr.GetValue(json))
             {
-                o.WriteLine(new JsonObject { ["version"] = Version, ["limits"] = new JsonArray(Limits.Select(l => (JsonNode)l).ToArray()) }.ToJsonString());
+                o.WriteLine(new JsonObject { ["version"] = Version, ["limits"] = new JsonArray(Limits.Select(l => (JsonNode)l).ToArray()) }.ToJsonString(JsonText.Compact));
                 return ExitCodes.Ok;
             }
             o.WriteLine($"wavesim {Version}");

@@ -1,9 +1,9 @@
 using System.CommandLine;
 using System.Globalization;
-using System.Text.Json;
 using System.Text.Json.Nodes;
 using WaveSim.Core;
 using WaveSim.Core.Lines;
+using WaveSim.Core.Output;
 using WaveSim.Core.Units;
 
 namespace WaveSim.Cli.Commands;
@@ -128,7 +128,7 @@ public static class XSectionCommand
         o["differential"] = LineJson(p.Differential);
         o["common"] = LineJson(p.Common);
         o["warnings"] = new JsonArray(p.Warnings.Select(w => (JsonNode?)JsonValue.Create(w)).ToArray());
-        output.WriteLine(o.ToJsonString(new JsonSerializerOptions { WriteIndented = true }));
+        output.WriteLine(JsonText.Write(o));
     }
 
     static void WritePairTable(CoupledLineParameters p, SynthesisResult? solved, TextWriter output)
@@ -189,7 +189,7 @@ public static class XSectionCommand
         foreach (var (key, value) in LineJson(p).ToList())
             o[key] = value?.DeepClone();
         o["warnings"] = new JsonArray(p.Warnings.Select(w => (JsonNode?)JsonValue.Create(w)).ToArray());
-        output.WriteLine(o.ToJsonString(new JsonSerializerOptions { WriteIndented = true }));
+        output.WriteLine(JsonText.Write(o));
     }
 
     static void WriteTable(LineParameters p, SynthesisResult? solved, TextWriter output)

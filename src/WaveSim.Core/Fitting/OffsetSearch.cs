@@ -12,7 +12,7 @@ internal static class OffsetSearch
     /// <summary>Upper bound on interpolations per search, so a long capture keeps the search quick.</summary>
     const long WorkLimit = 20_000_000;
 
-    /// <summary>The offset within [centre − window, centre + window] that minimises the mean square of simulated minus captured.</summary>
+    /// <summary>The offset within [centre − window, centre + window] that minimises the mean square of captured minus simulated.</summary>
     /// <remarks>Only offsets that leave at least half of the capture's span inside the simulated record are tried; the mean is over
     /// the samples inside. Between 101 and 1001 evenly spaced offsets, the centre among them; the centre wins ties.</remarks>
     /// <param name="simT">Simulated times, s, increasing.</param>

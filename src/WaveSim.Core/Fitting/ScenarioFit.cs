@@ -10,8 +10,9 @@ namespace WaveSim.Core.Fitting;
 /// <c>wavesim fit</c>).
 /// </summary>
 /// <remarks>
-/// <para>Residual: the simulated probe, linearly interpolated at each capture sample time t_i + offset, minus the captured
-/// value. Before 0 the simulation holds its first value (nothing has happened yet), after its end its last. The capture
+/// <para>Residual: the captured value minus the simulated probe, linearly interpolated at each capture sample time t_i + offset
+/// (observed − model, the sign of compare's residual and of <see cref="Output.CaptureResidual"/>; the fit itself does not
+/// depend on the sign). Before 0 the simulation holds its first value (nothing has happened yet), after its end its last. The capture
 /// samples used are fixed at the start: those that fall inside the simulated record with the starting offset.</para>
 /// <para>Alignment: the capture is aligned once, with the starting scenario: by cross-correlation (the default) or the 50 %
 /// crossings, then by a least-squares search over offsets within ±10 % of the simulated duration around that
@@ -133,8 +134,8 @@ public static class ScenarioFit
         string text = ScenarioEditor.EditedText(scenario, Changes(parameters, best));
         Scenario fittedScenario = ScenarioLoader.Parse(text, scenario.FilePath ?? "scenario.yaml");
 
-        double[] startSim = Difference(t0, v0, capT, capV, offset0).Select((r, i) => r + capV[i]).ToArray();
-        double[] fittedSim = residual.Select((r, i) => r + capV[i]).ToArray();
+        double[] startSim = Difference(t0, v0, capT, capV, offset0).Select((r, i) => capV[i] - r).ToArray();
+        double[] fittedSim = residual.Select((r, i) => capV[i] - r).ToArray();
         double startRms = Rms(startSim.Select((s, i) => s - capV[i]));
         double rms = Rms(residual);
         return new ScenarioFitResult(fitted, offset, fitOffset ? sigma[^1] : double.NaN, fitOffset, rms, startRms,
@@ -162,7 +163,7 @@ public static class ScenarioFit
     static IEnumerable<(string, string)> Changes(IReadOnlyList<FreeParameter> parameters, double[] values) =>
         parameters.Select((p, j) => (p.KeyPath, ScenarioEditor.Format(values[j], p.Unit)));
 
-    /// <summary>Simulated (interpolated at capT + offset, held constant outside its record) minus captured.</summary>
+    /// <summary>Captured minus simulated (interpolated at capT + offset, held constant outside its record).</summary>
     static double[] Difference(double[] simT, double[] simV, double[] capT, double[] capV, double offset)
     {
         var r = new double[capT.Length];
@@ -180,7 +181,7 @@ public static class ScenarioFit
                 double f = (t - simT[k]) / (simT[k + 1] - simT[k]);
                 s = simV[k] + f * (simV[k + 1] - simV[k]);
             }
-            r[i] = s - capV[i];
+            r[i] = capV[i] - s;
         }
         return r;
     }

@@ -8,7 +8,7 @@ namespace WaveSim.Core.Fitting;
 /// <param name="OffsetUncertaintySeconds">One standard deviation of the fitted offset, s, on the same basis as the parameters'
 /// (see <see cref="FittedParameter.Uncertainty"/>); NaN when it was not fitted.</param>
 /// <param name="OffsetFitted">True when the offset was a fitted parameter (any alignment but None).</param>
-/// <param name="RmsV">RMS of simulated minus captured at the capture's samples, with the fitted values, V.</param>
+/// <param name="RmsV">RMS of captured minus simulated at the capture's samples, with the fitted values, V.</param>
 /// <param name="StartRmsV">The same with the starting values, V.</param>
 /// <param name="Simulations">Number of simulations run, including the alignment and the Jacobians.</param>
 /// <param name="Converged">True when the fit stopped improving; false when the budget ran out first.</param>

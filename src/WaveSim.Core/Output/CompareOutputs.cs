@@ -32,7 +32,7 @@ public static class CompareOutputs
         };
     }
 
-    /// <summary>compare.csv: time_s, simulated_V, captured_V, residual_V (captured minus simulated), round-trip doubles.</summary>
+    /// <summary>compare.csv: time_s, simulated_V, captured_V, residual_V (captured minus simulated, <see cref="CaptureResidual"/>), round-trip doubles.</summary>
     /// <param name="r">The comparison.</param>
     /// <param name="path">The file to write.</param>
     public static void WriteCsv(CaptureComparisonResult r, string path)
@@ -53,7 +53,10 @@ public static class CompareOutputs
         }
     }
 
-    /// <summary>The overlay of simulation and capture, with the residual in a half-height panel below.</summary>
+    /// <summary>
+    /// The overlay of capture and simulation, with the residual (captured − simulated) in a half-height panel below. The
+    /// capture is a pale band beneath the simulation, so a simulation that lands on it still shows both.
+    /// </summary>
     /// <param name="r">The comparison.</param>
     /// <param name="title">Chart title.</param>
     /// <returns>The chart.</returns>
@@ -63,8 +66,12 @@ public static class CompareOutputs
         var c = r.Comparison;
         return new ChartSpec(title, "Time", "s",
         [
-            new ChartPanel("Voltage", "V", [new Series("simulated " + r.Probe, c.Time, c.Simulated), new Series("captured", c.Time, c.Captured)]),
-            new ChartPanel("Residual", "V", [new Series("captured - simulated", c.Time, c.Residual)]) { HeightWeight = 0.5 },
+            new ChartPanel("Voltage", "V",
+            [
+                new Series("captured", c.Time, c.Captured) { Look = TraceLook.Reference },
+                new Series("simulated " + r.Probe, c.Time, c.Simulated),
+            ]),
+            CaptureResidual.Panel(c.Time, c.Captured, c.Simulated, "simulated"),
         ]);
     }
 

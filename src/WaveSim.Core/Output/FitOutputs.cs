@@ -51,23 +51,25 @@ public static class FitOutputs
         };
     }
 
-    /// <summary>Capture, starting and fitted simulation at the capture's samples, with the fitted residual below.</summary>
+    /// <summary>
+    /// Capture, starting and fitted simulation at the capture's samples, with the fitted residual (captured − fitted) below.
+    /// The capture is a pale band beneath the two simulations, so a fit that lands on it still shows both.
+    /// </summary>
     /// <param name="r">The fit.</param>
     /// <param name="title">Chart title.</param>
     /// <returns>The chart.</returns>
     public static ChartSpec Chart(ScenarioFitResult r, string title)
     {
         ArgumentNullException.ThrowIfNull(r);
-        double[] residual = r.FittedSimulated.Select((s, i) => s - r.Captured[i]).ToArray();
         return new ChartSpec(title, "Time", "s",
         [
             new ChartPanel("Voltage", "V",
             [
-                new Series("captured", r.Time, r.Captured),
-                new Series("start", r.Time, r.StartSimulated),
+                new Series("captured", r.Time, r.Captured) { Look = TraceLook.Reference },
+                new Series("start", r.Time, r.StartSimulated) { Look = TraceLook.Dashed },
                 new Series("fitted", r.Time, r.FittedSimulated),
             ]),
-            new ChartPanel("Residual", "V", [new Series("fitted - captured", r.Time, residual)]) { HeightWeight = 0.5 },
+            CaptureResidual.Panel(r.Time, r.Captured, r.FittedSimulated, "fitted"),
         ]);
     }
 }

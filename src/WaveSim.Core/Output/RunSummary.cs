@@ -1,4 +1,3 @@
-using System.Text.Json;
 using System.Text.Json.Nodes;
 using WaveSim.Core.Analysis;
 using WaveSim.Core.Model;
@@ -105,6 +104,6 @@ public static class RunSummary
         };
     }
 
-    /// <summary>JSON text with indentation, as written to files and printed with --json.</summary>
-    public static string Text(JsonNode node) => node.ToJsonString(new JsonSerializerOptions { WriteIndented = true });
+    /// <summary>JSON text with indentation, as written to files and printed with --json (<see cref="JsonText"/>).</summary>
+    public static string Text(JsonNode node) => JsonText.Write(node);
 }

@@ -61,10 +61,9 @@ internal static class Ink
     }
 
     /// <summary>A legend sample: a short bar in the trace colour, broken like its dash pattern (drawn as rectangles).</summary>
-    public static void LegendSwatch(SKCanvas canvas, float x, float cy, float length, SKColor colour, float[] dash)
+    public static void LegendSwatch(SKCanvas canvas, float x, float cy, float length, SKColor colour, float[] dash, float thickness = 3f)
     {
         using SKPaint fill = Fill(colour);
-        const float thickness = 3f;
         if (dash.Length == 0) { canvas.DrawRect(x, cy - thickness / 2, length, thickness, fill); return; }
         float pos = 0;
         for (int k = 0; pos < length; k++)

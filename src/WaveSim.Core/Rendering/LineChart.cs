@@ -8,8 +8,6 @@ namespace WaveSim.Core.Rendering;
 /// </summary>
 public static class LineChart
 {
-    const float TraceWidth = 2f;
-
     /// <summary>Renders the chart as PNG bytes.</summary>
     /// <param name="spec">What to draw.</param>
     /// <param name="width">Image width, px (160..16384).</param>
@@ -48,6 +46,7 @@ public static class LineChart
         int n = spec.Panels.Count;
         double weightSum = spec.Panels.Sum(p => p.HeightWeight);
         var yRanges = spec.Panels.Select(YRange).ToArray();
+        var styles = spec.Panels.Select((p, i) => TraceStyle.For(p, yRanges[i])).ToArray();
 
         // Pass 1: provisional heights (one legend row each) → Y ticks → left margin.
         float left = pad + yTitleW + fs * 2.5f;
@@ -57,7 +56,7 @@ public static class LineChart
 
         // Pass 2: legend rows for the actual width, final heights and ticks.
         float legendSwatch = fs * 1.8f;
-        var legends = spec.Panels.Select(p => LegendRows(p, font, left, right, legendSwatch, fs)).ToArray();
+        var legends = styles.Select(st => LegendRows(st, font, left, right, legendSwatch, fs)).ToArray();
         float[] heights = PanelHeights(spec, top, bottom, weightSum, legends.Select(l => l.Rows).ToArray(), lineH, gap);
         yAxes = YAxes(spec, yRanges, heights);
         left = Math.Max(left, pad + yTitleW + yAxes.Max(a => AxisPainter.WidestTick(a, font)) + tick + fs * 0.3f);
@@ -74,7 +73,7 @@ public static class LineChart
         float y = top;
         for (int i = 0; i < n; i++)
         {
-            var (rows, entries) = LegendRows(spec.Panels[i], font, left, right, legendSwatch, fs);
+            var (rows, entries) = LegendRows(styles[i], font, left, right, legendSwatch, fs);
             float legendTop = y;
             float plotTop = y + rows * lineH;
             var rect = new SKRect(left, plotTop, right, plotTop + heights[i]);
@@ -85,7 +84,7 @@ public static class LineChart
             float tickW = AxisPainter.WidestTick(yAxes[i], font);
             var yTickBox = new SKRect(left - tick - fs * 0.3f - tickW, rect.Top - fs, left - tick - fs * 0.3f, rect.Bottom + fs);
             var yTitleBox = new SKRect(pad, rect.Top, pad + yTitleW, rect.Bottom);
-            panels.Add(new PanelLayout(spec.Panels[i], geometry, legendBox, yTickBox, yTitleBox, placed));
+            panels.Add(new PanelLayout(spec.Panels[i], geometry, legendBox, yTickBox, yTitleBox, placed, styles[i]));
             y = rect.Bottom + gap;
         }
         float plotBottom = panels[^1].Geometry.PlotArea.Bottom;
@@ -114,17 +113,17 @@ public static class LineChart
             ChartGeometry g = pl.Geometry;
             bool isBottom = p == layout.Panels.Count - 1;
             AxisPainter.Grid(canvas, g);
-            DrawTraces(canvas, g, pl.Panel.Series);
+            DrawTraces(canvas, g, pl.Panel.Series, pl.Styles);
             DrawReferenceLines(canvas, g, pl.Panel.ReferenceLines, small); // over the traces: a threshold must stay visible
             DrawMarkers(canvas, g, pl.Panel.Markers, small);
             AxisPainter.Frame(canvas, g, tick, xTicks: true, yTicks: true);
             AxisPainter.YTickLabels(canvas, g, font, tick + fs * 0.3f);
             Ink.TextVertical(canvas, g.Y.Title, pl.YTitleBox.MidX, pl.YTitleBox.MidY, font, text);
-            int count = pl.Panel.Series.Count;
             foreach (var (at, s) in pl.LegendEntries)
             {
-                Ink.LegendSwatch(canvas, at.X, at.Y, fs * 1.8f, Palette.TraceColour(s), Palette.TraceDash(s, count));
-                Ink.TextCentredV(canvas, pl.Panel.Series[s].Name, at.X + fs * 2.2f, at.Y, SKTextAlign.Left, font, text);
+                TraceStyle st = pl.Styles[s];
+                Ink.LegendSwatch(canvas, at.X, at.Y, fs * 1.8f, st.Colour, st.Dash, Math.Max(3f, st.Width));
+                Ink.TextCentredV(canvas, st.Legend, at.X + fs * 2.2f, at.Y, SKTextAlign.Left, font, text);
             }
             if (isBottom)
             {
@@ -134,15 +133,18 @@ public static class LineChart
         }
     }
 
-    static void DrawTraces(SKCanvas canvas, ChartGeometry g, IReadOnlyList<Series> series)
+    /// <summary>Reference bands first, then the lines in panel order, so no trace disappears under a band.</summary>
+    static void DrawTraces(SKCanvas canvas, ChartGeometry g, IReadOnlyList<Series> series, IReadOnlyList<TraceStyle> styles)
     {
         canvas.Save();
         canvas.ClipRect(g.PlotArea);
-        for (int s = 0; s < series.Count; s++)
+        foreach (int s in Enumerable.Range(0, series.Count).OrderBy(s => styles[s].Beneath ? 0 : 1))
         {
             using SKPath path = Ink.TracePath(g, series[s].X, series[s].Y);
             if (path.IsEmpty) continue;
-            using SKPaint stroke = Ink.Stroke(Palette.TraceColour(s), TraceWidth, Palette.TraceDash(s, series.Count));
+            TraceStyle st = styles[s];
+            using SKPaint stroke = Ink.Stroke(st.Colour, st.Width, st.Dash);
+            if (st.Beneath) stroke.StrokeCap = SKStrokeCap.Round;
             canvas.DrawPath(path, stroke);
         }
         canvas.Restore();
@@ -213,19 +215,19 @@ public static class LineChart
         Ink.TextCentredV(canvas, label, box.Left + pad, box.MidY, SKTextAlign.Left, font, ink);
     }
 
-    static (int Rows, List<(float X, float Right, int Row, int Series)> Entries) LegendRows(ChartPanel panel, SKFont font, float left, float right, float swatch, float fs)
+    static (int Rows, List<(float X, float Right, int Row, int Series)> Entries) LegendRows(IReadOnlyList<TraceStyle> styles, SKFont font, float left, float right, float swatch, float fs)
     {
         var entries = new List<(float, float, int, int)>();
         float x = left;
         int row = 0;
-        for (int s = 0; s < panel.Series.Count; s++)
+        for (int s = 0; s < styles.Count; s++)
         {
-            float w = swatch + fs * 0.4f + Ink.Width(font, panel.Series[s].Name);
+            float w = swatch + fs * 0.4f + Ink.Width(font, styles[s].Legend);
             if (x > left && x + w > right) { row++; x = left; }
             entries.Add((x, x + w, row, s));
             x += w + fs * 1.4f;
         }
-        return (panel.Series.Count == 0 ? 0 : row + 1, entries);
+        return (styles.Count == 0 ? 0 : row + 1, entries);
     }
 
     static float[] PanelHeights(ChartSpec spec, float top, float bottom, double weightSum, int[] legendRows, float lineH, float gap)

@@ -50,6 +50,12 @@ public static class Palette
     /// <summary>Receiver thresholds drawn across a waveform panel: a dark red-brown, apart from every trace colour.</summary>
     public static SKColor Threshold { get; } = new(0x9E, 0x2A, 0x2B);
 
+    /// <summary>
+    /// The band of a <see cref="TraceLook.Reference"/> trace (a capture, the net as drawn): a pale neutral grey, lighter than
+    /// <see cref="Muted"/> and unlike every trace colour, so a coloured trace drawn on it stands out.
+    /// </summary>
+    public static SKColor ReferenceBand { get; } = new(0xB9, 0xB9, 0xB9);
+
     /// <summary>The colour of trace <paramref name="index"/> (cycles through <see cref="Traces"/>).</summary>
     public static SKColor TraceColour(int index) => Traces[Math.Abs(index) % Traces.Count];
 

@@ -6,8 +6,9 @@ namespace WaveSim.Core.Rendering;
 public sealed class PanelLayout
 {
     internal PanelLayout(ChartPanel panel, ChartGeometry geometry, SKRect legendBox, SKRect yTickLabelBox, SKRect yTitleBox,
-                         IReadOnlyList<(SKPoint At, int Series)> legendEntries)
+                         IReadOnlyList<(SKPoint At, int Series)> legendEntries, IReadOnlyList<TraceStyle> styles)
     {
+        Styles = styles;
         Panel = panel;
         Geometry = geometry;
         LegendBox = legendBox;
@@ -32,4 +33,10 @@ public sealed class PanelLayout
     public SKRect YTitleBox { get; }
 
     internal IReadOnlyList<(SKPoint At, int Series)> LegendEntries { get; }
+
+    /// <summary>Each series' stroke and legend text, in series order.</summary>
+    internal IReadOnlyList<TraceStyle> Styles { get; }
+
+    /// <summary>The legend text of each series, in series order (its name, plus a note when it coincides with an earlier one).</summary>
+    public IReadOnlyList<string> LegendTexts => Styles.Select(s => s.Legend).ToList();
 }

@@ -18,6 +18,12 @@ public sealed record TerminationDesign(TerminationKind Kind, IReadOnlyList<Termi
     /// <summary>For Thevenin: the supply the upper resistor returns to, V.</summary>
     public double SupplyV { get; init; }
 
-    /// <summary>For Thevenin: the chosen Thevenin level, V.</summary>
+    /// <summary>For Thevenin: the level asked for (<see cref="TerminationOptions.TheveninLevelV"/>, or its default), V.</summary>
+    public double TargetTheveninV { get; init; }
+
+    /// <summary>
+    /// For Thevenin: the level the chosen preferred-value pair actually gives, Vcc·R2/(R1 + R2), V. It is what is simulated,
+    /// and it differs from <see cref="TargetTheveninV"/> by the rounding of R1 and R2.
+    /// </summary>
     public double TheveninV { get; init; }
 }

@@ -5,7 +5,10 @@ using WaveSim.Core.Units;
 
 namespace WaveSim.Core.Terminations;
 
-/// <summary>The overlay of the receiver waveform of every strategy that applies, with the receiver thresholds when given.</summary>
+/// <summary>
+/// The overlay of the receiver waveform of every strategy that applies, with the receiver thresholds when given. The net as
+/// drawn is a pale band beneath the others; a strategy whose curve coincides with another's says so in the legend.
+/// </summary>
 public static class TerminationPictures
 {
     /// <summary>The chart for terminations.png.</summary>
@@ -19,7 +22,10 @@ public static class TerminationPictures
             if (o.Result is not { } res) continue;
             any = res.Scenario;
             spec = res.Scenario.Probes.First(p => p.Name == r.ReceiverProbe);
-            series.Add(new Rendering.Series(o.Design.Name, res.Time, res.Probe(r.ReceiverProbe).Volts));
+            // The net as drawn is what every strategy is judged against: a pale band beneath them, never hidden by one that
+            // leaves it unchanged (a Thevenin pair equal to the user's own VTT termination).
+            var look = o.Design.Kind == TerminationKind.AsDrawn ? TraceLook.Reference : TraceLook.Line;
+            series.Add(new Rendering.Series(o.Design.Name, res.Time, res.Probe(r.ReceiverProbe).Volts) { Look = look });
         }
         var lines = new List<ReferenceLine>();
         if (any is not null && spec is not null && spec.Anchor == ProbeAnchor.Load && RunSummary.LoadOf(any, spec.BranchPath).Receiver is { } rx)

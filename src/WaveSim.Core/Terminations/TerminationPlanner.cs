@@ -74,7 +74,7 @@ public static class TerminationPlanner
         double req = r1.Used * r2.Used / (r1.Used + r2.Used), veq = vcc * r2.Used / (r1.Used + r2.Used);
         var load = s.Load with { R = req, To = veq };
         var variant = Titled(s with { Load = load }, $"Thevenin {Quantity.Format(r1.Used, "Ω", 3)} / {Quantity.Format(r2.Used, "Ω", 3)}");
-        return new(TerminationKind.Thevenin, [r1, r2], variant, Replaced(s, "adds a resistor pair at the load")) { SupplyV = vcc, TheveninV = veq };
+        return new(TerminationKind.Thevenin, [r1, r2], variant, Replaced(s, "adds a resistor pair at the load")) { SupplyV = vcc, TargetTheveninV = vt, TheveninV = veq };
     }
 
     static TerminationDesign Rc(Scenario s, double z0, TerminationOptions o)

@@ -24,7 +24,8 @@ public static class TerminationReport
                 {
                     ["name"] = p.Column, ["label"] = p.Label, ["computed"] = p.Ideal, ["e24"] = p.E24, ["e96"] = p.E96, ["simulated"] = p.Used,
                 }).ToArray()),
-                ["thevenin_level_V"] = o.Design.Kind == TerminationKind.Thevenin && o.Result is not null ? o.Design.TheveninV : null,
+                ["thevenin_target_V"] = TheveninTarget(o.Design),
+                ["thevenin_level_V"] = TheveninLevel(o.Design),
                 ["receiver"] = o.Receiver?.ToJsonObject(),
                 ["receiver_eye"] = o.ReceiverEye is { } eye ? Output.RunEyes.Json(eye) : null,
                 ["probes"] = probes,
@@ -49,6 +50,14 @@ public static class TerminationReport
             ["strategies"] = strategies,
         };
     }
+
+    /// <summary>For a Thevenin design that applies: the level asked for, V; otherwise null.</summary>
+    public static double? TheveninTarget(TerminationDesign d) => IsThevenin(d) ? d.TargetTheveninV : null;
+
+    /// <summary>For a Thevenin design that applies: the level its preferred-value pair gives, Vcc·R2/(R1 + R2), V; otherwise null.</summary>
+    public static double? TheveninLevel(TerminationDesign d) => IsThevenin(d) ? d.TheveninV : null;
+
+    static bool IsThevenin(TerminationDesign d) => d.Kind == TerminationKind.Thevenin && d.Variant is not null;
 
     /// <summary>One receiver's verdict: its levels, margins, edges judged and the rules missed.</summary>
     public static JsonObject VerdictJson(ProbeVerdict v) => new()
