@@ -99,13 +99,19 @@ public static class TerminationsCommand
             var e = x.ReceiverEye?.Diagram?.Figures;
             string eye = !eyes ? "" : e is null ? $" {"-",10} {"-",9}"
                 : e.HasThresholds ? $" {V(e.EyeHeightThresholdsV),10} {T(e.EyeWidthThresholdsS),9}" : $" {V(e.EyeHeightV),10} {T(e.EyeWidthS),9}";
-            o.WriteLine($"  {x.Design.Name,-9} {Pct(f.OvershootPct),9} {Pct(f.UndershootPct),10} {Settling(f),9} {x.VerdictAt(r.ReceiverProbe)?.FirstEdgeCrossingsText() ?? "-",16} {T(f.Delay50S),9}{eye} {W(x.PowerHighW),9} {W(x.PowerLowW),9} {W(x.PowerAverageW),9}  {x.Verdict}");
+            o.WriteLine($"  {x.Design.Name,-9} {Pct(f.OvershootPct),9} {Pct(f.UndershootPct),10} {Settling(f),9} {x.VerdictAt(r.ReceiverProbe)?.FirstEdgeCrossingsText() ?? "-",16} {T(f.Delay50S),9}{eye} {W(x.PowerHighW),9} {W(x.PowerLowW),9} {W(x.PowerAverageW),9}  {x.BriefVerdict}");
             if (x.Design.Note is { } change) o.WriteLine($"  {"",-9} ({change})");
         }
         var judged = r.Outcomes.SelectMany(x => x.Verdicts).Where(v => v.Judged).Select(v => v.Thresholds is null ? $"{v.Probe} (at the mid level)" : v.Probe).Distinct();
         o.WriteLine($"  receivers judged: {string.Join(", ", judged)}; P high and P low are static (DC), P avg the simulated mean over the record; rules: docs/verdicts.md");
         o.WriteLine("  figures are the receiver's first edge, up to the next source edge (\"unsettled\": not settled before the next edge), settling counted from the edge's arrival at the receiver; edge-1 crossings: of the threshold band, 1 expected, with a settled level that misses its threshold beside it");
         if (eyes) o.WriteLine("  (bit pattern: the verdict is judged on the receiver's eye" + (r.Outcomes.Any(x => x.ReceiverEye?.Thresholds is not null) ? ", measured against the receiver thresholds)" : ")"));
+        // The table cell names the rules; the account of each (probe, edge, what was measured) follows, one receiver a line.
+        var explained = r.Outcomes.Where(x => x.Result is not null && x.Verdicts.Any(v => v.Failures.Count > 0 || v.Note is not null)).ToArray();
+        if (explained.Length > 0) o.WriteLine("why (each rule missed, at its first failing edge; receivers that could not be judged):");
+        foreach (var x in explained)
+            foreach (var v in x.Verdicts.Where(v => v.Failures.Count > 0 || v.Note is not null))
+                o.WriteLine($"  {x.Design.Name,-9} {(v.Judged ? v.Summary() : $"{v.Probe}: {v.Note}")}");
         o.WriteLine($"parts (simulated with {r.Options.Series}; computed value, nearest E24, nearest E96; capacitors: next E24 value up):");
         foreach (var x in r.Outcomes.Where(x => x.Design.Parts.Count > 0))
         {

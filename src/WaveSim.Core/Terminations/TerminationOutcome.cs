@@ -30,6 +30,23 @@ public sealed record TerminationOutcome(TerminationDesign Design, SimulationResu
     /// <summary>True when the strategy applies and every judged receiver passes every rule.</summary>
     public bool MeetsLimits => Result is not null && Verdicts.Any(v => v.Judged) && Failures.Count == 0;
 
+    /// <summary>
+    /// The verdict in a few words for a table cell: "ok", "n/a", "not judged", or "fail: " and the rules missed with the receivers
+    /// that missed them (e.g. "fail: levels, ringback at u1, u2"). <see cref="Verdict"/> holds the full account.
+    /// </summary>
+    public string BriefVerdict
+    {
+        get
+        {
+            if (Result is null) return "n/a";
+            if (!Verdicts.Any(v => v.Judged)) return "not judged";
+            if (Failures.Count == 0) return Verdicts.Any(v => v.Note is not null) ? "ok (some receivers not judged)" : "ok";
+            var rules = Failures.Select(f => f.Rule).Distinct().Order().Select(r => r.ToString().ToLowerInvariant());
+            var probes = Failures.Select(f => f.Probe).Distinct();
+            return $"fail: {string.Join(", ", rules)} at {string.Join(", ", probes)}";
+        }
+    }
+
     /// <summary>"ok", "n/a", "not judged" or the rules missed (probe, edge, what was measured); receivers that could not be judged are named.</summary>
     public string Verdict
     {

@@ -134,6 +134,27 @@ simulation: { duration: 200 ns, resolution: 10 }
     }
 
     [Fact]
+    public void A_failing_row_names_its_rules_briefly_and_the_account_of_each_receiver_follows_the_table()
+    {
+        // The series row of the VTT bus: its settled low is 1.65·(18 + 32.4)/(18 + 32.4 + 50) = 0.8283 V at both receivers
+        // (Ohm's law, resistive divider at DC; ReferenceData/termination-verdicts.md), above VIL 0.8 V, so the levels rule fails
+        // at rx1 and rx2. The cell must stay short (the rules and receivers), and each receiver's account gets its own line.
+        using var cli = new CliRunner();
+        string file = cli.Write("vtt.yaml", VerdictTests.VttBus);
+        var (code, stdout, err) = CliRunner.Run("terminations", file, "--out", Path.Combine(cli.Dir, "out"));
+        Assert.True(code == 0, err);
+        var rows = stdout.Split('\n').Select(l => l.TrimEnd()).ToList();
+        string row = rows.First(l => l.StartsWith("  series ") && l.Contains(" mW "));
+        Assert.Matches(@"fail: levels(, \w+)* at rx1, rx2$", row);
+        int why = rows.FindIndex(l => l.StartsWith("why "));
+        Assert.True(why > rows.IndexOf(row), "the account follows the table");
+        var accounts = rows.Skip(why + 1).TakeWhile(l => l.StartsWith("  ")).Where(l => l.StartsWith("  series ")).ToList();
+        Assert.Equal(2, accounts.Count);
+        Assert.Contains(accounts, l => l.Contains("rx1: settled low 828 mV is above VIL 800 mV (margin -28.3 mV)"));
+        Assert.Contains(accounts, l => l.Contains("rx2: settled low 828 mV is above VIL 800 mV (margin -28.3 mV)"));
+    }
+
+    [Fact]
     public void The_command_writes_the_table_the_csv_and_the_overlay()
     {
         using var cli = new CliRunner();
