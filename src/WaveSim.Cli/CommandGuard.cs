@@ -43,6 +43,13 @@ public static class CommandGuard
             error.WriteLine("error: " + OneLine(ex.Message));
             return ExitCodes.NumericalFailure;
         }
+        catch (Exception ex) when (Environment.GetEnvironmentVariable("WAVESIM_DEBUG") is null)
+        {
+            // Anything else is a defect of ours, not the user's: still one line, with what to send us.
+            var inner = ex is TypeInitializationException { InnerException: { } i } ? i : ex;
+            error.WriteLine($"error: internal error ({inner.GetType().Name}: {OneLine(inner.Message)}); please report it with the scenario (WAVESIM_DEBUG=1 shows the stack trace)");
+            return ExitCodes.InternalError;
+        }
     }
 
     static string OneLine(string s) => s.ReplaceLineEndings(" ");

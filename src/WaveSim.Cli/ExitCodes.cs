@@ -11,6 +11,8 @@ public static class ExitCodes
     public const int BadInput = 2;
     /// <summary>The computation failed (NaN, infinity, no convergence).</summary>
     public const int NumericalFailure = 3;
+    /// <summary>A defect in WaveSim itself: an exception no input check anticipated (reported in one line, never a stack trace).</summary>
+    public const int InternalError = 4;
     /// <summary>Stopped by Ctrl+C.</summary>
     public const int Cancelled = 130;
 }

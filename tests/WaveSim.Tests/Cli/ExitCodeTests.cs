@@ -4,7 +4,7 @@ using WaveSim.Core;
 
 namespace WaveSim.Tests.Cli;
 
-/// <summary>The documented exit codes: 0 ok, 1 usage, 2 bad input, 3 numerical failure, 130 cancelled (the README's table).</summary>
+/// <summary>The documented exit codes: 0 ok, 1 usage, 2 bad input, 3 numerical failure, 4 internal error, 130 cancelled (the README's table).</summary>
 public class ExitCodeTests
 {
     [Fact]
@@ -21,6 +21,9 @@ public class ExitCodeTests
         Assert.Equal(2, CommandGuard.Run(err, () => throw new InputException("x.yaml:1:1: a: bad")));
         Assert.Equal(3, CommandGuard.Run(err, () => throw new NumericalException("not finite at step 3")));
         Assert.Equal(130, CommandGuard.Run(err, () => throw new OperationCanceledException()));
+        // An exception no input check anticipated (here one from a type initializer) is a defect: one line, exit 4.
+        Assert.Equal(4, CommandGuard.Run(err, () => throw new TypeInitializationException("X", new IndexOutOfRangeException("index 7"))));
+        Assert.Contains("internal error (IndexOutOfRangeException: index 7)", err.ToString());
         Assert.Equal(0, CommandGuard.Run(err, () => 0));
         Assert.All(err.ToString().Split('\n', StringSplitOptions.RemoveEmptyEntries), l => Assert.StartsWith("error: ", l));
     }
