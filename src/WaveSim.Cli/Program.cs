@@ -19,7 +19,7 @@ public static class Program
         ReportCommand.Create(),
         XSectionCommand.Create(),
         BenchCommand.Create(),
-        VersionInfoCommand.Create(),
+        AboutCommand.Create(),
     };
 
     /// <summary>Runs the command line and returns the exit code.</summary>

@@ -45,7 +45,7 @@ public static class CompareCommand
                 File.WriteAllText(output.File("compare.json"), RunSummary.Text(summary));
                 CompareOutputs.WriteCsv(result, output.File("compare.csv"));
                 File.WriteAllBytes(output.File("compare.png"),
-                    LineChart.RenderPng(CompareOutputs.Chart(result, $"{s.Title}: {probeName} against {Path.GetFileName(cap.Source)}"), 1200, 800));
+                    XyChart.RenderPng(CompareOutputs.Chart(result, $"{s.Title}: {probeName} against {Path.GetFileName(cap.Source)}"), 1200, 800));
                 output.Commit();
             }
             var o = pr.InvocationConfiguration.Output;

@@ -58,7 +58,7 @@ public static class FitCommand
                 File.WriteAllText(output.File("fitted.yaml"), result.FittedText);
                 File.WriteAllText(output.File("fit.json"), RunSummary.Text(summary));
                 File.WriteAllBytes(output.File("fit.png"),
-                    LineChart.RenderPng(FitOutputs.Chart(result, $"{s.Title}: fit of {probeName} to {Path.GetFileName(cap.Source)}"), 1200, 800));
+                    XyChart.RenderPng(FitOutputs.Chart(result, $"{s.Title}: fit of {probeName} to {Path.GetFileName(cap.Source)}"), 1200, 800));
                 output.Commit();
             }
             var o = pr.InvocationConfiguration.Output;

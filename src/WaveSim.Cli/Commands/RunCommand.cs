@@ -63,8 +63,8 @@ public static class RunCommand
                 ProbesCsv.Write(result, output.File("probes.csv"));
                 File.WriteAllText(output.File("summary.json"), RunSummary.Text(summary));
                 var chart = picture.Chart;
-                File.WriteAllBytes(output.File("waveforms.png"), LineChart.RenderPng(chart, 1200, pr.GetValue(currents) ? 900 : 600));
-                if (pr.GetValue(svg)) File.WriteAllText(output.File("waveforms.svg"), LineChart.RenderSvg(chart, 1200, pr.GetValue(currents) ? 900 : 600));
+                File.WriteAllBytes(output.File("waveforms.png"), XyChart.RenderPng(chart, 1200, pr.GetValue(currents) ? 900 : 600));
+                if (pr.GetValue(svg)) File.WriteAllText(output.File("waveforms.svg"), XyChart.RenderSvg(chart, 1200, pr.GetValue(currents) ? 900 : 600));
                 File.WriteAllBytes(output.File("spacetime.png"), RunPictures.SpaceTime(result, 1000, 800));
                 foreach (var eye in eyes)
                     if (RunEyes.RenderPng(s.Title, eye, 1000, 700) is { } png) File.WriteAllBytes(output.File($"eye_{eye.Probe.Name}.png"), png);

@@ -62,7 +62,7 @@ public static class SweepCommand
                     string file = $"sweep_{FigureSelector.Stem(f)}.png";
                     leftOut.AddRange(SweepPanelGaps.LeftOut(result, f).Select(l => $"{file}: {l}" + (chart.Panels.Count == 0 ? "; no chart written" : "")));
                     if (chart.Panels.Count == 0) continue;
-                    File.WriteAllBytes(output.File(file), LineChart.RenderPng(chart, 1200, 300 + 300 * chart.Panels.Count));
+                    File.WriteAllBytes(output.File(file), XyChart.RenderPng(chart, 1200, 300 + 300 * chart.Panels.Count));
                     charted.Add(file);
                 }
                 output.Commit();

@@ -73,7 +73,7 @@ public static class TdrCommand
                 {
                     TdrOutputs.WriteCsv(result, output.File("tdr.csv"));
                     File.WriteAllText(output.File("tdr.json"), RunSummary.Text(summary));
-                    File.WriteAllBytes(output.File("tdr.png"), LineChart.RenderPng(TdrOutputs.Chart(result, title, cap is null ? s : null), 1200, 800));
+                    File.WriteAllBytes(output.File("tdr.png"), XyChart.RenderPng(TdrOutputs.Chart(result, title, cap is null ? s : null), 1200, 800));
                     output.Commit();
                 }
                 if (staged is not null) File.Move(staged, Path.GetFullPath(pr.GetValue(toScenario)!), overwrite: true);

@@ -48,7 +48,7 @@ public static class TerminationsCommand
             using (var output = new OutputFolder(dir))
             {
                 TerminationsCsv.Write(result, output.File("terminations.csv"));
-                File.WriteAllBytes(output.File("terminations.png"), LineChart.RenderPng(TerminationPictures.Receiver(result), 1200, 650));
+                File.WriteAllBytes(output.File("terminations.png"), XyChart.RenderPng(TerminationPictures.Receiver(result), 1200, 650));
                 output.Commit();
             }
             var o = pr.InvocationConfiguration.Output;

@@ -121,7 +121,7 @@ public static class ScenarioFit
         }
 
         // The fitter's own count is checked against the budget; the alignment run above is already spent.
-        FitResult fit = BoundedLeastSquares.Fit(Residuals, first, lower, upper, options.MaxSimulations - 1, ct, options.ReductionTolerance);
+        LeastSquaresResult fit = BoundedLeastSquares.Fit(Residuals, first, lower, upper, options.MaxSimulations - 1, ct, options.ReductionTolerance);
 
         double[] best = fitOffset ? fit.Values[..^1] : fit.Values;
         double offset = fitOffset ? fit.Values[^1] : 0.0;

@@ -20,7 +20,7 @@ public static class FrequencyOutputs
     {
         Directory.CreateDirectory(dir);
         WriteCsv(Path.Combine(dir, CsvName), response);
-        WriteAtomic(Path.Combine(dir, PngName), path => File.WriteAllBytes(path, LineChart.RenderPng(Chart(response, title), 1200, 960)));
+        WriteAtomic(Path.Combine(dir, PngName), path => File.WriteAllBytes(path, XyChart.RenderPng(Chart(response, title), 1200, 960)));
     }
 
     /// <summary>
@@ -50,9 +50,9 @@ public static class FrequencyOutputs
     public static ChartSpec Chart(FrequencyResponse r, string title)
     {
         double[] x = r.F;
-        var gains = r.Probes.Select(p => new Series(p.Name, x, Enumerable.Range(0, x.Length).Select(p.GainDb).ToArray())).ToArray();
+        var gains = r.Probes.Select(p => new PlotSeries(p.Name, x, Enumerable.Range(0, x.Length).Select(p.GainDb).ToArray())).ToArray();
         var phases = r.Probes.Select(p => PhaseSeries(p.Name, x, Enumerable.Range(0, x.Length).Select(p.PhaseDeg).ToArray(), r.Logarithmic)).ToArray();
-        var zin = new Series("|Zin|", x, r.Zin.Select(z => z.Magnitude).ToArray());
+        var zin = new PlotSeries("|Zin|", x, r.Zin.Select(z => z.Magnitude).ToArray());
         var panels = new List<ChartPanel>();
         if (gains.Length > 0)
         {
@@ -67,7 +67,7 @@ public static class FrequencyOutputs
     /// A wrapped phase trace with a gap wherever it jumps by more than 180° between neighbours (a wrap, not a feature), so no
     /// vertical stroke joins +180° to −180°.
     /// </summary>
-    internal static Series PhaseSeries(string name, double[] f, double[] phase, bool logarithmic)
+    internal static PlotSeries PhaseSeries(string name, double[] f, double[] phase, bool logarithmic)
     {
         var xs = new List<double>(f.Length + 8);
         var ys = new List<double>(f.Length + 8);
@@ -81,7 +81,7 @@ public static class FrequencyOutputs
             xs.Add(f[k]);
             ys.Add(phase[k]);
         }
-        return new Series(name, xs.ToArray(), ys.ToArray());
+        return new PlotSeries(name, xs.ToArray(), ys.ToArray());
     }
 
     static void WriteAtomic(string path, Action<string> write)

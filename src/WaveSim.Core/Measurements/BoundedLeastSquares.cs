@@ -41,7 +41,7 @@ public static class BoundedLeastSquares
     /// <exception cref="InputException">Inconsistent sizes, bounds or start.</exception>
     /// <exception cref="NumericalException">The residuals at the start are not finite or change length.</exception>
     /// <exception cref="OperationCanceledException"><paramref name="ct"/> was cancelled.</exception>
-    public static FitResult Fit(Func<double[], double[]> residuals, double[] start, double[] lower, double[] upper,
+    public static LeastSquaresResult Fit(Func<double[], double[]> residuals, double[] start, double[] lower, double[] upper,
         int maxEvaluations, CancellationToken ct = default, double reductionTolerance = DefaultReductionTolerance)
     {
         ArgumentNullException.ThrowIfNull(residuals);
@@ -151,7 +151,7 @@ public static class BoundedLeastSquares
 
         double[] values = External(u);
         double[] sigma = Uncertainty(values, res, lower, upper, Evaluate, maxEvaluations - evaluations);
-        return new FitResult(values, sigma, Math.Sqrt(ssr / res.Count), evaluations, converged);
+        return new LeastSquaresResult(values, sigma, Math.Sqrt(ssr / res.Count), evaluations, converged);
     }
 
     static Matrix<double> Jacobian(Vector<double> u, Vector<double> res, Vector<double> typical,

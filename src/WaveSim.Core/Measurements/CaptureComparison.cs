@@ -40,7 +40,7 @@ public static class CaptureComparison
     {
         ProbeTrace trace = sim.Probe(probe);
         CaptureTimeSpan.RequireFits(capture, sim.Time[^1] - sim.Time[0]);
-        ComparisonResult c = WaveformComparison.Compare(sim.Time, trace.Volts, capture.Time, capture.Volts, mode);
+        AlignedWaveforms c = WaveformComparison.Compare(sim.Time, trace.Volts, capture.Time, capture.Volts, mode);
         CaptureTimeSpan.RequireOverlap(capture, c.OffsetSeconds, sim.Time[0], sim.Time[^1]);
         // Both sets of figures on the same grid and with the same options, so that their difference is the capture's doing.
         // The simulation's edge heads for its DC level, as in `wavesim run` (a clock's record tail is no settled level).
@@ -63,7 +63,7 @@ public static class CaptureComparison
     /// (the windows the figures take their levels from). A level offset of the capture shows in its figures, and one noisy
     /// first sample does not pass for a low level.
     /// </summary>
-    static SignalQualityOptions CaptureLevels(SignalQualityOptions simOptions, ComparisonResult c)
+    static SignalQualityOptions CaptureLevels(SignalQualityOptions simOptions, AlignedWaveforms c)
     {
         int n = c.Residual.Length;
         double head = c.Residual.Take(Math.Max(1, n / 50)).Average();

@@ -10,7 +10,7 @@ namespace WaveSim.Core.Measurements;
 /// <param name="Figures">Each figure of both, with capture minus simulation, in <see cref="SignalFigures.FigureNames"/> order.</param>
 public sealed record CaptureComparisonResult(
     string Probe,
-    ComparisonResult Comparison,
+    AlignedWaveforms Comparison,
     SignalFigures SimulatedFigures,
     SignalFigures CapturedFigures,
     IReadOnlyList<FigureDifference> Figures);

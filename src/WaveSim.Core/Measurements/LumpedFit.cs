@@ -50,9 +50,9 @@ internal static class LumpedFit
             for (int i = 0; i < m; i++) model[i] -= y[i];
             return model;
         }
-        FitResult? Best(Func<double[], double[]> residual, IEnumerable<double[]> starts, double[] lower, double[] upper)
+        LeastSquaresResult? Best(Func<double[], double[]> residual, IEnumerable<double[]> starts, double[] lower, double[] upper)
         {
-            FitResult? best = null;
+            LeastSquaresResult? best = null;
             foreach (double[] start in starts)
             {
                 for (int j = 0; j < start.Length; j++) start[j] = Math.Clamp(start[j], lower[j] + 1e-3 * (upper[j] - lower[j]), upper[j] - 1e-3 * (upper[j] - lower[j]));
@@ -81,7 +81,7 @@ internal static class LumpedFit
             .Where(p => p.Fit is not null).OrderBy(p => p.Fit!.RmsResidual).ToList();
 
         bool lBetter = singleC is null || (singleL is not null && singleL.RmsResidual <= singleC.RmsResidual);
-        FitResult single = (lBetter ? singleL : singleC) ?? throw new NumericalException("the lumped-element fit failed on every start");
+        LeastSquaresResult single = (lBetter ? singleL : singleC) ?? throw new NumericalException("the lumped-element fit failed on every start");
         Outcome one = lBetter
             ? new Outcome(single.Values[0], single.Values[1], 0, true, false, single.RmsResidual * scale)
             : new Outcome(single.Values[0], 0, single.Values[1], true, false, single.RmsResidual * scale);

@@ -105,7 +105,7 @@ internal static class ReactiveEndFit
             {
                 double[] x0 = [Math.Clamp(ts0, lower[0] + 1e-3 * ramp, upper[0] - 1e-3 * ramp), Math.Clamp(tau0, 2 * lower[1], upper[1] / 2), ramp / 4];
                 if (passed is not null) x0 = x0[..2];
-                FitResult f;
+                LeastSquaresResult f;
                 try { f = BoundedLeastSquares.Fit(Residual, x0, lower, upper, 300); }
                 catch (NumericalException) { continue; }
                 if (f.RmsResidual < bestRms)

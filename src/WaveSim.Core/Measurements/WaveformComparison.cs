@@ -27,7 +27,7 @@ public static class WaveformComparison
     /// <param name="step">Grid step, s. Default (null): the finer of the two median sample intervals. Must be positive.</param>
     /// <returns>The offset, the common grid, both waveforms on it and the residual statistics.</returns>
     /// <exception cref="InputException">Too few samples, time not increasing, no overlap after alignment, or a flat waveform that cannot be aligned.</exception>
-    public static ComparisonResult Compare(double[] simT, double[] simV, double[] capT, double[] capV, AlignMode mode, double? step = null)
+    public static AlignedWaveforms Compare(double[] simT, double[] simV, double[] capT, double[] capV, AlignMode mode, double? step = null)
     {
         Validate(simT, simV, "simulation");
         Validate(capT, capV, "capture");
@@ -75,7 +75,7 @@ public static class WaveformComparison
         double swing = max - min;
         double rmsPct = swing > 0 ? 100 * rms / swing : double.NaN;
         double peakPct = swing > 0 ? 100 * peak / swing : double.NaN;
-        return new ComparisonResult(offset, grid, s, c, r, rms, peak, rmsPct, peakPct);
+        return new AlignedWaveforms(offset, grid, s, c, r, rms, peak, rmsPct, peakPct);
     }
 
     /// <summary>

@@ -30,5 +30,5 @@ public static class CaptureResidual
     /// <param name="simulated">The simulation at those times, V.</param>
     /// <param name="simulatedName">What the simulation is called in the overlay above (e.g. "fitted"), for the legend.</param>
     public static ChartPanel Panel(double[] time, double[] captured, double[] simulated, string simulatedName) =>
-        new(Definition, "V", [new Series($"residual, captured − {simulatedName}", time, Of(captured, simulated))]) { HeightWeight = 0.5 };
+        new(Definition, "V", [new PlotSeries($"residual, captured − {simulatedName}", time, Of(captured, simulated))]) { HeightWeight = 0.5 };
 }

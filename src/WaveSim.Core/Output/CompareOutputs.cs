@@ -68,8 +68,8 @@ public static class CompareOutputs
         [
             new ChartPanel("Voltage", "V",
             [
-                new Series("captured", c.Time, c.Captured) { Look = TraceLook.Reference },
-                new Series("simulated " + r.Probe, c.Time, c.Simulated),
+                new PlotSeries("captured", c.Time, c.Captured) { Look = TraceLook.Reference },
+                new PlotSeries("simulated " + r.Probe, c.Time, c.Simulated),
             ]),
             CaptureResidual.Panel(c.Time, c.Captured, c.Simulated, "simulated"),
         ]);

@@ -65,9 +65,9 @@ public static class FitOutputs
         [
             new ChartPanel("Voltage", "V",
             [
-                new Series("captured", r.Time, r.Captured) { Look = TraceLook.Reference },
-                new Series("start", r.Time, r.StartSimulated) { Look = TraceLook.Dashed },
-                new Series("fitted", r.Time, r.FittedSimulated),
+                new PlotSeries("captured", r.Time, r.Captured) { Look = TraceLook.Reference },
+                new PlotSeries("start", r.Time, r.StartSimulated) { Look = TraceLook.Dashed },
+                new PlotSeries("fitted", r.Time, r.FittedSimulated),
             ]),
             CaptureResidual.Panel(r.Time, r.Captured, r.FittedSimulated, "fitted"),
         ]);

@@ -4,7 +4,6 @@ using WaveSim.Core.Model;
 using WaveSim.Core.Rendering;
 using WaveSim.Core.Solver;
 using WaveSim.Core.Units;
-using LineElement = WaveSim.Core.Model.LineElement;
 
 namespace WaveSim.Core.Output;
 

@@ -2,7 +2,6 @@ using WaveSim.Core.Model;
 using WaveSim.Core.Rendering;
 using WaveSim.Core.Solver;
 using WaveSim.Core.Units;
-using RLineElement = WaveSim.Core.Rendering.LineElement;
 
 namespace WaveSim.Core.Output;
 
@@ -65,12 +64,12 @@ public static class RunPictures
         double[] Cut(double[] v) => v[first..(last + 1)];
         double[] time = Cut(r.Time);
         var probes = chosen.Select(i => r.Probes[i]).ToList();
-        var voltages = new ChartPanel("Voltage", "V", probes.Select(p => new Rendering.Series(p.Name, time, Cut(p.Volts))).ToList())
+        var voltages = new ChartPanel("Voltage", "V", probes.Select(p => new Rendering.PlotSeries(p.Name, time, Cut(p.Volts))).ToList())
         {
             ReferenceLines = Thresholds(s, specs, options.Probes is null),
         };
         var panels = new List<ChartPanel> { voltages };
-        if (options.Currents) panels.Add(new ChartPanel("Current", "A", probes.Select(p => new Rendering.Series(p.Name, time, Cut(p.Amps))).ToList()));
+        if (options.Currents) panels.Add(new ChartPanel("Current", "A", probes.Select(p => new Rendering.PlotSeries(p.Name, time, Cut(p.Amps))).ToList()));
         double reach = specs.Count == 0 ? 0 : specs.Max(p => RunEyes.DelayTo(s.Line, p, 0));
         int shown = edges.Count(e => e >= window.Start && e + reach <= window.Stop);
         string title = limited ? $"{s.Title} (first {shown} of {edges.Length} source edges)" : s.Title;
@@ -172,7 +171,7 @@ public static class RunPictures
         var pieces = new List<LinePiece>();
         var pieceOf = new Dictionary<string, int>();
         for (int i = 0; i < r.Lines.Count; i++) pieceOf[r.Lines[i].Path] = i;
-        var elements = new List<RLineElement> { new(0, LineElementKind.Source, "source" + (s.Source.Resistance > 0 ? " " + Quantity.Format(s.Source.Resistance, "Ω") : "")) };
+        var elements = new List<NetMark> { new(0, NetMarkKind.Source, "source" + (s.Source.Resistance > 0 ? " " + Quantity.Format(s.Source.Resistance, "Ω") : "")) };
         var offsets = new Dictionary<string, double> { [""] = 0 };
         Walk(s.Line, s.Load, "", 0, elements, offsets, pieceOf);
         foreach (var line in r.Lines)
@@ -185,40 +184,40 @@ public static class RunPictures
             string path = string.Join("/", s.Probes[i].BranchPath);
             if (!pieceOf.TryGetValue(path, out int piece)) continue;
             double off = offsets.TryGetValue(path, out double o) ? o : 0;
-            elements.Add(new RLineElement(r.Probes[i].Position + off, LineElementKind.Probe, r.Probes[i].Name) { Piece = piece });
+            elements.Add(new NetMark(r.Probes[i].Position + off, NetMarkKind.Probe, r.Probes[i].Name) { Piece = piece });
         }
         return new LineLayout(pieces, s.LengthUnit, s.LengthFactor, elements);
     }
 
-    static void Walk(IReadOnlyList<Model.LineElement> line, LoadSpec load, string path, double start, List<RLineElement> elements,
+    static void Walk(IReadOnlyList<Model.LineElement> line, LoadSpec load, string path, double start, List<NetMark> elements,
                      Dictionary<string, double> offsets, Dictionary<string, int> pieceOf)
     {
         double pos = start;
         int piece = pieceOf.TryGetValue(path, out int k) ? k : 0;
-        void Add(double at, LineElementKind kind, string label) => elements.Add(new RLineElement(at, kind, label) { Piece = piece });
+        void Add(double at, NetMarkKind kind, string label) => elements.Add(new NetMark(at, kind, label) { Piece = piece });
         foreach (var e in line)
         {
             switch (e)
             {
                 case Segment seg:
-                    Add(pos, LineElementKind.SegmentBoundary, "Z0 " + Quantity.Format(seg.Z0, "Ω", 3));
+                    Add(pos, NetMarkKind.SegmentBoundary, "Z0 " + Quantity.Format(seg.Z0, "Ω", 3));
                     pos += seg.Length;
                     break;
                 case Shunt sh:
-                    Add(pos, LineElementKind.Shunt, sh.Parts.Describe());
+                    Add(pos, NetMarkKind.Shunt, sh.Parts.Describe());
                     break;
                 case Model.Series se:
-                    Add(pos, LineElementKind.Series, se.Parts.Describe());
+                    Add(pos, NetMarkKind.Series, se.Parts.Describe());
                     break;
                 case Branch b:
                     string sub = path.Length == 0 ? b.Name : path + "/" + b.Name;
                     offsets[sub] = pos;
-                    Add(pos, LineElementKind.Branch, b.Name);
+                    Add(pos, NetMarkKind.Branch, b.Name);
                     Walk(b.Line, b.Load, sub, pos, elements, offsets, pieceOf);
                     break;
             }
         }
-        Add(pos, LineElementKind.Load, "load " + load.Describe());
+        Add(pos, NetMarkKind.Load, "load " + load.Describe());
     }
 
     /// <summary>The snapshots at the frame instants, as the renderer's type.</summary>

@@ -5,7 +5,7 @@ using WaveSim.Core.Measurements;
 using WaveSim.Core.Model;
 using WaveSim.Core.Rendering;
 using WaveSim.Core.Units;
-using Series = WaveSim.Core.Rendering.Series;
+using Series = WaveSim.Core.Rendering.PlotSeries;
 
 namespace WaveSim.Core.Output;
 
@@ -89,10 +89,10 @@ public static class TdrOutputs
         [
             new ChartPanel("Impedance", "Ω",
             [
-                new Series("layer peeling", r.DistanceM, Clip(r.LayerOhms)),
-                new Series("naive Z0(1+ρ)/(1-ρ)", r.DistanceM, Clip(r.NaiveOhms)),
+                new PlotSeries("layer peeling", r.DistanceM, Clip(r.LayerOhms)),
+                new PlotSeries("naive Z0(1+ρ)/(1-ρ)", r.DistanceM, Clip(r.NaiveOhms)),
             ]) { ReferenceLines = refs },
-            new ChartPanel("Reflection ρ", "", [new Series("ρ", r.DistanceM, r.Rho)]) { HeightWeight = 0.5 },
+            new ChartPanel("Reflection ρ", "", [new PlotSeries("ρ", r.DistanceM, r.Rho)]) { HeightWeight = 0.5 },
         ]);
     }
 

@@ -4,7 +4,7 @@ namespace WaveSim.Core.Rendering;
 /// <param name="YLabel">Quantity name of the Y axis, e.g. "Voltage".</param>
 /// <param name="YUnit">SI unit symbol of the Y axis, e.g. "V" (an engineering prefix is chosen from the data).</param>
 /// <param name="Series">The traces; colours follow <see cref="Palette"/> in this order.</param>
-public sealed record ChartPanel(string YLabel, string YUnit, IReadOnlyList<Series> Series)
+public sealed record ChartPanel(string YLabel, string YUnit, IReadOnlyList<PlotSeries> Series)
 {
     /// <summary>Fixed Y range; null fits the data with 5 % head-room above and below.</summary>
     public AxisRange? YRange { get; init; }

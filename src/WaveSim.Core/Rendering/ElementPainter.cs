@@ -6,7 +6,7 @@ namespace WaveSim.Core.Rendering;
 internal static class ElementPainter
 {
     /// <summary>Label rows: each label goes in the first row where it does not overlap the previous label.</summary>
-    public static int[] LabelRows(IReadOnlyList<LineElement> elements, ChartGeometry g, SKFont font, int maxRows, out int rowsUsed)
+    public static int[] LabelRows(IReadOnlyList<NetMark> elements, ChartGeometry g, SKFont font, int maxRows, out int rowsUsed)
     {
         var rows = new int[elements.Count];
         var rowEnd = Enumerable.Repeat(float.NegativeInfinity, maxRows).ToArray();
@@ -25,25 +25,25 @@ internal static class ElementPainter
         return rows;
     }
 
-    public static void Lines(SKCanvas canvas, ChartGeometry g, IReadOnlyList<LineElement> elements, SKColor colour)
+    public static void Lines(SKCanvas canvas, ChartGeometry g, IReadOnlyList<NetMark> elements, SKColor colour)
     {
         using SKPaint solid = Ink.Stroke(colour, 1f);
         using SKPaint dotted = Ink.Stroke(colour, 1f, [2f, 3f]);
         SKRect r = g.PlotArea;
-        foreach (LineElement e in elements)
+        foreach (NetMark e in elements)
         {
-            if (!InRange(g, e) || e.Kind == LineElementKind.Probe) continue;
+            if (!InRange(g, e) || e.Kind == NetMarkKind.Probe) continue;
             float px = Ink.Snap(g.XToPixel(e.Position));
-            canvas.DrawLine(px, r.Top, px, r.Bottom, e.Kind == LineElementKind.SegmentBoundary ? dotted : solid);
+            canvas.DrawLine(px, r.Top, px, r.Bottom, e.Kind == NetMarkKind.SegmentBoundary ? dotted : solid);
         }
     }
 
     /// <summary>Symbols sitting on the bottom edge of the plot, so each kind is told apart at a glance (probes: see <see cref="Probes"/>).</summary>
-    public static void Symbols(SKCanvas canvas, ChartGeometry g, IReadOnlyList<LineElement> elements, float size)
+    public static void Symbols(SKCanvas canvas, ChartGeometry g, IReadOnlyList<NetMark> elements, float size)
     {
         float y = g.PlotArea.Bottom - size * 0.9f;
-        foreach (LineElement e in elements)
-            if (InRange(g, e) && e.Kind != LineElementKind.Probe) Symbol(canvas, e.Kind, g.XToPixel(e.Position), y, size * 0.5f);
+        foreach (NetMark e in elements)
+            if (InRange(g, e) && e.Kind != NetMarkKind.Probe) Symbol(canvas, e.Kind, g.XToPixel(e.Position), y, size * 0.5f);
     }
 
     /// <summary>
@@ -51,36 +51,36 @@ internal static class ElementPainter
     /// series part, a ring for the source, a filled bar for the load, a diamond for a branch junction, a downward triangle for
     /// a probe, a short dotted stroke for a segment boundary (drawn in the plot as a dotted line).
     /// </summary>
-    public static void Symbol(SKCanvas canvas, LineElementKind kind, float x, float y, float s)
+    public static void Symbol(SKCanvas canvas, NetMarkKind kind, float x, float y, float s)
     {
         using SKPaint outline = Ink.Stroke(Palette.Ink, 1.25f);
         using SKPaint fill = Ink.Fill(Palette.Ink);
         using SKPaint paper = Ink.Fill(Palette.Background);
         switch (kind)
         {
-            case LineElementKind.Shunt:
+            case NetMarkKind.Shunt:
                 canvas.DrawRect(x - s, y - s * 0.55f, 2 * s, s * 1.1f, paper);
                 canvas.DrawLine(x - s, y - s * 0.3f, x + s, y - s * 0.3f, outline);
                 canvas.DrawLine(x - s, y + s * 0.3f, x + s, y + s * 0.3f, outline);
                 break;
-            case LineElementKind.Series:
+            case NetMarkKind.Series:
                 canvas.DrawRect(x - s * 0.5f, y - s, s, 2 * s, paper);
                 canvas.DrawRect(x - s * 0.5f, y - s, s, 2 * s, outline);
                 break;
-            case LineElementKind.Source:
+            case NetMarkKind.Source:
                 canvas.DrawCircle(x, y, s, paper);
                 canvas.DrawCircle(x, y, s, outline);
                 break;
-            case LineElementKind.Load:
+            case NetMarkKind.Load:
                 canvas.DrawRect(x - s * 0.5f, y - s, s, 2 * s, fill);
                 break;
-            case LineElementKind.Branch:
+            case NetMarkKind.Branch:
                 using (SKPath diamond = Polygon([(x, y - s), (x + s, y), (x, y + s), (x - s, y)])) { canvas.DrawPath(diamond, paper); canvas.DrawPath(diamond, outline); }
                 break;
-            case LineElementKind.Probe:
+            case NetMarkKind.Probe:
                 using (SKPath down = Polygon([(x - s * 0.8f, y - s * 0.7f), (x + s * 0.8f, y - s * 0.7f), (x, y + s * 0.7f)])) canvas.DrawPath(down, fill);
                 break;
-            case LineElementKind.SegmentBoundary:
+            case NetMarkKind.SegmentBoundary:
                 using (SKPaint dotted = Ink.Stroke(Palette.Muted, 1.25f, [2f, 3f])) canvas.DrawLine(x, y - s * 1.2f, x, y + s * 1.2f, dotted);
                 break;
         }
@@ -96,15 +96,15 @@ internal static class ElementPainter
     }
 
     /// <summary>Probe marks: a triangle on the top edge of the plot pointing at the probe's position, its name beside it.</summary>
-    public static void Probes(SKCanvas canvas, ChartGeometry g, IReadOnlyList<LineElement> elements, SKFont font)
+    public static void Probes(SKCanvas canvas, ChartGeometry g, IReadOnlyList<NetMark> elements, SKFont font)
     {
         using SKPaint text = Ink.Fill(Palette.Ink);
         float s = font.Size * 0.5f, y = g.PlotArea.Top + s * 0.8f;
-        foreach (LineElement e in elements)
+        foreach (NetMark e in elements)
         {
-            if (e.Kind != LineElementKind.Probe || !InRange(g, e)) continue;
+            if (e.Kind != NetMarkKind.Probe || !InRange(g, e)) continue;
             float x = g.XToPixel(e.Position);
-            Symbol(canvas, LineElementKind.Probe, x, y, s);
+            Symbol(canvas, NetMarkKind.Probe, x, y, s);
             if (string.IsNullOrEmpty(e.Label)) continue;
             bool leftSide = x > g.PlotArea.Right - Ink.Width(font, e.Label) - font.Size;
             Ink.TextCentredV(canvas, e.Label, leftSide ? x - s : x + s, y + font.Size * 0.15f, leftSide ? SKTextAlign.Right : SKTextAlign.Left, font, text);
@@ -112,24 +112,24 @@ internal static class ElementPainter
     }
 
     /// <summary>The legend's words for each kind, in the order the legend lists them.</summary>
-    public static readonly IReadOnlyList<(LineElementKind Kind, string Text)> LegendNames =
+    public static readonly IReadOnlyList<(NetMarkKind Kind, string Text)> LegendNames =
     [
-        (LineElementKind.Source, "source"),
-        (LineElementKind.SegmentBoundary, "segment boundary"),
-        (LineElementKind.Series, "series part"),
-        (LineElementKind.Shunt, "shunt part"),
-        (LineElementKind.Branch, "branch junction"),
-        (LineElementKind.Load, "load"),
-        (LineElementKind.Probe, "probe"),
+        (NetMarkKind.Source, "source"),
+        (NetMarkKind.SegmentBoundary, "segment boundary"),
+        (NetMarkKind.Series, "series part"),
+        (NetMarkKind.Shunt, "shunt part"),
+        (NetMarkKind.Branch, "branch junction"),
+        (NetMarkKind.Load, "load"),
+        (NetMarkKind.Probe, "probe"),
     ];
 
     /// <summary>Labels centred over each element, row 0 nearest the plot.</summary>
-    public static void Labels(SKCanvas canvas, ChartGeometry g, IReadOnlyList<LineElement> elements, int[] rows, SKFont font, float rowHeight)
+    public static void Labels(SKCanvas canvas, ChartGeometry g, IReadOnlyList<NetMark> elements, int[] rows, SKFont font, float rowHeight)
     {
         using SKPaint text = Ink.Fill(Palette.Ink);
         for (int i = 0; i < elements.Count; i++)
         {
-            LineElement e = elements[i];
+            NetMark e = elements[i];
             if (!InRange(g, e) || string.IsNullOrEmpty(e.Label)) continue;
             float x = LabelCentre(g, e.Position, Ink.Width(font, e.Label), font.Size);
             float cy = g.PlotArea.Top - (rows[i] + 0.5f) * rowHeight;
@@ -145,7 +145,7 @@ internal static class ElementPainter
         return lo <= hi ? Math.Clamp(x, lo, hi) : g.PlotArea.MidX;
     }
 
-    static bool InRange(ChartGeometry g, LineElement e) =>
+    static bool InRange(ChartGeometry g, NetMark e) =>
         double.IsFinite(e.Position) && e.Position >= g.X.Min - 1e-12 * Math.Abs(g.X.Max - g.X.Min) && e.Position <= g.X.Max + 1e-12 * Math.Abs(g.X.Max - g.X.Min);
 
     /// <summary>The position axis in the layout's display unit, with 1-2-5 ticks counted in that unit.</summary>

@@ -77,7 +77,7 @@ public static class EyePlot
             }
         canvas.Restore();
 
-        LineChart.DrawReferenceLines(canvas, g, options.Thresholds, small);
+        XyChart.DrawReferenceLines(canvas, g, options.Thresholds, small);
         if (options.Opening is { } o)
         {
             var box = new SKRect(g.XToPixel(o.TimeStart), g.YToPixel(o.VHigh), g.XToPixel(o.TimeEnd), g.YToPixel(o.VLow));

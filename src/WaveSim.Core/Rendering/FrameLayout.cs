@@ -6,7 +6,7 @@ namespace WaveSim.Core.Rendering;
 public sealed class FrameLayout
 {
     internal FrameLayout(ChartGeometry geometry, SKRect headerBox, int labelRows, int[] labelRowOf, float fontSize,
-                         IReadOnlyList<BranchAxis>? branches = null, IReadOnlyList<(LineElementKind Kind, string Text, SKPoint At)>? legend = null)
+                         IReadOnlyList<BranchAxis>? branches = null, IReadOnlyList<(NetMarkKind Kind, string Text, SKPoint At)>? legend = null)
     {
         Branches = branches ?? [];
         Legend = legend ?? [];
@@ -30,7 +30,7 @@ public sealed class FrameLayout
     /// The marker legend: one entry per kind of element drawn (the symbol is centred at <c>At</c>, the text follows it).
     /// Empty on a space-time map.
     /// </summary>
-    public IReadOnlyList<(LineElementKind Kind, string Text, SKPoint At)> Legend { get; }
+    public IReadOnlyList<(NetMarkKind Kind, string Text, SKPoint At)> Legend { get; }
 
     /// <summary>Rows of element labels above the plot.</summary>
     public int LabelRows { get; }

@@ -144,11 +144,11 @@ public static class FrameRenderer
     }
 
     /// <summary>Legend entries for the kinds present, flowing left to right and wrapping, bottom-aligned at <paramref name="bottom"/>.</summary>
-    static List<(LineElementKind Kind, string Text, SKPoint At)> LegendEntries(LineLayout layout, SKFont font, float left, float right, float bottom, out float height)
+    static List<(NetMarkKind Kind, string Text, SKPoint At)> LegendEntries(LineLayout layout, SKFont font, float left, float right, float bottom, out float height)
     {
         var kinds = layout.Elements.Select(e => e.Kind).ToHashSet();
         var present = ElementPainter.LegendNames.Where(n => kinds.Contains(n.Kind)).ToList();
-        var rows = new List<List<(LineElementKind, string, float)>> { new() };
+        var rows = new List<List<(NetMarkKind, string, float)>> { new() };
         float x = left, symbol = font.Size * 1.4f, gap = font.Size * 1.3f;
         foreach (var (kind, text) in present)
         {
@@ -159,7 +159,7 @@ public static class FrameRenderer
         }
         float rowH = font.Size * 1.5f;
         height = present.Count == 0 ? 0 : rows.Count * rowH + font.Size * 0.3f;
-        var entries = new List<(LineElementKind, string, SKPoint)>();
+        var entries = new List<(NetMarkKind, string, SKPoint)>();
         for (int r = 0; r < rows.Count; r++)
             foreach (var (kind, text, cx) in rows[r])
                 entries.Add((kind, text, new SKPoint(cx, bottom - height + font.Size * 0.3f + (r + 0.5f) * rowH)));
@@ -182,7 +182,7 @@ public static class FrameRenderer
         }
 
         var mainMarks = layout.MainMarks;
-        var mainProbes = layout.Elements.Where(e => e.Piece == 0 && e.Kind == LineElementKind.Probe).ToList();
+        var mainProbes = layout.Elements.Where(e => e.Piece == 0 && e.Kind == NetMarkKind.Probe).ToList();
         AxisPainter.Grid(canvas, g);
         ElementPainter.Lines(canvas, g, mainMarks, Palette.Muted);
         Trace(canvas, g, layout.Pieces[0].X, snapshot.Voltages[0], 0, 2.5f);
@@ -200,7 +200,7 @@ public static class FrameRenderer
             ChartGeometry bg = b.Geometry;
             // The branch's own elements, moved to its axis (which counts from the junction).
             var marks = layout.Elements.Where(e => e.Piece == b.Piece).Select(e => e with { Position = e.Position - b.Junction }).ToList();
-            var lines = marks.Where(e => e.Kind != LineElementKind.Probe).ToList();
+            var lines = marks.Where(e => e.Kind != NetMarkKind.Probe).ToList();
             AxisPainter.Grid(canvas, bg);
             ElementPainter.Lines(canvas, bg, lines, Palette.Muted);
             double[] x = layout.Pieces[b.Piece].X.Select(v => v - b.Junction).ToArray();

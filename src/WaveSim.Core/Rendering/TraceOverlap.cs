@@ -17,7 +17,7 @@ public static class TraceOverlap
     /// <param name="a">One trace (X ascending).</param>
     /// <param name="b">The other trace (X ascending).</param>
     /// <param name="tolerance">Largest vertical distance, in Y units, at which the two still look like one line.</param>
-    public static bool Coincide(Series a, Series b, double tolerance)
+    public static bool Coincide(PlotSeries a, PlotSeries b, double tolerance)
     {
         ArgumentNullException.ThrowIfNull(a);
         ArgumentNullException.ThrowIfNull(b);
@@ -30,7 +30,7 @@ public static class TraceOverlap
     }
 
     /// <summary>Every finite point of <paramref name="p"/> in [lo, hi] has <paramref name="q"/> within the tolerance.</summary>
-    static bool Within(Series p, Series q, double lo, double hi, double tolerance)
+    static bool Within(PlotSeries p, PlotSeries q, double lo, double hi, double tolerance)
     {
         int k = 0, compared = 0;
         for (int i = 0; i < p.X.Length; i++)
@@ -47,7 +47,7 @@ public static class TraceOverlap
     }
 
     /// <summary>q at x, interpolated between its points k and k + 1 (or its point k when x falls on it); NaN in a gap.</summary>
-    static double At(Series q, int k, double x)
+    static double At(PlotSeries q, int k, double x)
     {
         if (q.X.Length == 0) return double.NaN;
         if (k + 1 >= q.X.Length || x <= q.X[k]) return q.X[k] == x ? q.Y[k] : double.NaN;
@@ -56,7 +56,7 @@ public static class TraceOverlap
         return y0 + (x - x0) / (x1 - x0) * (y1 - y0);
     }
 
-    static (double Min, double Max) Span(Series s)
+    static (double Min, double Max) Span(PlotSeries s)
     {
         double min = double.PositiveInfinity, max = double.NegativeInfinity;
         for (int i = 0; i < s.X.Length; i++)

@@ -67,7 +67,7 @@ public static class HtmlReport
         if (picture.Limited)
             w.El("p", $"The picture shows {picture.Shown.Describe()}: the start-up and the first {picture.EdgesShown} of " +
                 $"{picture.SourceEdges} source edges. The figures and verdicts cover the whole record.", ("class", "note"), ("id", "waveform-window"));
-        w.Image("waveforms", LineChart.RenderPng(picture.Chart, ReportImages.WaveformWidth, ReportImages.WaveformHeight),
+        w.Image("waveforms", XyChart.RenderPng(picture.Chart, ReportImages.WaveformWidth, ReportImages.WaveformHeight),
             ReportImages.WaveformWidth, ReportImages.WaveformHeight, "Probe voltages against time");
         w.El("h2", "Space-time map");
         w.El("p", "Voltage along the main line (across) against time (down).", ("class", "note"));
@@ -200,7 +200,7 @@ public static class HtmlReport
                 (o.Result is null ? "n/a: " + o.Design.Note : o.Verdict, o.Result is null ? null : Cls(o.MeetsLimits))]);
         }
         w.Raw("</table>\n");
-        w.Image("terminations-overlay", LineChart.RenderPng(TerminationPictures.Receiver(t), ReportImages.TerminationsWidth, ReportImages.TerminationsHeight),
+        w.Image("terminations-overlay", XyChart.RenderPng(TerminationPictures.Receiver(t), ReportImages.TerminationsWidth, ReportImages.TerminationsHeight),
             ReportImages.TerminationsWidth, ReportImages.TerminationsHeight, "Receiver voltage for every termination strategy");
     }
 

@@ -29,7 +29,7 @@ public static class SweepPictures
                 var pts = g.OrderBy(p => p.Values[0]).ToArray();
                 string name = r.Axes.Count == 1 ? probe
                     : string.Join(", ", r.Axes.Skip(1).Select((a, k) => a.KeyPath + " " + Quantity.Format(pts[0].Values[k + 1], a.DisplayUnit, 3)));
-                return new Rendering.Series(name, pts.Select(p => p.Values[0]).ToArray(), pts.Select(p => r.Value(p, target) ?? double.NaN).ToArray());
+                return new Rendering.PlotSeries(name, pts.Select(p => p.Values[0]).ToArray(), pts.Select(p => r.Value(p, target) ?? double.NaN).ToArray());
             }).ToList();
             panels.Add(new ChartPanel($"{probe} {FigureSelector.Stem(figure).Replace('_', ' ')}", FigureSelector.Unit(figure), series)
             {
@@ -55,7 +55,7 @@ public static class SweepPictures
     }
 
     /// <summary>Points whose neighbours are gaps (the figure does not apply there): a line cannot show them, so they get a ring.</summary>
-    static IEnumerable<Marker> IsolatedPoints(Rendering.Series s)
+    static IEnumerable<Marker> IsolatedPoints(Rendering.PlotSeries s)
     {
         for (int i = 0; i < s.Y.Length; i++)
         {

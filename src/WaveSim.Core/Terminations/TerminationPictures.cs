@@ -14,7 +14,7 @@ public static class TerminationPictures
     /// <summary>The chart for terminations.png.</summary>
     public static ChartSpec Receiver(TerminationStudyResult r)
     {
-        var series = new List<Rendering.Series>();
+        var series = new List<Rendering.PlotSeries>();
         Scenario? any = null;
         ProbeSpec? spec = null;
         foreach (var o in r.Outcomes)
@@ -25,7 +25,7 @@ public static class TerminationPictures
             // The net as drawn is what every strategy is judged against: a pale band beneath them, never hidden by one that
             // leaves it unchanged (a Thevenin pair equal to the user's own VTT termination).
             var look = o.Design.Kind == TerminationKind.AsDrawn ? TraceLook.Reference : TraceLook.Line;
-            series.Add(new Rendering.Series(o.Design.Name, res.Time, res.Probe(r.ReceiverProbe).Volts) { Look = look });
+            series.Add(new Rendering.PlotSeries(o.Design.Name, res.Time, res.Probe(r.ReceiverProbe).Volts) { Look = look });
         }
         var lines = new List<ReferenceLine>();
         if (any is not null && spec is not null && spec.Anchor == ProbeAnchor.Load && RunSummary.LoadOf(any, spec.BranchPath).Receiver is { } rx)

@@ -108,7 +108,7 @@ simulation: { duration: 5 ns }
         Assert.Equal(Core.Rendering.AxisKind.Logarithmic, chart.XKind);
         Assert.Equal(("Frequency", "Hz"), (chart.XLabel, chart.XUnit));
         Assert.Equal(["Gain", "Phase", "Input impedance"], chart.Panels.Select(p => p.YLabel));
-        var x = Core.Rendering.LineChart.Layout(chart, 1200, 960).Panels[0].Geometry.X;
+        var x = Core.Rendering.XyChart.Layout(chart, 1200, 960).Panels[0].Geometry.X;
         Assert.Equal(["1 M", "10 M", "100 M", "1 G"], x.Ticks.Select(x.FormatTick));
         Assert.Equal("Frequency [Hz]", x.Title);
 

@@ -26,7 +26,7 @@ public class BoundedLeastSquaresTests
     [InlineData(250.0, 5e-4)]     // NIST start 2
     public void Misra1a_reaches_the_certified_values_and_standard_deviations(double s1, double s2)
     {
-        FitResult r = BoundedLeastSquares.Fit(Misra1a, [s1, s2], [0, 0], [double.PositiveInfinity, double.PositiveInfinity], 500, default);
+        LeastSquaresResult r = BoundedLeastSquares.Fit(Misra1a, [s1, s2], [0, 0], [double.PositiveInfinity, double.PositiveInfinity], 500, default);
 
         Assert.True(r.Converged);
         Assert.Equal(1, r.Values[0] / B1, 1e-6);   // 6 significant digits
@@ -39,7 +39,7 @@ public class BoundedLeastSquaresTests
     [Fact]
     public void Misra1a_with_both_bounds_finite_gives_the_same_answer()
     {
-        FitResult r = BoundedLeastSquares.Fit(Misra1a, [500, 1e-4], [100, 1e-5], [1000, 1e-2], 500, default);
+        LeastSquaresResult r = BoundedLeastSquares.Fit(Misra1a, [500, 1e-4], [100, 1e-5], [1000, 1e-2], 500, default);
 
         Assert.True(r.Converged);
         Assert.Equal(1, r.Values[0] / B1, 1e-6);
@@ -52,7 +52,7 @@ public class BoundedLeastSquaresTests
     {
         // Exact data y = 2x; the slope is capped at 1.5, so the constrained least-squares answer is the bound itself.
         double[] x = [1, 2, 3, 4];
-        FitResult r = BoundedLeastSquares.Fit(p => x.Select(v => 2 * v - p[0] * v).ToArray(), [1.0], [0.0], [1.5], 200, default);
+        LeastSquaresResult r = BoundedLeastSquares.Fit(p => x.Select(v => 2 * v - p[0] * v).ToArray(), [1.0], [0.0], [1.5], 200, default);
 
         Assert.Equal(1.5, r.Values[0], 1e-6);
         Assert.InRange(r.Values[0], 0.0, 1.5);
@@ -61,7 +61,7 @@ public class BoundedLeastSquaresTests
     [Fact]
     public void The_evaluation_budget_is_kept_and_reported()
     {
-        FitResult r = BoundedLeastSquares.Fit(Misra1a, [500, 1e-4], [0, 0], [double.PositiveInfinity, double.PositiveInfinity], 12, default);
+        LeastSquaresResult r = BoundedLeastSquares.Fit(Misra1a, [500, 1e-4], [0, 0], [double.PositiveInfinity, double.PositiveInfinity], 12, default);
 
         Assert.False(r.Converged);
         Assert.True(r.Evaluations <= 12, $"{r.Evaluations} evaluations");
@@ -91,7 +91,7 @@ public class BoundedLeastSquaresTests
         // Jacobian column came out zero and the parameter never moved. The start and window are the values of a fit that stuck
         // (1.0105 ns, 1 ns). Known answer: the least-squares solution of the linear residual x - target is target.
         const double centre = 1.0105240531393502e-09, window = 1e-9, target = centre + 0.29e-9;
-        FitResult r = BoundedLeastSquares.Fit(p => [p[0] - target, 2 * (p[0] - target)], [centre], [centre - window], [centre + window], 100, default);
+        LeastSquaresResult r = BoundedLeastSquares.Fit(p => [p[0] - target, 2 * (p[0] - target)], [centre], [centre - window], [centre + window], 100, default);
 
         Assert.Equal(target, r.Values[0], 1e-18);
     }

@@ -96,7 +96,7 @@ public class CaptureRoundTripTests
         Capture c = CaptureReader.Read(file.Path, new CaptureOptions { TimeScale = 1e-9 });
         (double[] simT, double[] simV) = Simulation();
 
-        ComparisonResult r = WaveformComparison.Compare(simT, simV, c.Time, c.Volts, mode);
+        AlignedWaveforms r = WaveformComparison.Compare(simT, simV, c.Time, c.Volts, mode);
 
         // Within one capture sample of the applied shift.
         Assert.InRange(r.OffsetSeconds, Shift - CaptureStep, Shift + CaptureStep);
@@ -117,7 +117,7 @@ public class CaptureRoundTripTests
         Capture c = CaptureReader.Read(file.Path, new CaptureOptions { TimeScale = 1e-9 });
         (double[] simT, double[] simV) = Simulation();
 
-        ComparisonResult r = WaveformComparison.Compare(simT, simV, c.Time, c.Volts, AlignMode.None);
+        AlignedWaveforms r = WaveformComparison.Compare(simT, simV, c.Time, c.Volts, AlignMode.None);
 
         Assert.Equal(0.0, r.OffsetSeconds);
         Assert.True(r.PeakV > 0.9, $"peak {r.PeakV}");   // a 3.5 ns misalignment of a 1 V step leaves ~1 V residual

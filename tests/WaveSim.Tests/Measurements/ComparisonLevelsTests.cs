@@ -34,7 +34,7 @@ public class ComparisonLevelsTests
             capV[k] = simV[2 * k] + (k % 2 == 0 ? a : -a);
         }
 
-        ComparisonResult r = WaveformComparison.Compare(simT, simV, capT, capV, AlignMode.None);
+        AlignedWaveforms r = WaveformComparison.Compare(simT, simV, capT, capV, AlignMode.None);
 
         Assert.Equal(a, r.RmsV, 1e-9);
         Assert.Equal(a, r.PeakV, 1e-9);

@@ -20,7 +20,7 @@ public class CaptureResidualTests
             new UncertaintyBasis(T.Length, 1, 0, 0, T.Length, 1));
 
     static CaptureComparisonResult Comparison() =>
-        new("rx", new ComparisonResult(0, T, Sim, Cap, Cap.Select((c, i) => c - Sim[i]).ToArray(), 0.1, 0.1, 10, 10),
+        new("rx", new AlignedWaveforms(0, T, Sim, Cap, Cap.Select((c, i) => c - Sim[i]).ToArray(), 0.1, 0.1, 10, 10),
             new SignalFigures(), new SignalFigures(), []);
 
     [Fact]
@@ -44,9 +44,9 @@ public class CaptureResidualTests
     {
         var spec = FitOutputs.Chart(Fit(Sim, Sim), "perfect fit");
         const int w = 1200, h = 800;
-        var layout = LineChart.Layout(spec, w, h);
+        var layout = XyChart.Layout(spec, w, h);
         Assert.Equal(["captured", "start (coincides with captured)", "fitted (coincides with captured)"], layout.Panels[0].LegendTexts);
-        using var bmp = PngProbe.Decode(LineChart.RenderPng(spec, w, h));
+        using var bmp = PngProbe.Decode(XyChart.RenderPng(spec, w, h));
         var g = layout.Panels[0].Geometry;
         // Before: the fitted line (drawn last, as wide as the capture) covered the capture completely.
         Assert.True(TraceOverlapTests.Seen(bmp, g, T, Sim, Palette.ReferenceBand, 20) > 0.9, "the capture is hidden");

@@ -58,8 +58,8 @@ simulation: { duration: 100 ns, output_step: 10 ps, resolution: 10 }
     {
         var chart = RunPictures.Waveforms(Run(Receiver), new WaveformOptions()).Chart;
         const int w = 900, h = 500;
-        ChartGeometry g = LineChart.Layout(chart, w, h).Panels[0].Geometry;
-        using SKBitmap bmp = PngProbe.Decode(LineChart.RenderPng(chart, w, h));
+        ChartGeometry g = XyChart.Layout(chart, w, h).Panels[0].Geometry;
+        using SKBitmap bmp = PngProbe.Decode(XyChart.RenderPng(chart, w, h));
         int left = (int)g.PlotArea.Left + 2, right = (int)g.PlotArea.Right - 2;
         int CountRow(int row) => Enumerable.Range(left, right - left).Count(x => PngProbe.Near(bmp.GetPixel(x, row), Palette.Threshold, 90));
         foreach (double level in new[] { 2.0, 0.8 })
@@ -129,7 +129,7 @@ simulation: { duration: 100 ns, output_step: 10 ps, resolution: 10 }
         }
         // Edges that leave after 10 ns and reach rx (1 ns away) by 20 ns: edges 10 … 18 (10.3625 … 18.3625 ns).
         Assert.Equal(9, picture.EdgesShown);
-        var xAxis = LineChart.Layout(picture.Chart, 1200, 600).Panels[0].Geometry.X;
+        var xAxis = XyChart.Layout(picture.Chart, 1200, 600).Panels[0].Geometry.X;
         Assert.Equal((10e-9, 20e-9), (xAxis.Min, xAxis.Max));
     }
 

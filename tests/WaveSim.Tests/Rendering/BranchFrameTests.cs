@@ -15,11 +15,11 @@ public class BranchFrameTests
     static readonly LineLayout Stubbed = new(
         [new LinePiece("line", MainX), new LinePiece("stub", StubX)], "mm", 1e-3,
         [
-            new LineElement(0, LineElementKind.Source, "src"),
-            new LineElement(Junction, LineElementKind.Branch, "stub"),
-            new LineElement(0.2, LineElementKind.Load, "load"),
-            new LineElement(Junction + StubLength, LineElementKind.Load, "stub load") { Piece = 1 },
-            new LineElement(Junction + StubLength, LineElementKind.Probe, "rx1") { Piece = 1 },
+            new NetMark(0, NetMarkKind.Source, "src"),
+            new NetMark(Junction, NetMarkKind.Branch, "stub"),
+            new NetMark(0.2, NetMarkKind.Load, "load"),
+            new NetMark(Junction + StubLength, NetMarkKind.Load, "stub load") { Piece = 1 },
+            new NetMark(Junction + StubLength, NetMarkKind.Probe, "rx1") { Piece = 1 },
         ]);
 
     [Fact]
@@ -101,13 +101,13 @@ simulation: { duration: 3 ns, resolution: 10 }
         var r = Simulate.Run(s, new Core.Solver.SimulationOptions { SnapshotTimes = RunPictures.SnapshotTimes(s, 0) });
         LineLayout layout = RunPictures.Layout(r);
         Assert.Equal(["line", "stub"], layout.Pieces.Select(p => p.Name));
-        var probes = layout.Elements.Where(e => e.Kind == LineElementKind.Probe).ToDictionary(e => e.Label);
+        var probes = layout.Elements.Where(e => e.Kind == NetMarkKind.Probe).ToDictionary(e => e.Label);
         // By hand: the stub's load is 60 mm + 25 mm along the drawing axis, the main load at 150 mm.
         Assert.Equal((1, 0.085), (probes["rx1"].Piece, Math.Round(probes["rx1"].Position, 9)));
         Assert.Equal((0, 0.150), (probes["rx2"].Piece, Math.Round(probes["rx2"].Position, 9)));
-        var stubLoad = Assert.Single(layout.Elements, e => e.Kind == LineElementKind.Load && e.Piece == 1);
+        var stubLoad = Assert.Single(layout.Elements, e => e.Kind == NetMarkKind.Load && e.Piece == 1);
         Assert.Equal(0.085, stubLoad.Position, 1e-9);
-        Assert.Contains(layout.Elements, e => e.Kind == LineElementKind.Branch && e.Piece == 0 && Math.Abs(e.Position - 0.06) < 1e-9);
+        Assert.Contains(layout.Elements, e => e.Kind == NetMarkKind.Branch && e.Piece == 0 && Math.Abs(e.Position - 0.06) < 1e-9);
         var fl = FrameRenderer.Layout(layout, -0.5, 1.5, 1280, 720);
         Assert.Equal(fl.Geometry.XToPixel(0.06), fl.Branches[0].Geometry.PlotArea.Left, 0.5);
         // The space-time map keeps to the main line.

@@ -10,7 +10,7 @@ public class LineFrameTests
     const double Length = 0.2, Speed = 1.5e8;
     static readonly double[] X = Enumerable.Range(0, 201).Select(i => i * Length / 200).ToArray();
     static readonly LineLayout Line = LineLayout.Single(X, "mm", 1e-3,
-        [new LineElement(0, LineElementKind.Source, "src"), new LineElement(0.2, LineElementKind.Load, "load")]);
+        [new NetMark(0, NetMarkKind.Source, "src"), new NetMark(0.2, NetMarkKind.Load, "load")]);
 
     static double[] Front(double t) => X.Select(z => z < Speed * t ? 1.0 : 0.0).ToArray();
 

@@ -16,10 +16,10 @@ public class LogAxisTests
         x0 + (Math.Log10(v) - Math.Log10(lo)) / (Math.Log10(hi) - Math.Log10(lo)) * width;
 
     // y = log10(x / 1 pF) over 1 pF..1 nF: a straight line on a log X axis, from 0 at the left to 3 at the right.
-    static ChartSpec LogLineChart()
+    static ChartSpec LogXyChart()
     {
         double[] x = Enumerable.Range(0, 301).Select(i => Pico * Math.Pow(10, i / 100.0)).ToArray();
-        return new ChartSpec("Log line", "load.c", "F", [new ChartPanel("Decades", "", [new Series("log10(C/1pF)", x, x.Select(c => Math.Log10(c / Pico)).ToArray())]) { YRange = new AxisRange(0, 3) }])
+        return new ChartSpec("Log line", "load.c", "F", [new ChartPanel("Decades", "", [new PlotSeries("log10(C/1pF)", x, x.Select(c => Math.Log10(c / Pico)).ToArray())]) { YRange = new AxisRange(0, 3) }])
         {
             XKind = AxisKind.Logarithmic,
         };
@@ -33,7 +33,7 @@ public class LogAxisTests
     [InlineData(1e-9)]
     public void Pixel_x_on_a_log_chart_follows_the_definition_of_a_log_scale(double v)
     {
-        ChartGeometry g = LineChart.Layout(LogLineChart(), W, H).Panels[0].Geometry;
+        ChartGeometry g = XyChart.Layout(LogXyChart(), W, H).Panels[0].Geometry;
         SKRect r = g.PlotArea;
         Assert.Equal(AxisKind.Logarithmic, g.X.Kind);
         Assert.Equal(ByDefinition(v, Pico, Nano, r.Left, r.Width), g.XToPixel(v), 0.01);
@@ -54,9 +54,9 @@ public class LogAxisTests
     [Fact]
     public void A_log_line_is_drawn_straight_across_a_log_chart()
     {
-        ChartSpec spec = LogLineChart();
-        ChartGeometry g = LineChart.Layout(spec, W, H).Panels[0].Geometry;
-        using SKBitmap bmp = PngProbe.Decode(LineChart.RenderPng(spec, W, H));
+        ChartSpec spec = LogXyChart();
+        ChartGeometry g = XyChart.Layout(spec, W, H).Panels[0].Geometry;
+        using SKBitmap bmp = PngProbe.Decode(XyChart.RenderPng(spec, W, H));
         SKRect r = g.PlotArea;
         foreach (double v in new[] { 2 * Pico, 10 * Pico, 50 * Pico, 300 * Pico })
         {
@@ -151,14 +151,14 @@ public class LogAxisTests
         Assert.Throws<ArgumentOutOfRangeException>(() => axis.Fraction(0));
         Assert.Throws<ArgumentOutOfRangeException>(() => axis.Fraction(-Pico));
 
-        ChartSpec good = LogLineChart();
+        ChartSpec good = LogXyChart();
         var panel = good.Panels[0];
-        var bad = good with { Panels = [panel with { Series = [new Series("with zero", [0, Pico, Nano], [0, 1, 2])] }] };
-        var ex = Assert.Throws<ArgumentException>(() => LineChart.RenderPng(bad, W, H));
+        var bad = good with { Panels = [panel with { Series = [new PlotSeries("with zero", [0, Pico, Nano], [0, 1, 2])] }] };
+        var ex = Assert.Throws<ArgumentException>(() => XyChart.RenderPng(bad, W, H));
         Assert.Contains("with zero", ex.Message);
         Assert.Contains("logarithmic", ex.Message);
         Assert.DoesNotContain('\n', ex.Message);
-        Assert.Throws<ArgumentException>(() => LineChart.Layout(good with { XRange = new AxisRange(0, Nano) }, W, H));
+        Assert.Throws<ArgumentException>(() => XyChart.Layout(good with { XRange = new AxisRange(0, Nano) }, W, H));
     }
 
     [Fact]
@@ -169,7 +169,7 @@ public class LogAxisTests
         Assert.Empty(axis.MinorTicks);
         Assert.Equal(0.25, axis.Fraction(0.5e-9), 1e-12);
         Assert.Equal(0.5e-9, axis.ValueAt(0.25), 1e-21);
-        ChartGeometry g = LineChart.Layout(LogLineChart() with { XKind = AxisKind.Linear }, W, H).Panels[0].Geometry;
+        ChartGeometry g = XyChart.Layout(LogXyChart() with { XKind = AxisKind.Linear }, W, H).Panels[0].Geometry;
         Assert.Equal(AxisKind.Linear, g.X.Kind);
     }
 }

@@ -19,16 +19,16 @@ public class TraceOverlapTests
     public void Traces_within_half_a_percent_of_the_span_coincide_and_one_percent_apart_do_not()
     {
         double[] t = Times(2001);
-        var a = new Series("a", t, Sine(t));
+        var a = new PlotSeries("a", t, Sine(t));
         const double span = 1.0, tol = TraceOverlap.SpanFraction * span;
-        Assert.True(TraceOverlap.Coincide(a, new Series("b", t, Sine(t)), tol));
-        Assert.True(TraceOverlap.Coincide(a, new Series("b", t, Sine(t, 0.004)), tol));
-        Assert.False(TraceOverlap.Coincide(a, new Series("b", t, Sine(t, 0.01)), tol));
+        Assert.True(TraceOverlap.Coincide(a, new PlotSeries("b", t, Sine(t)), tol));
+        Assert.True(TraceOverlap.Coincide(a, new PlotSeries("b", t, Sine(t, 0.004)), tol));
+        Assert.False(TraceOverlap.Coincide(a, new PlotSeries("b", t, Sine(t, 0.01)), tol));
         // Apart at one point only is apart.
         double[] y = Sine(t); y[1000] += 0.02;
-        Assert.False(TraceOverlap.Coincide(a, new Series("b", t, y), tol));
+        Assert.False(TraceOverlap.Coincide(a, new PlotSeries("b", t, y), tol));
         // A trace covering only half the span of the other is not the same curve.
-        Assert.False(TraceOverlap.Coincide(a, new Series("b", t[..1000], Sine(t)[..1000]), tol));
+        Assert.False(TraceOverlap.Coincide(a, new PlotSeries("b", t[..1000], Sine(t)[..1000]), tol));
     }
 
     [Fact]
@@ -37,14 +37,14 @@ public class TraceOverlapTests
         // Linear interpolation of a smooth f errs by at most h²/8·max|f''| (R. L. Burden and J. D. Faires, Numerical Analysis,
         // Thm 3.3, from memory): h = 10 ns/2000, f'' ≤ 0.4·(2π/10 ns)², so under 2e-6 V, far inside 0.5 % of a 1 V span.
         double[] t1 = Times(2001), t2 = Times(3001);
-        Assert.True(TraceOverlap.Coincide(new Series("a", t1, Sine(t1)), new Series("b", t2, Sine(t2)), 0.005));
+        Assert.True(TraceOverlap.Coincide(new PlotSeries("a", t1, Sine(t1)), new PlotSeries("b", t2, Sine(t2)), 0.005));
     }
 
-    static (SKBitmap Bmp, ChartGeometry G, ChartLayout L) Draw(params Series[] series)
+    static (SKBitmap Bmp, ChartGeometry G, ChartLayout L) Draw(params PlotSeries[] series)
     {
         var spec = new ChartSpec("", "Time", "s", [new ChartPanel("Voltage", "V", series) { YRange = new AxisRange(0, 1) }]);
-        var layout = LineChart.Layout(spec, W, H);
-        return (PngProbe.Decode(LineChart.RenderPng(spec, W, H)), layout.Panels[0].Geometry, layout);
+        var layout = XyChart.Layout(spec, W, H);
+        return (PngProbe.Decode(XyChart.RenderPng(spec, W, H)), layout.Panels[0].Geometry, layout);
     }
 
     /// <summary>
@@ -74,7 +74,7 @@ public class TraceOverlapTests
     public void Two_identical_lines_both_show_and_the_legend_says_they_coincide()
     {
         double[] t = Times(2001), y = Sine(t);
-        var (bmp, g, layout) = Draw(new Series("first", t, y), new Series("second", t, y));
+        var (bmp, g, layout) = Draw(new PlotSeries("first", t, y), new PlotSeries("second", t, y));
         Assert.Equal(["first", "second (coincides with first)"], layout.Panels[0].LegendTexts);
         // Before: the second line covered the first completely. Now the second is dashed and the first shows in its gaps.
         Assert.True(Seen(bmp, g, t, y, Palette.TraceColour(0)) > 0.9, "first trace hidden");
@@ -86,7 +86,7 @@ public class TraceOverlapTests
     {
         double[] t = Times(2001), y = Sine(t);
         // The reference comes second in the list yet is drawn first, beneath.
-        var (bmp, g, layout) = Draw(new Series("model", t, y), new Series("reference", t, y) { Look = TraceLook.Reference });
+        var (bmp, g, layout) = Draw(new PlotSeries("model", t, y), new PlotSeries("reference", t, y) { Look = TraceLook.Reference });
         Assert.Equal(["model", "reference (coincides with model)"], layout.Panels[0].LegendTexts);
         Assert.True(Seen(bmp, g, t, y, Palette.ReferenceBand, 20) > 0.9, "reference band hidden");
         Assert.True(Seen(bmp, g, t, y, Palette.TraceColour(0)) > 0.9, "line on the band hidden");
@@ -101,7 +101,7 @@ public class TraceOverlapTests
     public void Traces_apart_keep_their_names_and_palette_looks()
     {
         double[] t = Times(2001);
-        var (_, _, layout) = Draw(new Series("a", t, Sine(t)), new Series("b", t, Sine(t, 0.2)));
+        var (_, _, layout) = Draw(new PlotSeries("a", t, Sine(t)), new PlotSeries("b", t, Sine(t, 0.2)));
         Assert.Equal(["a", "b"], layout.Panels[0].LegendTexts);
     }
 }

@@ -44,7 +44,7 @@ public class ReportBrowserTests(ITestOutputHelper output)
             // The DOM as the browser built it: the figures table with one row per probe, and both pictures.
             var table = Regex.Match(dom, "<table id=\"figures\">(.*?)</table>", RegexOptions.Singleline);
             Assert.True(table.Success, "figures table missing from the DOM dump");
-            Assert.Equal(2, Regex.Matches(table.Value, "<td>(drv|rx)</td>").Count);
+            Assert.Equal(2, Regex.Count(table.Value, "<td>(drv|rx)</td>"));
             Assert.Matches("<img id=\"waveforms\" src=\"data:image/png;base64,", dom);
             Assert.Matches("<img id=\"spacetime\" src=\"data:image/png;base64,", dom);
 

@@ -45,8 +45,8 @@ public class SweepBestMarkerTests
         var goal = SweepGoal.Parse("min:rx.overshoot", ["rx"]);
         ChartSpec chart = SweepPictures.Chart(r, "overshoot_pct", r.Best(goal, []), goal);
         const int w = 900, h = 500;
-        ChartGeometry g = LineChart.Layout(chart, w, h).Panels[0].Geometry;
-        using SKBitmap bmp = PngProbe.Decode(LineChart.RenderPng(chart, w, h));
+        ChartGeometry g = XyChart.Layout(chart, w, h).Panels[0].Geometry;
+        using SKBitmap bmp = PngProbe.Decode(XyChart.RenderPng(chart, w, h));
         int x = (int)g.XToPixel(40), y = (int)g.YToPixel(4);
         Assert.True(PngProbe.Near(bmp.GetPixel(x, y), Palette.Highlight, 40), $"pixel ({x}, {y}) is {bmp.GetPixel(x, y)}");
         // Nowhere near the other points.

@@ -38,7 +38,7 @@ public class SweepLogAxisTests
     {
         ChartSpec chart = SweepPictures.Chart(Result(SweepAxis.Parse("load.c=1pF..1nF:30:log")), "overshoot_pct");
         Assert.Equal(AxisKind.Logarithmic, chart.XKind);
-        AxisScale x = LineChart.Layout(chart, 1200, 600).Panels[0].Geometry.X;
+        AxisScale x = XyChart.Layout(chart, 1200, 600).Panels[0].Geometry.X;
         Assert.Equal(AxisKind.Logarithmic, x.Kind);
         Assert.Equal(["1 p", "10 p", "100 p", "1 n"], x.Ticks.Select(x.FormatTick));
     }

@@ -18,11 +18,11 @@ public class TerminationPictureTests
         var names = spec.Panels[0].Series.Select(s => s.Name).ToList();
         int drawn = names.IndexOf("as drawn"), th = names.IndexOf("thevenin");
         const int w = 1200, h = 650;
-        var layout = LineChart.Layout(spec, w, h);
+        var layout = XyChart.Layout(spec, w, h);
         Assert.Equal("thevenin (coincides with as drawn)", layout.Panels[0].LegendTexts[th]);
         Assert.Equal("as drawn", layout.Panels[0].LegendTexts[drawn]);
 
-        using var bmp = PngProbe.Decode(LineChart.RenderPng(spec, w, h));
+        using var bmp = PngProbe.Decode(XyChart.RenderPng(spec, w, h));
         var g = layout.Panels[0].Geometry;
         var asDrawn = spec.Panels[0].Series[drawn];
         // Before: both were 2 px lines and the Thevenin one, drawn later, covered the net as drawn everywhere.

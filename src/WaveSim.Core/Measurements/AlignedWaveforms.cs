@@ -10,7 +10,7 @@ namespace WaveSim.Core.Measurements;
 /// <param name="PeakV">Largest absolute difference at those samples, V.</param>
 /// <param name="RmsPct">RMS residual as a percentage of the simulated swing (max - min on the grid); NaN when the simulation is flat.</param>
 /// <param name="PeakPct">Peak residual as a percentage of the simulated swing; NaN when the simulation is flat.</param>
-public sealed record ComparisonResult(
+public sealed record AlignedWaveforms(
     double OffsetSeconds,
     double[] Time,
     double[] Simulated,

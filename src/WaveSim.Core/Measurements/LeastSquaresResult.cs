@@ -7,4 +7,4 @@ namespace WaveSim.Core.Measurements;
 /// <param name="RmsResidual">sqrt(SSR / m) at <paramref name="Values"/>, in the residuals' unit.</param>
 /// <param name="Evaluations">Calls of the residual function, including those for the Jacobians.</param>
 /// <param name="Converged">True when the fit stopped because it stopped improving, false when it ran out of evaluations.</param>
-public sealed record FitResult(double[] Values, double[] Uncertainty, double RmsResidual, int Evaluations, bool Converged);
+public sealed record LeastSquaresResult(double[] Values, double[] Uncertainty, double RmsResidual, int Evaluations, bool Converged);

@@ -6,7 +6,7 @@ using WaveSim.Core.Output;
 namespace WaveSim.Cli.Commands;
 
 /// <summary>`wavesim about`: the version and the model's limits in one screen.</summary>
-public static class VersionInfoCommand
+public static class AboutCommand
 {
     /// <summary>The limits of the model, one line each, as printed by <c>about</c> and the README.</summary>
     public static readonly string[] Limits =

@@ -1,7 +1,7 @@
 namespace WaveSim.Core.Rendering;
 
-/// <summary>What sits at a marked position along a line; chooses the symbol drawn on the axis.</summary>
-public enum LineElementKind
+/// <summary>What a <see cref="NetMark"/> stands for; chooses the symbol drawn on the axis.</summary>
+public enum NetMarkKind
 {
     /// <summary>Where one line segment ends and the next (other Z0 or delay) begins.</summary>
     SegmentBoundary,

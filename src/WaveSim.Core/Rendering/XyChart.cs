@@ -6,7 +6,7 @@ namespace WaveSim.Core.Rendering;
 /// Draws a <see cref="ChartSpec"/>: white page, light grid, labelled axes with engineering units, a legend above
 /// each panel, stacked panels over one shared X axis. PNG and SVG come from the same drawing code.
 /// </summary>
-public static class LineChart
+public static class XyChart
 {
     /// <summary>Renders the chart as PNG bytes.</summary>
     /// <param name="spec">What to draw.</param>
@@ -134,7 +134,7 @@ public static class LineChart
     }
 
     /// <summary>Reference bands first, then the lines in panel order, so no trace disappears under a band.</summary>
-    static void DrawTraces(SKCanvas canvas, ChartGeometry g, IReadOnlyList<Series> series, IReadOnlyList<TraceStyle> styles)
+    static void DrawTraces(SKCanvas canvas, ChartGeometry g, IReadOnlyList<PlotSeries> series, IReadOnlyList<TraceStyle> styles)
     {
         canvas.Save();
         canvas.ClipRect(g.PlotArea);
@@ -258,7 +258,7 @@ public static class LineChart
         if (spec.XRange is { } fixedRange) return (fixedRange.Min, fixedRange.Max);
         double min = double.PositiveInfinity, max = double.NegativeInfinity;
         foreach (ChartPanel p in spec.Panels)
-            foreach (Series s in p.Series)
+            foreach (PlotSeries s in p.Series)
                 foreach (double x in s.X)
                     if (double.IsFinite(x)) { min = Math.Min(min, x); max = Math.Max(max, x); }
         return spec.XKind == AxisKind.Logarithmic ? WidenedLog(min, max) : Widened(min, max);
@@ -279,7 +279,7 @@ public static class LineChart
     {
         if (panel.YRange is { } fixedRange) return (fixedRange.Min, fixedRange.Max);
         double min = double.PositiveInfinity, max = double.NegativeInfinity;
-        foreach (Series s in panel.Series)
+        foreach (PlotSeries s in panel.Series)
             foreach (double y in s.Y)
                 if (double.IsFinite(y)) { min = Math.Min(min, y); max = Math.Max(max, y); }
         foreach (ReferenceLine r in panel.ReferenceLines)
@@ -327,7 +327,7 @@ public static class LineChart
             if (p.YRange is { } yr && !(yr.Max > yr.Min)) throw new ArgumentException($"Panel '{p.YLabel}' Y range {yr.Min}..{yr.Max} must have max > min.", nameof(spec));
             if (p.YTicks is not null && (p.YRange is not { } tr || p.YTicks.Any(t => !(t >= tr.Min && t <= tr.Max))))
                 throw new ArgumentException($"Panel '{p.YLabel}' has fixed Y ticks: they need a Y range that holds them all.", nameof(spec));
-            foreach (Series s in p.Series)
+            foreach (PlotSeries s in p.Series)
             {
                 if (s.X.Length != s.Y.Length)
                     throw new ArgumentException($"Series '{s.Name}' has {s.X.Length} X values but {s.Y.Length} Y values.", nameof(spec));
