@@ -22,8 +22,8 @@ public class ExitCodeTests
         Assert.Equal(3, CommandGuard.Run(err, () => throw new NumericalException("not finite at step 3")));
         Assert.Equal(130, CommandGuard.Run(err, () => throw new OperationCanceledException()));
         // An exception no input check anticipated (here one from a type initializer) is a defect: one line, exit 4.
-        Assert.Equal(4, CommandGuard.Run(err, () => throw new TypeInitializationException("X", new IndexOutOfRangeException("index 7"))));
-        Assert.Contains("internal error (IndexOutOfRangeException: index 7)", err.ToString());
+        Assert.Equal(4, CommandGuard.Run(err, () => throw new TypeInitializationException("X", new KeyNotFoundException("key 7"))));
+        Assert.Contains("internal error (KeyNotFoundException: key 7)", err.ToString());
         Assert.Equal(0, CommandGuard.Run(err, () => 0));
         Assert.All(err.ToString().Split('\n', StringSplitOptions.RemoveEmptyEntries), l => Assert.StartsWith("error: ", l));
     }
