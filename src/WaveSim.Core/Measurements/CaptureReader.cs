@@ -29,10 +29,10 @@ public static partial class CaptureReader
 {
     const int BlockProbeRows = 3;
 
-    [GeneratedRegex(@"^[+-]?\d+,\d+(?:[eE][+-]?\d+)?$")]
+    [GeneratedRegex(@"^[+-]?[0-9]+,[0-9]+(?:[eE][+-]?[0-9]+)?$")]
     private static partial Regex DecimalCommaNumber();
 
-    [GeneratedRegex(@"^0\d+$")]
+    [GeneratedRegex(@"^0[0-9]+$")]
     private static partial Regex LeadingZeroDigits();
 
     /// <summary>Reads the capture at <paramref name="path"/>.</summary>
