@@ -76,13 +76,18 @@ public static partial class Quantity
     /// <exception cref="UnitException">The magnitude is outside the range.</exception>
     public static void CheckRange(string text, double value, Dimension dim)
     {
-        if (value == 0 || dim.SensibleRange is not var (min, max)) return;
-        double a = Math.Abs(value);
-        if (a >= min * (1 - 1e-12) && a <= max * (1 + 1e-12)) return;
-        string unit = dim.SiUnit;
-        throw new UnitException($"'{text}' is outside the range accepted for {dim.Describe()}: "
-            + $"{Figure(min)} {unit} to {Figure(max)} {unit} in size (or 0)");
+        if (InRange(value, dim)) return;
+        throw new UnitException($"'{text}' is outside the range accepted for {dim.Describe()}: {RangeText(dim)}");
     }
+
+    /// <summary>True when <paramref name="value"/> is 0 or its size lies in <see cref="Dimension.SensibleRange"/> (always for a plain number).</summary>
+    public static bool InRange(double value, Dimension dim) =>
+        value == 0 || dim.SensibleRange is not var (min, max) || (Math.Abs(value) >= min * (1 - 1e-12) && Math.Abs(value) <= max * (1 + 1e-12));
+
+    /// <summary>The accepted sizes as written in messages, e.g. "1e-18 F to 1 F in size (or 0)"; empty when unbounded.</summary>
+    public static string RangeText(Dimension dim) => dim.SensibleRange is var (min, max)
+        ? $"{Figure(min)} {dim.SiUnit} to {Figure(max)} {dim.SiUnit} in size (or 0)"
+        : "";
 
     /// <summary>A range bound as written in messages: 0.001 to 9999 plainly, else a power of ten (1e-18, 1e12).</summary>
     static string Figure(double x) => x is >= 1e-3 and < 1e4

@@ -126,4 +126,32 @@ public class HostileInputTests
         sb.Append("load: open\nsimulation: { duration: 1 ns }\n");
         RunRefused(sb.ToString(), ":4:", "line: 100000 items", "at most 2000");
     }
+
+    // Each dimension in range but their ratio absurd (a 100 km strip 1 nm above its plane): the solver called the step
+    // singular, a numerical-looking failure. The L and C the cross-section gives are checked against the same ranges.
+    [Fact]
+    public void An_absurd_cross_section_is_refused_at_its_geometry_key() =>
+        RunRefused("""
+            title: g
+            source: { waveform: step, high: 1 V, rise: 100 ps }
+            line:
+              - segment: { length: 50 mm, geometry: { kind: microstrip, width: 1e5 m, height: 1e-9 m, thickness: 35 um, er: 4.3 } }
+            simulation: { duration: 1 ns }
+
+            """, ":4:", "line[0].segment.geometry", "1e-12 H/m to 0.01 H/m");
+
+    // A capture with values near 1e308 overflowed the comparison's arithmetic (exit 3).
+    [Fact]
+    public void A_capture_with_huge_values_is_refused_naming_its_line()
+    {
+        using var cli = new CliRunner();
+        string capture = cli.Write("big.csv", "time_s,volts_V\n0,0\n1e-9,1e308\n2e-9,1.5e308\n3e-9,1e308\n");
+        var (code, _, err) = CliRunner.Run("compare", cli.Write("s.yaml", Scenario()), "--capture", capture, "--probe", "rx", "--out", cli.PathOf("out"));
+        Assert.True(code == 2, $"exit {code}: {err}");
+        Assert.Single(err.Split('\n', StringSplitOptions.RemoveEmptyEntries));
+        Assert.StartsWith("error:", err, StringComparison.Ordinal);
+        Assert.Contains("big.csv line 3: voltage", err, StringComparison.Ordinal);
+        Assert.Contains("1e6 V", err, StringComparison.Ordinal);
+        Assert.False(Directory.Exists(cli.PathOf("out")));
+    }
 }
