@@ -1,3 +1,4 @@
+using System.Globalization;
 using WaveSim.Core;
 using WaveSim.Core.Units;
 
@@ -12,6 +13,10 @@ public static class CommandGuard
     /// <summary>Runs <paramref name="body"/>, mapping exceptions to exit codes.</summary>
     public static int Run(TextWriter error, Func<int> body)
     {
+        // Every number the tool writes is invariant (a decimal point, never a comma), whatever the user's locale:
+        // the command runs under the invariant culture, which flows into its tasks, and the caller's is restored after.
+        var (culture, uiCulture) = (CultureInfo.CurrentCulture, CultureInfo.CurrentUICulture);
+        CultureInfo.CurrentCulture = CultureInfo.CurrentUICulture = CultureInfo.InvariantCulture;
         try
         {
             return body();
@@ -49,6 +54,10 @@ public static class CommandGuard
             var inner = ex is TypeInitializationException { InnerException: { } i } ? i : ex;
             error.WriteLine($"error: internal error ({inner.GetType().Name}: {OneLine(inner.Message)}); please report it with the scenario (WAVESIM_DEBUG=1 shows the stack trace)");
             return ExitCodes.InternalError;
+        }
+        finally
+        {
+            (CultureInfo.CurrentCulture, CultureInfo.CurrentUICulture) = (culture, uiCulture);
         }
     }
 

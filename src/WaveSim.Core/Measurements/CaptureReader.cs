@@ -29,10 +29,10 @@ public static partial class CaptureReader
 {
     const int BlockProbeRows = 3;
 
-    [GeneratedRegex(@"^[+-]?\d+,\d+(?:[eE][+-]?\d+)?$")]
+    [GeneratedRegex(@"^[+-]?[0-9]+,[0-9]+(?:[eE][+-]?[0-9]+)?$")]
     private static partial Regex DecimalCommaNumber();
 
-    [GeneratedRegex(@"^0\d+$")]
+    [GeneratedRegex(@"^0[0-9]+$")]
     private static partial Regex LeadingZeroDigits();
 
     /// <summary>Reads the capture at <paramref name="path"/>.</summary>
@@ -102,8 +102,8 @@ public static partial class CaptureReader
                     $"{name} line {line}: time {Invariant(t.Value)} is not later than {Invariant(previousRaw)} on line {previousLine}; time must increase strictly");
             previousRaw = t.Value;
             previousLine = line;
-            time.Add(t.Value * options.TimeScale);
-            volts.Add(v.Value * options.VoltScale);
+            time.Add(Sample(t.Value * options.TimeScale, Units.Dimension.Time, "time", name, line));
+            volts.Add(Sample(v.Value * options.VoltScale, Units.Dimension.Voltage, "voltage", name, line));
         }
 
         if (time.Count < 2)
@@ -252,6 +252,18 @@ public static partial class CaptureReader
                 return c;
         string available = string.Join(", ", header.Select(h => $"'{h.Trim()}'"));
         throw new InputException($"{name}: column '{spec}' not found; available: {available}");
+    }
+
+    /// <summary>
+    /// A scaled sample, refused when its size is beyond the largest a scenario accepts for its dimension (a voltage of
+    /// 1e308 overflowed the comparison's arithmetic into a numerical failure). Small sizes are sample values, not
+    /// durations or levels, so only the upper end of the range applies.
+    /// </summary>
+    static double Sample(double value, Units.Dimension dim, string what, string name, int line)
+    {
+        if (Math.Abs(value) <= dim.SensibleRange!.Value.Max && double.IsFinite(value)) return value;
+        throw new InputException($"{name} line {line}: {what} {Invariant(value)} {dim.SiUnit} (after scaling) is beyond the largest "
+            + $"accepted, {dim.SensibleRange.Value.Max.ToString("0.###e0", CultureInfo.InvariantCulture)} {dim.SiUnit} in size; check the file's units and scale");
     }
 
     /// <summary>A number, or null for a blank / NaN cell (the row is dropped).</summary>

@@ -75,7 +75,7 @@ public static class CompareOutputs
         ]);
     }
 
-    internal static string R(double x) => x.ToString("R", CultureInfo.InvariantCulture);
+    internal static string R(double x) => (x + 0.0).ToString("R", CultureInfo.InvariantCulture); // + 0.0 turns -0 into 0
 
     internal static double? Finite(double x) => double.IsFinite(x) ? x : null;
 }

@@ -17,13 +17,15 @@ public static class ProbesCsv
         csv.NextRecord();
         for (int k = 0; k < result.Time.Length; k++)
         {
-            csv.WriteField(result.Time[k].ToString("R", CultureInfo.InvariantCulture));
+            csv.WriteField(Cell(result.Time[k]));
             foreach (var p in result.Probes)
             {
-                csv.WriteField(p.Volts[k].ToString("R", CultureInfo.InvariantCulture));
-                csv.WriteField(p.Amps[k].ToString("R", CultureInfo.InvariantCulture));
+                csv.WriteField(Cell(p.Volts[k]));
+                csv.WriteField(Cell(p.Amps[k]));
             }
             csv.NextRecord();
         }
     }
+
+    static string Cell(double v) => (v + 0.0).ToString("R", CultureInfo.InvariantCulture); // + 0.0 turns -0 into 0
 }

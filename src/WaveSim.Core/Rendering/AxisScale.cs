@@ -125,7 +125,9 @@ public sealed class AxisScale
     /// <exception cref="ArgumentOutOfRangeException">The axis is logarithmic and <paramref name="value"/> is 0 or less.</exception>
     public double Fraction(double value)
     {
-        if (Kind == AxisKind.Linear) return (value - Min) / (Max - Min);
+        // Halves when max − min overflows (−1e308..1e308): any finite range places its values.
+        if (Kind == AxisKind.Linear)
+            return double.IsFinite(Max - Min) ? (value - Min) / (Max - Min) : (value / 2 - Min / 2) / (Max / 2 - Min / 2);
         if (value <= 0)
             throw new ArgumentOutOfRangeException(nameof(value), $"Axis '{Label}' is logarithmic and cannot place {value.ToString(CultureInfo.InvariantCulture)}: values must be greater than 0.");
         return (Math.Log10(value) - logMin) / logSpan;
@@ -133,7 +135,7 @@ public sealed class AxisScale
 
     /// <summary>The value at fraction <paramref name="fraction"/> of the way from <see cref="Min"/> to <see cref="Max"/> (the inverse of <see cref="Fraction"/>).</summary>
     public double ValueAt(double fraction) => Kind == AxisKind.Linear
-        ? Min + fraction * (Max - Min)
+        ? (double.IsFinite(Max - Min) ? Min + fraction * (Max - Min) : 2 * (Min / 2 + fraction * (Max / 2 - Min / 2)))
         : Math.Pow(10, logMin + fraction * logSpan);
 
     (string Text, int Decimals) LogLabel(double value)

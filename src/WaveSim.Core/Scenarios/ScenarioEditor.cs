@@ -12,7 +12,7 @@ namespace WaveSim.Core.Scenarios;
 /// </summary>
 public static partial class ScenarioEditor
 {
-    [GeneratedRegex(@"^([A-Za-z_][A-Za-z0-9_]*)(?:\[(\d+)\])?$")]
+    [GeneratedRegex(@"^([A-Za-z_][A-Za-z0-9_]*)(?:\[([0-9]+)\])?\z")]
     private static partial Regex PathPart();
 
     /// <summary>The scenario with the values at <paramref name="changes"/> replaced by the given texts (e.g. "33 ohm").</summary>

@@ -31,6 +31,16 @@ public static class ScenarioLoader
     /// <summary>The keys accepted under <c>simulation</c>.</summary>
     public static readonly string[] SimulationKeys = ["duration", "output_step", "resolution"];
 
+    /// <summary>
+    /// The most line items a scenario may hold, branches' items included. The DC operating point and the junction solve are
+    /// dense in the number of junctions, so their memory grows with the square and their time with the cube of it; 2,000 items
+    /// keeps both within the run's memory limit and minutes (common practice, no source). Beyond about 46,000 the matrix index
+    /// overflowed.
+    /// </summary>
+    public const int MaxLineItems = 2000;
+
+    static int CountItems(IReadOnlyList<LineElement> line) => line.Sum(e => e is Branch b ? 1 + CountItems(b.Line) : 1);
+
     /// <summary>Reads and validates the scenario file at <paramref name="path"/>.</summary>
     /// <exception cref="ScenarioException">The file cannot be read or is not a valid scenario.</exception>
     public static Scenario Load(string path)
@@ -45,6 +55,7 @@ public static class ScenarioLoader
     /// <summary>Reads and validates a scenario from YAML text; <paramref name="file"/> names it in messages and anchors relative paths.</summary>
     public static Scenario Parse(string yaml, string file)
     {
+        YamlShape.Check(yaml, file); // before the tree is built: YamlDotNet recurses where this walk does not
         var stream = new YamlStream();
         try { stream.Load(new StringReader(yaml)); }
         catch (YamlException ex)
@@ -58,7 +69,10 @@ public static class ScenarioLoader
 
         var top = new YamlMap(file, "", root, TopKeys);
         var source = ReadSource(top, file);
-        var line = ReadLine(top, "line", top.Sequence("line") ?? throw top.Error("missing required key 'line'"), file, new HashSet<string>());
+        var lineNode = top.Sequence("line") ?? throw top.Error("missing required key 'line'");
+        var line = ReadLine(top, "line", lineNode, file, new HashSet<string>());
+        if (CountItems(line) is var count && count > MaxLineItems)
+            throw top.Error(lineNode, "line", $"{count} items (segments, shunts, series parts and branches, counted inside branches too); at most {MaxLineItems} are accepted");
         var load = ReadLoad(top, "load");
         var sim = ReadSimulation(top);
         var scenario = new Scenario

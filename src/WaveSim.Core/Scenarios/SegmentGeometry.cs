@@ -39,6 +39,10 @@ internal static class SegmentGeometry
         string context = $"{m.File}:{node.Start.Line}:{node.Start.Column}: {m.Join("geometry")}";
         var spec = CrossSection.FromDictionary(raw, context);
         var p = ReadPairMode(m, spec) is PairMode pairMode ? CrossSection.ComputePair(spec).For(pairMode) : CrossSection.Compute(spec);
+        // Each dimension may lie in its range while their ratios are absurd (a 100 km wide strip 1 nm above its plane):
+        // the L and C the formulas give must lie in the ranges a scenario could write directly.
+        Derived(m, node, p.L, Units.Dimension.InductancePerLength, "L");
+        Derived(m, node, p.C, Units.Dimension.CapacitancePerLength, "C");
         if (m.Node("loss") is { } lossNode)
         {
             string? mode = (lossNode as YamlScalarNode)?.Value;
@@ -60,6 +64,14 @@ internal static class SegmentGeometry
         if (g is null && spec.Dimensions.TryGetValue("tand", out double tanD) && tanD > 0)
             seg = seg with { Loss = SegmentLoss.DielectricFromGeometry(p, spec.Dimensions.TryGetValue("er", out double er1) ? er1 : 1, tanD) };
         return seg;
+    }
+
+    static void Derived(YamlMap m, YamlNode node, double value, Units.Dimension dim, string name)
+    {
+        if (value > 0 && double.IsFinite(value) && Units.Quantity.InRange(value, dim)) return;
+        string text = $"{name} = {value.ToString("G4", System.Globalization.CultureInfo.InvariantCulture)} {dim.SiUnit}";
+        throw m.Error(node, m.Join("geometry"), $"the cross-section's dimensions give {text}, outside the range accepted for {dim.Describe()} "
+            + $"({Units.Quantity.RangeText(dim)}); check its dimensions and units");
     }
 
     /// <summary>The segment's <c>mode</c> for a coupled-pair geometry (default differential); null for a single line.</summary>

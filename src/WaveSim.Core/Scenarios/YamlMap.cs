@@ -93,11 +93,22 @@ internal sealed partial class YamlMap
         string? name = Text(key);
         if (name is null) throw Error($"missing required key '{Join(key)}'");
         if (!IdentifierPattern().IsMatch(name))
-            throw Error(Node(key)!, Join(key), $"'{name}' is not a name: use letters, digits, '_' and '-' only (names become parts of file names)");
+            throw Error(Node(key)!, Join(key), $"'{Visible(name)}' is not a name: use letters, digits, '_' and '-' only (names become parts of file names)");
         return name;
     }
 
-    [GeneratedRegex("^[A-Za-z0-9_-]+$")]
+    /// <summary>The text with control characters written as escapes (rx\n), so that a message shows what is wrong.</summary>
+    static string Visible(string text) => string.Concat(text.Select(ch => ch switch
+    {
+        '\n' => "\\n",
+        '\r' => "\\r",
+        '\t' => "\\t",
+        _ when char.IsControl(ch) => $"\\u{(int)ch:x4}",
+        _ => ch.ToString(),
+    }));
+
+    // \A and \z match the whole text: '$' would also match before a final newline and let "rx\n" through.
+    [GeneratedRegex(@"\A[A-Za-z0-9_-]+\z")]
     public static partial Regex IdentifierPattern();
 
     public string File => _file;

@@ -26,7 +26,7 @@ public sealed partial record SweepAxis(string KeyPath, Dimension Dimension, IRea
         Dimension.CapacitancePerLength, Dimension.InductancePerLength, Dimension.DelayPerLength,
     ];
 
-    [GeneratedRegex(@"^\s*([+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?)\s*(.*?)\s*$")]
+    [GeneratedRegex(@"^\s*([+-]?(?:[0-9]+\.?[0-9]*|\.[0-9]+)(?:[eE][+-]?[0-9]+)?)\s*(.*?)\s*$")]
     private static partial Regex NumberAndUnit();
 
     /// <summary>How the values were given. Default <see cref="SweepSpacing.List"/> (values as listed).</summary>

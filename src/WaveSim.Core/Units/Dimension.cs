@@ -75,6 +75,51 @@ public readonly record struct Dimension(BaseKind Kind, bool PerLength = false)
     /// <summary>Seconds per metre (a delay per length).</summary>
     public static readonly Dimension DelayPerLength = new(BaseKind.Time, true);
 
+    /// <summary>
+    /// The magnitudes accepted for a value of this dimension, SI (zero is always accepted; the sign is checked where it
+    /// matters). Null for plain numbers and percentages, whose meaning depends on the key. The ranges reach far past any
+    /// signal-integrity use while keeping every product the solver forms finite (common practice, no source); the table
+    /// is in docs/scenario-format.md.
+    /// </summary>
+    public (double Min, double Max)? SensibleRange => (Kind, PerLength) switch
+    {
+        (BaseKind.Voltage, false) => (1e-12, 1e6),
+        (BaseKind.Current, false) => (1e-15, 1e6),
+        (BaseKind.Time, false) => (1e-18, 1e3),
+        (BaseKind.Frequency, false) => (1e-3, 1e15),
+        (BaseKind.Resistance, false) => (1e-6, 1e12),
+        (BaseKind.Conductance, false) => (1e-12, 1e6),
+        (BaseKind.Capacitance, false) => (1e-18, 1.0),
+        (BaseKind.Inductance, false) => (1e-15, 1e3),
+        (BaseKind.Length, false) => (1e-9, 1e6),
+        (BaseKind.Power, false) => (1e-15, 1e9),
+        (BaseKind.Velocity, false) => (1e3, 1e9),
+        (BaseKind.Time, true) => (1e-10, 1e-3),
+        (BaseKind.Resistance, true) => (1e-9, 1e12),
+        (BaseKind.Conductance, true) => (1e-15, 1e9),
+        (BaseKind.Capacitance, true) => (1e-15, 1e-6),
+        (BaseKind.Inductance, true) => (1e-12, 1e-2),
+        _ => null,
+    };
+
+    /// <summary>The SI unit symbol of this dimension, e.g. "ohm/m", "s"; empty for a plain number.</summary>
+    public string SiUnit => (Kind switch
+    {
+        BaseKind.Voltage => "V",
+        BaseKind.Current => "A",
+        BaseKind.Time => "s",
+        BaseKind.Frequency => "Hz",
+        BaseKind.Resistance => "ohm",
+        BaseKind.Conductance => "S",
+        BaseKind.Capacitance => "F",
+        BaseKind.Inductance => "H",
+        BaseKind.Length => "m",
+        BaseKind.Power => "W",
+        BaseKind.Velocity => "m/s",
+        BaseKind.Percent => "%",
+        _ => "",
+    }) + (PerLength ? "/m" : "");
+
     /// <summary>Words for the dimension, as used in error messages ("a resistance per length").</summary>
     public string Describe() => (Kind switch
     {

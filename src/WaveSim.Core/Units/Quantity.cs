@@ -35,7 +35,8 @@ public static partial class Quantity
         ("in", 0.0254), ("mil", 0.0254e-3), ("ft", 0.3048),
     ];
 
-    [GeneratedRegex(@"^\s*([+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?)\s*(.*?)\s*$")]
+    // ASCII digits only: \d would also match Arabic-Indic or full-width digits, which double.Parse then refuses.
+    [GeneratedRegex(@"\A\s*([+-]?(?:[0-9]+\.?[0-9]*|\.[0-9]+)(?:[eE][+-]?[0-9]+)?)\s*(.*?)\s*\z", RegexOptions.Singleline)]
     private static partial Regex NumberAndUnit();
 
     /// <summary>Reads <paramref name="text"/> as one of the <paramref name="accepted"/> dimensions.</summary>
@@ -64,8 +65,34 @@ public static partial class Quantity
         double value = number * factor;
         if (!double.IsFinite(value))
             throw new UnitException($"'{text}' is too large a number");
+        CheckRange(text ?? "", value, dim);
         return (value, dim);
     }
+
+    /// <summary>
+    /// Refuses a non-zero value whose magnitude is outside <see cref="Dimension.SensibleRange"/>, naming the range, so that
+    /// 1e-308 ns or 1e300 V is bad input here rather than a failure deep in the solver or the plots.
+    /// </summary>
+    /// <exception cref="UnitException">The magnitude is outside the range.</exception>
+    public static void CheckRange(string text, double value, Dimension dim)
+    {
+        if (InRange(value, dim)) return;
+        throw new UnitException($"'{text}' is outside the range accepted for {dim.Describe()}: {RangeText(dim)}");
+    }
+
+    /// <summary>True when <paramref name="value"/> is 0 or its size lies in <see cref="Dimension.SensibleRange"/> (always for a plain number).</summary>
+    public static bool InRange(double value, Dimension dim) =>
+        value == 0 || dim.SensibleRange is not var (min, max) || (Math.Abs(value) >= min * (1 - 1e-12) && Math.Abs(value) <= max * (1 + 1e-12));
+
+    /// <summary>The accepted sizes as written in messages, e.g. "1e-18 F to 1 F in size (or 0)"; empty when unbounded.</summary>
+    public static string RangeText(Dimension dim) => dim.SensibleRange is var (min, max)
+        ? $"{Figure(min)} {dim.SiUnit} to {Figure(max)} {dim.SiUnit} in size (or 0)"
+        : "";
+
+    /// <summary>A range bound as written in messages: 0.001 to 9999 plainly, else a power of ten (1e-18, 1e12).</summary>
+    static string Figure(double x) => x is >= 1e-3 and < 1e4
+        ? x.ToString("G4", CultureInfo.InvariantCulture)
+        : x.ToString("0.###e0", CultureInfo.InvariantCulture);
 
     /// <summary>Reads <paramref name="text"/> as the one dimension given and returns the SI value.</summary>
     public static double Parse(string text, Dimension dimension) => ParseAny(text, dimension).Value;

@@ -17,13 +17,19 @@ internal sealed record RandomNet(double Rs, double Rise, double Resolution, IRea
 
     static readonly Gen<RandomItem> SegmentGen =
         Gen.Select(Gen.Double[20, 120], Gen.Double[0.05, 0.3], Gen.Double[10, 300], Gen.OneOf(Gen.Const(0.0), Gen.Double[0, 20]))
-           .Select((z0, td, len, r) => (RandomItem)new RandomSegment(z0, td * 1e-9, len * 1e-3, r));
+           .Select((z0, td, len, r) => (RandomItem)new RandomSegment(z0, td * 1e-9, len * 1e-3, ZeroBelow(r, 1e-3)));
+
+    /// <summary>
+    /// The generator's doubles reach down to 1e-300; the loader refuses magnitudes below each dimension's sensible range
+    /// (1e-9 ohm/m, 1e-6 ohm, 1e-15 H), so a value too small to matter is written as the zero it stands for.
+    /// </summary>
+    static double ZeroBelow(double x, double floor) => x < floor ? 0 : x;
 
     static readonly Gen<RandomItem> LumpedGen = Gen.OneOf(
         Gen.Select(Gen.Double[10, 1000], Gen.Double[0.1, 5]).Select((r, c) => (RandomItem)new RandomShunt(r, c * 1e-12)),
         Gen.Double[10, 1000].Select(r => (RandomItem)new RandomShunt(r, null)),
         Gen.Double[0.1, 5].Select(c => (RandomItem)new RandomShunt(null, c * 1e-12)),
-        Gen.Select(Gen.Double[0, 50], Gen.Double[0, 5]).Select((r, l) => (RandomItem)new RandomSeries(r, l * 1e-9)));
+        Gen.Select(Gen.Double[0, 50], Gen.Double[0, 5]).Select((r, l) => (RandomItem)new RandomSeries(ZeroBelow(r, 1e-3), Math.Max(l, 1e-3) * 1e-9)));
 
     static readonly Gen<RandomItem> BranchGen =
         Gen.Select(SegmentGen, LoadGen).Select((s, l) => (RandomItem)new RandomBranch([s], l));
