@@ -35,25 +35,6 @@ public static class KeyQuantity
     /// <summary>The SI unit to write a value of dimension <paramref name="d"/> with, as <see cref="ScenarioEditor.Format"/> expects.</summary>
     /// <param name="d">The dimension.</param>
     /// <returns>A unit text such as "ohm", "s/m" or "" for a plain number.</returns>
-    public static string Unit(Dimension d)
-    {
-        string num = d.Kind switch
-        {
-            BaseKind.Number => "",
-            BaseKind.Voltage => "V",
-            BaseKind.Current => "A",
-            BaseKind.Time => "s",
-            BaseKind.Frequency => "Hz",
-            BaseKind.Resistance => "ohm",
-            BaseKind.Conductance => "S",
-            BaseKind.Capacitance => "F",
-            BaseKind.Inductance => "H",
-            BaseKind.Length => "m",
-            BaseKind.Power => "W",
-            BaseKind.Velocity => "m/s",
-            BaseKind.Percent => "",
-            _ => "",
-        };
-        return d.PerLength ? num + "/m" : num;
-    }
+    public static string Unit(Dimension d) =>
+        d.Kind == BaseKind.Percent ? "" : d.SiUnit;   // a percentage is written as a plain number of percent
 }
