@@ -10,6 +10,13 @@ namespace WaveSim.Cli;
 /// </summary>
 public static class CommandGuard
 {
+    /// <summary>
+    /// Runs <paramref name="body"/> on the thread pool, as <see cref="Run"/> does in line. The command line arms its Ctrl+C and
+    /// SIGTERM handling only once an action has returned its task: a body run synchronously inside the action would finish (or
+    /// be killed by the signal, leaving its staging folder) before any handler was there to cancel it.
+    /// </summary>
+    public static Task<int> RunAsync(TextWriter error, Func<int> body) => Task.Run(() => Run(error, body));
+
     /// <summary>Runs <paramref name="body"/>, mapping exceptions to exit codes.</summary>
     public static int Run(TextWriter error, Func<int> body)
     {

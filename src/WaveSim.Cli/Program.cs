@@ -22,6 +22,14 @@ public static class Program
         AboutCommand.Create(),
     };
 
+    /// <summary>
+    /// How long a command may take, after Ctrl+C or SIGTERM cancels it, to stop and remove its staging folder before the
+    /// process exits anyway. The library's default of 2 s cut off a run stopping between frames, leaving its staging folder
+    /// and no message behind.
+    /// </summary>
+    public static readonly TimeSpan CancelGrace = TimeSpan.FromSeconds(30);
+
     /// <summary>Runs the command line and returns the exit code.</summary>
-    public static async Task<int> Main(string[] args) => await BuildRoot().Parse(args).InvokeAsync();
+    public static async Task<int> Main(string[] args) =>
+        await BuildRoot().Parse(args).InvokeAsync(new InvocationConfiguration { ProcessTerminationTimeout = CancelGrace });
 }

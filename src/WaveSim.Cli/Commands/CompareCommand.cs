@@ -25,7 +25,7 @@ public static class CompareCommand
         var cmd = new Command("compare", "Compare a simulated probe with a measured capture: RMS and peak difference, figure differences, overlay")
         { scenario, probe, align, outDir, json, force };
         capture.AddTo(cmd);
-        cmd.SetAction((pr, ct) => Task.FromResult(CommandGuard.Run(pr.InvocationConfiguration.Error, () =>
+        cmd.SetAction((pr, ct) => CommandGuard.RunAsync(pr.InvocationConfiguration.Error, () =>
         {
             string path = pr.GetValue(scenario)!;
             var s = CommonOptions.Load(path, pr.InvocationConfiguration.Error);
@@ -52,7 +52,7 @@ public static class CompareCommand
             if (pr.GetValue(json)) o.WriteLine(RunSummary.Text(summary));
             else Print(o, result, dir);
             return ExitCodes.Ok;
-        })));
+        }));
         return cmd;
     }
 

@@ -32,7 +32,7 @@ public static class FitCommand
         var cmd = new Command("fit", "Fit scenario values so a simulated probe matches a capture in least squares")
         { scenario, probe, free, align, maxSims, outDir, json, force };
         capture.AddTo(cmd);
-        cmd.SetAction((pr, ct) => Task.FromResult(CommandGuard.Run(pr.InvocationConfiguration.Error, () =>
+        cmd.SetAction((pr, ct) => CommandGuard.RunAsync(pr.InvocationConfiguration.Error, () =>
         {
             string path = pr.GetValue(scenario)!;
             var s = CommonOptions.Load(path, pr.InvocationConfiguration.Error);
@@ -67,7 +67,7 @@ public static class FitCommand
             if (!result.Converged)
                 pr.InvocationConfiguration.Error.WriteLine($"warning: the fit used its budget of {pr.GetValue(maxSims)} simulations before it stopped improving; raise --max-sims");
             return ExitCodes.Ok;
-        })));
+        }));
         return cmd;
     }
 

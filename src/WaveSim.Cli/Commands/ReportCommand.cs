@@ -25,7 +25,7 @@ public static class ReportCommand
         var settle = CommonOptions.SettleBand();
         var cmd = new Command("report", "Simulate a scenario and write one self-contained HTML report (report.html)")
         { scenario, outDir, json, force, terminations, settle };
-        cmd.SetAction((pr, ct) => Task.FromResult(CommandGuard.Run(pr.InvocationConfiguration.Error, () =>
+        cmd.SetAction((pr, ct) => CommandGuard.RunAsync(pr.InvocationConfiguration.Error, () =>
         {
             string path = pr.GetValue(scenario)!;
             double band = CommonOptions.ParseBand(pr.GetValue(settle)!);
@@ -69,7 +69,7 @@ public static class ReportCommand
                 o.WriteLine($"wrote {file}");
             }
             return ExitCodes.Ok;
-        })));
+        }));
         return cmd;
     }
 }

@@ -30,7 +30,7 @@ public static class RunCommand
         var plot = new Option<string?>("--plot") { Description = "Probes drawn in waveforms.png, comma-separated (e.g. rx,mid); default: every probe" };
         var cmd = new Command("run", "Simulate a scenario and write probes.csv, summary.json and pictures")
         { scenario, outDir, json, force, svg, currents, frames, frameSize, settle, fdCheck, window, plot };
-        cmd.SetAction((pr, ct) => Task.FromResult(CommandGuard.Run(pr.InvocationConfiguration.Error, () =>
+        cmd.SetAction((pr, ct) => CommandGuard.RunAsync(pr.InvocationConfiguration.Error, () =>
         {
             string path = pr.GetValue(scenario)!;
             int nFrames = pr.GetValue(frames);
@@ -90,7 +90,7 @@ public static class RunCommand
                         o.WriteLine($"  frequency-domain check {d.Probe}: largest difference {Quantity.Format(d.MaxDiffV, "V", 3)} ({d.MaxDiffPct:F3} % of the swing)");
             }
             return ExitCodes.Ok;
-        })));
+        }));
         return cmd;
     }
 

@@ -29,7 +29,7 @@ public static class SweepCommand
         var force = CommonOptions.Force();
         var cmd = new Command("sweep", "Run a grid of scenario variants and tabulate the signal figures")
         { scenario, vary, figure, goal, limit, serial, settle, outDir, json, force };
-        cmd.SetAction((pr, ct) => Task.FromResult(CommandGuard.Run(pr.InvocationConfiguration.Error, () =>
+        cmd.SetAction((pr, ct) => CommandGuard.RunAsync(pr.InvocationConfiguration.Error, () =>
         {
             string path = pr.GetValue(scenario)!;
             // Everything is read and checked before the first point runs.
@@ -76,7 +76,7 @@ public static class SweepCommand
             }
             else Print(o, result, figures, g, limits, dir, charted, leftOut);
             return ExitCodes.Ok;
-        })));
+        }));
         return cmd;
     }
 

@@ -33,7 +33,7 @@ public static class TdrCommand
         var cmd = new Command("tdr", "Step reflectometry: impedance against distance by layer peeling, segments and lumped elements")
         { scenario, rise, rs, velocity, epsEff, incident, toScenario, outDir, json, force };
         capture.AddTo(cmd);
-        cmd.SetAction((pr, ct) => Task.FromResult(CommandGuard.Run(pr.InvocationConfiguration.Error, () =>
+        cmd.SetAction((pr, ct) => CommandGuard.RunAsync(pr.InvocationConfiguration.Error, () =>
         {
             string path = pr.GetValue(scenario)!;
             var s = CommonOptions.Load(path);
@@ -88,7 +88,7 @@ public static class TdrCommand
             if (pr.GetValue(json)) o.WriteLine(RunSummary.Text(summary));
             else Print(o, result, dir, pr.GetValue(toScenario));
             return ExitCodes.Ok;
-        })));
+        }));
         return cmd;
     }
 

@@ -27,7 +27,7 @@ public static class TerminationsCommand
         var serial = new Option<bool>("--serial") { Description = "Run the strategies one at a time" };
         var cmd = new Command("terminations", "Compare termination strategies on the scenario's net and recommend part values")
         { scenario, outDir, json, series, maxOvershoot, maxSettling, level, settle, serial, force };
-        cmd.SetAction((pr, ct) => Task.FromResult(CommandGuard.Run(pr.InvocationConfiguration.Error, () =>
+        cmd.SetAction((pr, ct) => CommandGuard.RunAsync(pr.InvocationConfiguration.Error, () =>
         {
             string path = pr.GetValue(scenario)!;
             var options = new TerminationOptions
@@ -55,7 +55,7 @@ public static class TerminationsCommand
             if (pr.GetValue(json)) o.WriteLine(RunSummary.Text(TerminationReport.Json(result, dir)));
             else Print(o, result, dir);
             return ExitCodes.Ok;
-        })));
+        }));
         return cmd;
     }
 
