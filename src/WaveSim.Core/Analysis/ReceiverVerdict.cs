@@ -85,8 +85,7 @@ public static class ReceiverVerdict
         int n = t.Length;
         int i0 = Array.BinarySearch(t, edge.StartS);
         i0 = i0 >= 0 ? i0 : Math.Min(n - 1, ~i0);
-        int i1 = n - 1;
-        while (i1 > i0 && t[i1] >= windowEnd) i1--;
+        int i1 = Math.Max(i0, WaveformMath.LowerBound(t, windowEnd) - 1);   // the last sample before the window ends
         bool rising = edge.Rising, lastEdge = double.IsPositiveInfinity(windowEnd);
         double swing = highV - lowV, target = rising ? highV : lowV;
         var failed = new List<(VerdictRule, string)>();

@@ -115,7 +115,7 @@ public static class SignalQuality
         int last = n - 1;
         if (options.NextEdgeTimeS is { } next)
         {
-            while (last > 0 && time[last] >= next) last--;
+            last = Math.Max(0, WaveformMath.LowerBound(time, next) - 1);
             figures = figures with { FirstEdgeWindowEndS = next };
         }
         int i50 = FirstAtOrAbove(u, 0, last, Mid);

@@ -30,6 +30,13 @@ internal static class WaveformMath
         return t[i] + f * (t[i + 1] - t[i]);
     }
 
+    /// <summary>The first index of the increasing <paramref name="times"/> at or after <paramref name="t"/> (its length when none is).</summary>
+    public static int LowerBound(double[] times, double t)
+    {
+        int i = Array.BinarySearch(times, t);
+        return i >= 0 ? i : ~i;
+    }
+
     /// <summary>Linear interpolation of y at instant x (clamped to the ends). t must increase.</summary>
     public static double Interpolate(double[] t, double[] y, double x)
     {

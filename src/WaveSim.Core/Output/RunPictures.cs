@@ -1,3 +1,4 @@
+using WaveSim.Core.Analysis;
 using WaveSim.Core.Model;
 using WaveSim.Core.Rendering;
 using WaveSim.Core.Solver;
@@ -60,7 +61,7 @@ public static class RunPictures
             window = DefaultWindow(r, specs, edges, out limited);
         }
 
-        int first = Math.Max(0, LowerBound(r.Time, window.Start) - 1), last = Math.Min(r.Time.Length - 1, LowerBound(r.Time, window.Stop));
+        int first = Math.Max(0, WaveformMath.LowerBound(r.Time, window.Start) - 1), last = Math.Min(r.Time.Length - 1, WaveformMath.LowerBound(r.Time, window.Stop));
         double[] Cut(double[] v) => v[first..(last + 1)];
         double[] time = Cut(r.Time);
         var probes = chosen.Select(i => r.Probes[i]).ToList();
@@ -152,13 +153,6 @@ public static class RunPictures
             lines.Add(new ReferenceLine(g.Key.Vil, $"VIL {Quantity.Format(g.Key.Vil, "V", 3)}{who}") { Colour = Palette.Threshold });
         }
         return lines;
-    }
-
-    /// <summary>The first index whose time is at or after <paramref name="t"/> (the length when none is).</summary>
-    static int LowerBound(double[] times, double t)
-    {
-        int i = Array.BinarySearch(times, t);
-        return i >= 0 ? i : ~i;
     }
 
     /// <summary>
