@@ -36,9 +36,11 @@ internal static class SourceWaveform
         if (x <= 0) return 0;
         if (x >= span) return 1;
         double sigma = s.MinimumEdge / GaussianTenNinetyOverSigma;
-        double tail = Phi(-GaussianHalfSpan);
-        return (Phi((x - GaussianHalfSpan * sigma) / sigma) - tail) / (1 - 2 * tail);
+        return (Phi((x - GaussianHalfSpan * sigma) / sigma) - GaussianTail) / (1 - 2 * GaussianTail);
     }
+
+    /// <summary>The Gaussian's mass beyond the cut at −<see cref="GaussianHalfSpan"/> σ, taken off so the edge starts at exactly 0.</summary>
+    static readonly double GaussianTail = Phi(-GaussianHalfSpan);
 
     static double Phi(double z) => 0.5 * MathNet.Numerics.SpecialFunctions.Erfc(-z / Math.Sqrt(2));
 

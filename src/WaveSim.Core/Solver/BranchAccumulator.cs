@@ -9,19 +9,19 @@ internal sealed class BranchAccumulator
 {
     readonly Network _net;
     readonly double[] _jv;
-    readonly double[] _i2, _v, _v2, _prevV, _prevV2;
+    readonly double[] _i2, _v, _v2, _prevV;
 
     public BranchAccumulator(Network net, double[] junctionV, double sourceNow)
     {
         _net = net; _jv = junctionV;
         int nb = net.Branches.Count;
         _i2 = new double[nb]; _v = new double[nb]; _v2 = new double[nb];
-        _prevV = new double[nb]; _prevV2 = new double[nb];
+        _prevV = new double[nb];
         for (int b = 0; b < nb; b++)
         {
             var br = net.Branches[b];
             double va = br.A >= 0 ? _jv[br.A] : br.DrivenA ? sourceNow : 0;
-            _prevV[b] = va; _prevV2[b] = va * va;
+            _prevV[b] = va;
         }
     }
 
@@ -34,8 +34,8 @@ internal sealed class BranchAccumulator
             double va = br.A >= 0 ? _jv[br.A] : br.DrivenA ? sourceNext : 0;
             _i2[b] += dt * br.Average * br.Average;
             _v[b] += 0.5 * dt * (_prevV[b] + va);
-            _v2[b] += 0.5 * dt * (_prevV2[b] + va * va);
-            _prevV[b] = va; _prevV2[b] = va * va;
+            _v2[b] += 0.5 * dt * (_prevV[b] * _prevV[b] + va * va);
+            _prevV[b] = va;
         }
     }
 

@@ -83,7 +83,8 @@ internal sealed class LeapfrogSolver
                     if (_dispersive[s] is { } dk) dk.UpdateVoltages(_segV[s], _segI[s]);
                     else _kernels[s].UpdateVoltages(_segV[s], _segI[s]);
             }
-            _junctions.Solve(src.Value(t), src.Value(t + dt));
+            double next = src.Value(t + dt);
+            _junctions.Solve(src.Value(t), next);
             var x = _junctions.Voltages;
             for (int j = 0; j < _jv.Length; j++)
             {
@@ -93,7 +94,7 @@ internal sealed class LeapfrogSolver
             }
             foreach (var seg in _net.Segments) { seg.V[0] = _jv[seg.Start]; seg.V[^1] = _jv[seg.End]; }
             sampler.AfterStep(n);
-            if (n < steps) averages?.Add(dt, src.Value(t + dt));
+            if (n < steps) averages?.Add(dt, next);
             if (n % checkEvery == 0)
             {
                 ct.ThrowIfCancellationRequested();
