@@ -24,9 +24,6 @@ public sealed record ReceiverCheck(ProbeVerdict Verdict)
     /// <summary>Vil minus settled low level is zero or more.</summary>
     public bool? MarginLowOk => Verdict.MarginLowV is { } m && Verdict.Judged ? m >= 0 : null;
 
-    /// <summary>Edges of the source that reach the probe inside the record (not for bit patterns).</summary>
-    public int? ExpectedCrossings => Verdict.Judged && Verdict.Edges.Count > 0 ? Verdict.Edges.Count : null;
-
     /// <summary>Every edge crosses the threshold band exactly once, monotonically.</summary>
     public bool? CrossingsOk => Both(Verdict.Holds(VerdictRule.Crossings), Verdict.Holds(VerdictRule.Monotonic));
 
