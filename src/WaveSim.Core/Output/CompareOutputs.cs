@@ -45,10 +45,10 @@ public static class CompareOutputs
         csv.NextRecord();
         for (int k = 0; k < c.Time.Length; k++)
         {
-            csv.WriteField(R(c.Time[k]));
-            csv.WriteField(R(c.Simulated[k]));
-            csv.WriteField(R(c.Captured[k]));
-            csv.WriteField(R(c.Residual[k]));
+            csv.WriteField(CsvNumber.Format(c.Time[k]));
+            csv.WriteField(CsvNumber.Format(c.Simulated[k]));
+            csv.WriteField(CsvNumber.Format(c.Captured[k]));
+            csv.WriteField(CsvNumber.Format(c.Residual[k]));
             csv.NextRecord();
         }
     }
@@ -74,8 +74,6 @@ public static class CompareOutputs
             CaptureResidual.Panel(c.Time, c.Captured, c.Simulated, "simulated"),
         ]);
     }
-
-    internal static string R(double x) => (x + 0.0).ToString("R", CultureInfo.InvariantCulture); // + 0.0 turns -0 into 0
 
     internal static double? Finite(double x) => double.IsFinite(x) ? x : null;
 }

@@ -27,5 +27,5 @@ public static class ProbesCsv
         }
     }
 
-    static string Cell(double v) => (v + 0.0).ToString("R", CultureInfo.InvariantCulture); // + 0.0 turns -0 into 0
+    static string Cell(double v) => CsvNumber.Format(v);
 }

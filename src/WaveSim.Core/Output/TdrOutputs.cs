@@ -61,10 +61,10 @@ public static class TdrOutputs
         csv.NextRecord();
         for (int k = 0; k < r.TimeS.Length; k++)
         {
-            csv.WriteField(CompareOutputs.R(r.TimeS[k]));
-            csv.WriteField(CompareOutputs.R(r.DistanceM[k]));
-            csv.WriteField(CompareOutputs.R(r.PortVolts[k]));
-            csv.WriteField(CompareOutputs.R(r.Rho[k]));
+            csv.WriteField(CsvNumber.Format(r.TimeS[k]));
+            csv.WriteField(CsvNumber.Format(r.DistanceM[k]));
+            csv.WriteField(CsvNumber.Format(r.PortVolts[k]));
+            csv.WriteField(CsvNumber.Format(r.Rho[k]));
             csv.WriteField(Cell(r.NaiveOhms[k]));
             csv.WriteField(Cell(r.LayerOhms[k]));
             csv.NextRecord();
@@ -96,5 +96,5 @@ public static class TdrOutputs
         ]);
     }
 
-    static string Cell(double x) => double.IsFinite(x) ? CompareOutputs.R(x) : "";
+    static string Cell(double x) => double.IsFinite(x) ? CsvNumber.Format(x) : "";
 }

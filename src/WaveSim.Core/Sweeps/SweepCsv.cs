@@ -40,5 +40,5 @@ public static class SweepCsv
         Write(r, w);
     }
 
-    static string Cell(double v) => (v + 0.0).ToString("R", CultureInfo.InvariantCulture); // + 0.0 turns -0 into 0
+    static string Cell(double v) => Output.CsvNumber.Format(v);
 }

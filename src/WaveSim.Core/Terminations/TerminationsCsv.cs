@@ -56,5 +56,5 @@ public static class TerminationsCsv
         Write(r, w);
     }
 
-    static string Cell(double? v) => v is { } x ? (x + 0.0).ToString("R", CultureInfo.InvariantCulture) : ""; // + 0.0 turns -0 into 0
+    static string Cell(double? v) => v is { } x ? Output.CsvNumber.Format(x) : "";
 }
