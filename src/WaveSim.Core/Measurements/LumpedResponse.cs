@@ -46,11 +46,10 @@ public static class LumpedResponse
         if (b <= tiny) return new StepResponse(0, [(1, -2 / a)]);
         if (a <= tiny) return new StepResponse(0, [(-1, -2 / b)]);
         double ab = a * b, sum = a + b;
-        Complex root = Complex.Sqrt(Discriminant(a, b));
-        Complex p1 = (-sum + root) / (2 * ab), p2 = (-sum - root) / (2 * ab);
+        var poles = TransmissionPoles(a, b);   // the pair's two poles, the same as its transmission's
         double n0 = a - b, n1 = seriesFirst ? ab : -ab;
         (Complex, Complex) Term(Complex p) => ((n0 + n1 * p) / (2 * ab * p + sum), p);
-        return new StepResponse(0, [Term(p1), Term(p2)]);
+        return new StepResponse(0, [Term(poles[0]), Term(poles[1])]);
     }
 
     /// <summary>A capacitive (ρ −1 → +1) or inductive (ρ +1 → −1) end with time constant <paramref name="tau"/>.</summary>
