@@ -33,6 +33,19 @@ public sealed class OutputFolder : IDisposable
         return full;
     }
 
+    /// <summary>Writes <paramref name="bytes"/> as <paramref name="relative"/> (staged until <see cref="Commit"/>).</summary>
+    public void Write(string relative, byte[] bytes) => System.IO.File.WriteAllBytes(File(relative), bytes);
+
+    /// <summary>Writes <paramref name="text"/> (UTF-8) as <paramref name="relative"/> (staged until <see cref="Commit"/>).</summary>
+    public void WriteText(string relative, string text) => System.IO.File.WriteAllText(File(relative), text);
+
+    /// <summary>Streams a large file (a probe CSV) as <paramref name="relative"/> without holding it in memory.</summary>
+    public void Write(string relative, Action<Stream> write)
+    {
+        using var stream = new FileStream(File(relative), FileMode.CreateNew, FileAccess.Write);
+        write(stream);
+    }
+
     /// <summary>Moves every staged file into the target folder (replacing files of the same name).</summary>
     public void Commit()
     {
