@@ -36,7 +36,7 @@ public static class CompareCommand
             CaptureComparisonResult result;
             using (var bar = new ProgressBar(pr.InvocationConfiguration.Error, "simulating"))
                 result = CaptureComparison.Run(s, cap, probeName, ParseAlign(pr.GetValue(align)!),
-                    new SimulationOptions { Force = pr.GetValue(force), Progress = bar }, ct);
+                    new RunOptions { Force = pr.GetValue(force), Progress = bar }, ct);
 
             string dir = CommonOptions.OutputDir(pr.GetValue(outDir), path, "-compare");
             var summary = CompareOutputs.Json(result);
