@@ -28,7 +28,7 @@ public static class CompareCommand
         cmd.SetAction((pr, ct) => CommandGuard.RunAsync(pr.InvocationConfiguration.Error, () =>
         {
             string path = pr.GetValue(scenario)!;
-            var s = CommonOptions.Load(path, pr.InvocationConfiguration.Error);
+            var (s, plan) = CommonOptions.LoadPlanned(path, pr.InvocationConfiguration.Error);
             string probeName = pr.GetValue(probe)!;
             CaptureComparison.RequireProbe(s, probeName);
             Capture cap = capture.Read(pr)!;
@@ -36,7 +36,7 @@ public static class CompareCommand
             CaptureComparisonResult result;
             using (var bar = new ProgressBar(pr.InvocationConfiguration.Error, "simulating"))
                 result = CaptureComparison.Run(s, cap, probeName, ParseAlign(pr.GetValue(align)!),
-                    new RunOptions { Force = pr.GetValue(force), Progress = bar }, ct);
+                    new RunOptions { Force = pr.GetValue(force), Plan = plan, Progress = bar }, ct);
 
             string dir = CommonOptions.OutputDir(pr.GetValue(outDir), path, "-compare");
             var summary = CompareOutputs.Json(result);

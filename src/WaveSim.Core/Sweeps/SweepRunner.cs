@@ -35,7 +35,7 @@ public static class SweepRunner
         ParallelFor(grid.Points.Count, options.Serial, ct, i =>
         {
             var p = grid.Points[i];
-            var figures = Simulate.Run(p.Scenario, run, ct).Figures.Select(f => f.Figures).ToArray();
+            var figures = Simulate.Run(p.Scenario, run with { Plan = p.Plan }, ct).Figures.Select(f => f.Figures).ToArray();
             results[i] = new SweepPointResult(p.Index, p.Values, figures);
             int n = Interlocked.Increment(ref done);
             if (options.Progress is { } progress) lock (gate) progress.Report((double)n / results.Length);
