@@ -3,6 +3,7 @@ using System.Globalization;
 using WaveSim.Core;
 using WaveSim.Core.Measurements;
 using WaveSim.Core.Output;
+using WaveSim.Core.Pictures;
 using WaveSim.Core.Rendering;
 using WaveSim.Core.Solver;
 using WaveSim.Core.Units;
@@ -45,7 +46,8 @@ public static class CompareCommand
                 File.WriteAllText(output.File("compare.json"), RunSummary.Text(summary));
                 CompareOutputs.WriteCsv(result, output.File("compare.csv"));
                 File.WriteAllBytes(output.File("compare.png"),
-                    XyChart.RenderPng(CompareOutputs.Chart(result, $"{s.Title}: {probeName} against {Path.GetFileName(cap.Source)}"), 1200, 800));
+                    XyChart.RenderPng(CompareOutputs.Chart(result, $"{s.Title}: {probeName} against {Path.GetFileName(cap.Source)}"),
+                        PictureSizes.Default.CaptureChartWidth, PictureSizes.Default.CaptureChartHeight));
                 output.Commit();
             }
             var o = pr.InvocationConfiguration.Output;

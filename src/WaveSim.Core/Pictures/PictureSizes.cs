@@ -24,4 +24,8 @@ public sealed record PictureSizes
     public int FrameWidth { get; init; } = 1280;
     /// <summary>Height of each frame.</summary>
     public int FrameHeight { get; init; } = 720;
+    /// <summary>Width of the chart of a capture comparison or a fit (compare.png, fit.png).</summary>
+    public int CaptureChartWidth { get; init; } = 1200;
+    /// <summary>Height of the chart of a capture comparison or a fit.</summary>
+    public int CaptureChartHeight { get; init; } = 800;
 }
