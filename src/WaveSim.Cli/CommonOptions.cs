@@ -29,11 +29,15 @@ public static class CommonOptions
     }
 
     /// <summary>Loads a scenario and prints its warnings (<see cref="ScenarioWarnings"/>, for its grid plan) on <paramref name="warnings"/>.</summary>
-    public static Scenario Load(string path, TextWriter warnings)
+    public static Scenario Load(string path, TextWriter warnings) => LoadPlanned(path, warnings).Scenario;
+
+    /// <summary>Loads a scenario, plans its grid once and prints its warnings for that plan; pass the plan on to the run (<see cref="RunOptions.Plan"/>).</summary>
+    public static (Scenario Scenario, Core.Solver.GridPlan Plan) LoadPlanned(string path, TextWriter warnings)
     {
         var s = Load(path);
-        WarningOutput.Write(warnings, ScenarioWarnings.For(s, Simulate.Plan(s)));
-        return s;
+        var plan = Simulate.Plan(s);
+        WarningOutput.Write(warnings, ScenarioWarnings.For(s, plan));
+        return (s, plan);
     }
 
     /// <summary>The output folder: the option's value, or out/&lt;scenario file name without extension&gt;&lt;suffix&gt;.</summary>

@@ -1,3 +1,4 @@
+using WaveSim.Core.Analysis;
 using WaveSim.Core.Model;
 using WaveSim.Core.Solver;
 using WaveSim.Core.Units;
@@ -11,7 +12,30 @@ public static class Simulate
     public static GridPlan Plan(Scenario scenario) => GridPlan.For(scenario);
 
     /// <summary>
-    /// Runs <paramref name="scenario"/> and returns the probe waveforms. Source edges shorter than the grid's
+    /// Runs <paramref name="scenario"/> and analyses the run (<see cref="RunAnalysis.Analyse"/>): the one call every command
+    /// that simulates goes through. The run records the snapshots the analysis asks for (space-time rows, frames).
+    /// </summary>
+    /// <exception cref="PlanLimitException">The plan exceeds the memory or cell-update limits (unless forced).</exception>
+    /// <exception cref="InputException">The network is singular.</exception>
+    /// <exception cref="NumericalException">The solution became NaN or infinite.</exception>
+    /// <exception cref="OperationCanceledException">The token was cancelled.</exception>
+    public static RunOutcome Run(Scenario scenario, RunOptions? options = null, CancellationToken ct = default)
+    {
+        options ??= new RunOptions();
+        var sim = new SimulationOptions
+        {
+            Force = options.Force,
+            Progress = options.Progress,
+            SnapshotTimes = RunAnalysis.SnapshotTimes(scenario, options.Analysis),
+            TrackBranchAverages = options.TrackBranchAverages,
+        };
+        var result = Solve(scenario, sim, ct, options.Plan);
+        return RunAnalysis.Analyse(result, options.Analysis);
+    }
+
+    /// <summary>
+    /// Runs <paramref name="scenario"/> on the solver alone and returns the probe waveforms, with no analysis: for what simulates
+    /// a set-up of its own (the reflectometer) and for tests of the solver. Source edges shorter than the grid's
     /// <see cref="GridPlan.MinimumEdge"/> are widened to it (<see cref="SourceSpec.MinimumEdge"/>); the result's scenario carries
     /// the source as run.
     /// </summary>
@@ -19,10 +43,12 @@ public static class Simulate
     /// <exception cref="InputException">The network is singular.</exception>
     /// <exception cref="NumericalException">The solution became NaN or infinite.</exception>
     /// <exception cref="OperationCanceledException">The token was cancelled.</exception>
-    public static SimulationResult Run(Scenario scenario, SimulationOptions? options = null, CancellationToken ct = default)
+    public static SimulationResult Solve(Scenario scenario, SimulationOptions? options = null, CancellationToken ct = default) =>
+        Solve(scenario, options ?? new SimulationOptions(), ct, null);
+
+    static SimulationResult Solve(Scenario scenario, SimulationOptions options, CancellationToken ct, GridPlan? plan)
     {
-        options ??= new SimulationOptions();
-        var plan = GridPlan.For(scenario);
+        plan ??= GridPlan.For(scenario);
         if (!options.Force) CheckLimits(scenario, plan);
         var run = scenario with { Source = scenario.Source with { MinimumEdge = plan.MinimumEdge } };
         return new LeapfrogSolver(run, plan).Run(options, ct);

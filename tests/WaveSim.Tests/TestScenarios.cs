@@ -26,7 +26,7 @@ simulation: { duration: 27 ns, resolution: 10 }
 
     public static Scenario Parse(string yaml) => ScenarioLoader.Parse(yaml, "test.yaml");
 
-    public static SimulationResult Run(string yaml, SimulationOptions? options = null) => Simulate.Run(Parse(yaml), options);
+    public static SimulationResult Run(string yaml, SimulationOptions? options = null) => Simulate.Solve(Parse(yaml), options);
 
     /// <summary>The value of a waveform at time t by linear interpolation on the output grid.</summary>
     public static double At(this SimulationResult r, string probe, double t, bool current = false)

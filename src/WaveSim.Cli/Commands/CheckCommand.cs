@@ -18,8 +18,7 @@ public static class CheckCommand
         var cmd = new Command("check", "Read a scenario and print the plan (cells, Courant numbers, step, memory) without running") { scenario, json };
         cmd.SetAction(pr => CommandGuard.Run(pr.InvocationConfiguration.Error, () =>
         {
-            var s = CommonOptions.Load(pr.GetValue(scenario)!, pr.InvocationConfiguration.Error);
-            var plan = Simulate.Plan(s);
+            var (s, plan) = CommonOptions.LoadPlanned(pr.GetValue(scenario)!, pr.InvocationConfiguration.Error);
             var problems = PlanAdvisor.Problems(s, plan);
             var o = pr.InvocationConfiguration.Output;
             if (pr.GetValue(json))

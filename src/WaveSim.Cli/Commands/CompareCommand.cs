@@ -3,6 +3,7 @@ using System.Globalization;
 using WaveSim.Core;
 using WaveSim.Core.Measurements;
 using WaveSim.Core.Output;
+using WaveSim.Core.Pictures;
 using WaveSim.Core.Rendering;
 using WaveSim.Core.Solver;
 using WaveSim.Core.Units;
@@ -28,7 +29,7 @@ public static class CompareCommand
         cmd.SetAction((pr, ct) => CommandGuard.RunAsync(pr.InvocationConfiguration.Error, () =>
         {
             string path = pr.GetValue(scenario)!;
-            var s = CommonOptions.Load(path, pr.InvocationConfiguration.Error);
+            var (s, plan) = CommonOptions.LoadPlanned(path, pr.InvocationConfiguration.Error);
             string probeName = pr.GetValue(probe)!;
             CaptureComparison.RequireProbe(s, probeName);
             Capture cap = capture.Read(pr)!;
@@ -36,7 +37,7 @@ public static class CompareCommand
             CaptureComparisonResult result;
             using (var bar = new ProgressBar(pr.InvocationConfiguration.Error, "simulating"))
                 result = CaptureComparison.Run(s, cap, probeName, ParseAlign(pr.GetValue(align)!),
-                    new SimulationOptions { Force = pr.GetValue(force), Progress = bar }, ct);
+                    new RunOptions { Force = pr.GetValue(force), Plan = plan, Progress = bar }, ct);
 
             string dir = CommonOptions.OutputDir(pr.GetValue(outDir), path, "-compare");
             var summary = CompareOutputs.Json(result);
@@ -45,7 +46,8 @@ public static class CompareCommand
                 File.WriteAllText(output.File("compare.json"), RunSummary.Text(summary));
                 CompareOutputs.WriteCsv(result, output.File("compare.csv"));
                 File.WriteAllBytes(output.File("compare.png"),
-                    XyChart.RenderPng(CompareOutputs.Chart(result, $"{s.Title}: {probeName} against {Path.GetFileName(cap.Source)}"), 1200, 800));
+                    XyChart.RenderPng(CompareOutputs.Chart(result, $"{s.Title}: {probeName} against {Path.GetFileName(cap.Source)}"),
+                        PictureSizes.Default.CaptureChartWidth, PictureSizes.Default.CaptureChartHeight));
                 output.Commit();
             }
             var o = pr.InvocationConfiguration.Output;

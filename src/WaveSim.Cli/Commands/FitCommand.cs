@@ -4,6 +4,7 @@ using WaveSim.Core;
 using WaveSim.Core.Fitting;
 using WaveSim.Core.Measurements;
 using WaveSim.Core.Output;
+using WaveSim.Core.Pictures;
 using WaveSim.Core.Rendering;
 using WaveSim.Core.Units;
 
@@ -58,7 +59,8 @@ public static class FitCommand
                 File.WriteAllText(output.File("fitted.yaml"), result.FittedText);
                 File.WriteAllText(output.File("fit.json"), RunSummary.Text(summary));
                 File.WriteAllBytes(output.File("fit.png"),
-                    XyChart.RenderPng(FitOutputs.Chart(result, $"{s.Title}: fit of {probeName} to {Path.GetFileName(cap.Source)}"), 1200, 800));
+                    XyChart.RenderPng(FitOutputs.Chart(result, $"{s.Title}: fit of {probeName} to {Path.GetFileName(cap.Source)}"),
+                        PictureSizes.Default.CaptureChartWidth, PictureSizes.Default.CaptureChartHeight));
                 output.Commit();
             }
             var o = pr.InvocationConfiguration.Output;

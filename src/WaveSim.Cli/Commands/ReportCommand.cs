@@ -3,7 +3,7 @@ using System.Text.Json.Nodes;
 using WaveSim.Core;
 using WaveSim.Core.Output;
 using WaveSim.Core.Reports;
-using WaveSim.Core.Solver;
+using WaveSim.Core.Analysis;
 using WaveSim.Core.Terminations;
 
 namespace WaveSim.Cli.Commands;
@@ -29,17 +29,18 @@ public static class ReportCommand
         {
             string path = pr.GetValue(scenario)!;
             double band = CommonOptions.ParseBand(pr.GetValue(settle)!);
-            var s = CommonOptions.Load(path, pr.InvocationConfiguration.Error);
-            string text = File.ReadAllText(path);
-            var options = HtmlReport.RunOptions(s, pr.GetValue(force));
-            SimulationResult result;
+            // The file is read once: the scenario shown is the text the run was read from.
+            var (s, plan) = CommonOptions.LoadPlanned(path, pr.InvocationConfiguration.Error);
+            string text = s.SourceText ?? "";
+            var options = HtmlReport.RunOptions(band, pr.GetValue(force)) with { Plan = plan };
+            RunOutcome run;
             using (var bar = new ProgressBar(pr.InvocationConfiguration.Error, "simulating"))
-                result = Simulate.Run(s, options with { Progress = bar }, ct);
+                run = Simulate.Run(s, options with { Progress = bar }, ct);
             TerminationStudyResult? study = null;
             if (pr.GetValue(terminations))
                 using (var bar = new ProgressBar(pr.InvocationConfiguration.Error, "terminations"))
                     study = TerminationStudy.Run(s, new TerminationOptions { SettleBand = band, Force = pr.GetValue(force) }, bar, ct);
-            var report = HtmlReport.Build(ReportInput.For(result, text, band, study));
+            var report = HtmlReport.Build(ReportInput.For(run, text, study));
             string dir = CommonOptions.OutputDir(pr.GetValue(outDir), path);
             using (var output = new OutputFolder(dir))
             {

@@ -1,3 +1,4 @@
+using WaveSim.Core.Analysis;
 using WaveSim.Core.Measurements;
 using WaveSim.Core.Model;
 using WaveSim.Core.Scenarios;
@@ -70,7 +71,8 @@ public static class ScenarioFit
                 return hit;
             ct.ThrowIfCancellationRequested();
             Scenario variant = Variant(scenario, parameters, values);
-            SimulationResult r = Simulate.Run(variant, new SimulationOptions { Force = options.Force }, ct);
+            // An evaluation needs only the probe's waveform.
+            SimulationResult r = Simulate.Run(variant, new RunOptions { Force = options.Force, Analysis = AnalysisOptions.WaveformsOnly }, ct).Result;
             simulations++;
             options.Progress?.Report(Math.Min(1.0, simulations / (double)options.MaxSimulations));
             var result = (r.Time, r.Probe(probe).Volts);

@@ -1,6 +1,5 @@
 using WaveSim.Core.Analysis;
 using WaveSim.Core.Model;
-using WaveSim.Core.Output;
 using WaveSim.Core.Solver;
 
 namespace WaveSim.Core.Measurements;
@@ -13,18 +12,20 @@ public static class CaptureComparison
     /// <param name="capture">The measured waveform.</param>
     /// <param name="probe">Name of the scenario probe the capture was taken at.</param>
     /// <param name="mode">How to find the capture's time offset.</param>
-    /// <param name="options">Simulation options (progress, force); null for the defaults.</param>
+    /// <param name="options">Run options (progress, force); null for the defaults. Its analysis is replaced by
+    /// <see cref="AnalysisOptions.WaveformsOnly"/>: the comparison computes its own figures on the aligned grid.</param>
     /// <param name="ct">Cancels the simulation.</param>
     /// <returns>The comparison and the figures of both waveforms.</returns>
     /// <exception cref="InputException">No such probe, too little overlap (see <see cref="CaptureTimeSpan"/>), or the waveforms cannot
     /// be compared (see <see cref="WaveformComparison.Compare"/>).</exception>
     public static CaptureComparisonResult Run(Scenario scenario, Capture capture, string probe, AlignMode mode,
-        SimulationOptions? options = null, CancellationToken ct = default)
+        RunOptions? options = null, CancellationToken ct = default)
     {
         ArgumentNullException.ThrowIfNull(scenario);
         ArgumentNullException.ThrowIfNull(capture);
         RequireProbe(scenario, probe);
-        SimulationResult sim = Simulate.Run(scenario, options, ct);
+        var run = (options ?? new RunOptions()) with { Analysis = AnalysisOptions.WaveformsOnly };
+        SimulationResult sim = Simulate.Run(scenario, run, ct).Result;
         return Compare(sim, capture, probe, mode);
     }
 
@@ -83,10 +84,10 @@ public static class CaptureComparison
     public static SignalQualityOptions FigureOptions(Scenario s, string probe)
     {
         ProbeSpec spec = s.Probes.First(p => p.Name == probe);
-        ReceiverThresholds? rx = spec.Anchor == ProbeAnchor.Load ? RunSummary.LoadOf(s, spec.BranchPath).Receiver : null;
+        ReceiverThresholds? rx = NetPaths.ReceiverAt(s, spec);
         return new SignalQualityOptions
         {
-            VihV = rx?.Vih, VilV = rx?.Vil, SourceEdgeTimeS = s.Source.FirstEdgeMidpoint, LineDelayS = RunEyes.DelayTo(s.Line, spec, 0),
+            VihV = rx?.Vih, VilV = rx?.Vil, SourceEdgeTimeS = s.Source.FirstEdgeMidpoint, LineDelayS = NetPaths.DelayTo(s, spec),
         };
     }
 

@@ -64,7 +64,7 @@ public static class Reflectometer
         SimulationOptions? options = null, CancellationToken ct = default)
     {
         Scenario instrument = Instrument(scenario, riseS, sourceOhms);
-        SimulationResult r = Core.Simulate.Run(instrument, options, ct);
+        SimulationResult r = Core.Simulate.Solve(instrument, options, ct);
         double ramp = 1.25 * riseS;
         double incident = OpenCircuitVolts * sourceOhms / (sourceOhms + sourceOhms);
         return new ReflectometerTrace(r.Time, r.Probe(PortProbe).Volts, instrument.Source.Delay + ramp / 2, incident, 0, ramp, sourceOhms);

@@ -1,6 +1,6 @@
 using System.Globalization;
 using WaveSim.Core.Analysis;
-using WaveSim.Core.Output;
+using WaveSim.Core.Pictures;
 using WaveSim.Core.Rendering;
 using WaveSim.Core.Solver;
 using WaveSim.Core.Terminations;
@@ -37,16 +37,23 @@ public static class HtmlReport
         .note { color: #444; font-size: 0.9em; }
         """;
 
-    /// <summary>The options a run needs for its report: the snapshots of the space-time map.</summary>
-    public static SimulationOptions RunOptions(Model.Scenario s, bool force = false) =>
-        new() { Force = force, SnapshotTimes = RunPictures.SnapshotTimes(s, 0) };
+    /// <summary>
+    /// The options a run needs for its report: the full analysis with receivers judged at the default limits and
+    /// <paramref name="settleBand"/> (the same as <c>terminations</c>), and the space-time map's snapshots.
+    /// </summary>
+    public static RunOptions RunOptions(double settleBand = SignalQualityOptions.DefaultSettleBand, bool force = false) => new()
+    {
+        Force = force,
+        Analysis = new AnalysisOptions { SettleBand = settleBand, Limits = new VerdictLimits { SettleBand = settleBand } },
+    };
 
     /// <summary>Builds the page. The run must hold snapshots (simulate with <see cref="RunOptions"/>); without them the space-time map is left out with a note.</summary>
     public static HtmlReportResult Build(ReportInput input)
     {
+        ArgumentNullException.ThrowIfNull(input);
         var r = input.Result;
         var s = r.Scenario;
-        var checks = ReceiverCheck.Judge(r, input.Eyes, input.Limits);
+        var checks = ReceiverCheck.Of(input.Outcome);
         var w = new HtmlWriter();
         w.Line("<!DOCTYPE html>").Line("<html lang=\"en\">").Line("<head>").Line("<meta charset=\"utf-8\" />")
          .Line("<meta name=\"viewport\" content=\"width=device-width, initial-scale=1\" />");
@@ -63,7 +70,7 @@ public static class HtmlReport
 
         w.El("h2", "Waveforms");
         // The same default window as run's waveforms.png: a long clock or bit stream shows its start-up and first edges.
-        var picture = RunPictures.Waveforms(r, new WaveformOptions());
+        var picture = RunPictures.Waveforms(input.Outcome, new WaveformOptions());
         if (picture.Limited)
             w.El("p", $"The picture shows {picture.Shown.Describe()}: the start-up and the first {picture.EdgesShown} of " +
                 $"{picture.SourceEdges} source edges. The figures and verdicts cover the whole record.", ("class", "note"), ("id", "waveform-window"));
@@ -180,7 +187,7 @@ public static class HtmlReport
         }
     }
 
-    static byte[]? EyePng(string title, ProbeEye e) => RunEyes.RenderPng(title, e, ReportImages.EyeWidth, ReportImages.EyeHeight);
+    static byte[]? EyePng(string title, ProbeEye e) => EyePicture.RenderPng(title, e, ReportImages.EyeWidth, ReportImages.EyeHeight);
 
     static void TerminationSection(HtmlWriter w, TerminationStudyResult t)
     {

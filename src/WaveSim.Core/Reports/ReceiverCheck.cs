@@ -1,12 +1,10 @@
 using WaveSim.Core.Analysis;
 using WaveSim.Core.Model;
-using WaveSim.Core.Output;
-using WaveSim.Core.Solver;
 
 namespace WaveSim.Core.Reports;
 
 /// <summary>
-/// The report's pass/fail cells of one probe: a view of its <see cref="ProbeVerdict"/> (<see cref="RunVerdicts"/>, the same rules
+/// The report's pass/fail cells of one probe: a view of its <see cref="ProbeVerdict"/> (<see cref="RunVerdicts"/> through <see cref="RunAnalysis"/>, the same rules
 /// that judge <c>terminations</c>). Null members are "not judged" (no thresholds at this probe, or the rule does not apply).
 /// </summary>
 /// <param name="Verdict">The probe's verdict.</param>
@@ -45,9 +43,8 @@ public sealed record ReceiverCheck(ProbeVerdict Verdict)
     /// <summary>The rule in words, as printed in the report (common practice, no source).</summary>
     public const string Rule = ReceiverVerdict.RuleText + " Probes without receiver thresholds are not judged.";
 
-    /// <summary>Judges every probe of a run (in probe order) by <see cref="RunVerdicts.Judge"/>; <paramref name="eyes"/> from <see cref="RunEyes.Compute"/>.</summary>
-    public static IReadOnlyList<ReceiverCheck> Judge(SimulationResult r, IReadOnlyList<ProbeEye> eyes, VerdictLimits? limits = null) =>
-        RunVerdicts.Judge(r, limits, RunEyes.Applies(r.Scenario) ? eyes : null).Select(v => new ReceiverCheck(v)).ToArray();
+    /// <summary>The checks of every probe of an analysed run (in probe order), from its verdicts (<see cref="RunOutcome.Verdicts"/>).</summary>
+    public static IReadOnlyList<ReceiverCheck> Of(RunOutcome outcome) => outcome.Verdicts.Select(v => new ReceiverCheck(v)).ToArray();
 
     static bool? Both(bool? a, bool? b) => a is null && b is null ? null : a is not false && b is not false;
 }

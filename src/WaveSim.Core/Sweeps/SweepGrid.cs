@@ -7,7 +7,11 @@ namespace WaveSim.Core.Sweeps;
 /// <param name="Index">Position in sweep order (the first axis changes fastest).</param>
 /// <param name="Values">One SI value per axis, in axis order.</param>
 /// <param name="Scenario">The scenario with those values written in, read back like a file.</param>
-public sealed record SweepPoint(int Index, IReadOnlyList<double> Values, Scenario Scenario);
+public sealed record SweepPoint(int Index, IReadOnlyList<double> Values, Scenario Scenario)
+{
+    /// <summary>The variant's grid plan, made when the point was checked against the limits (null when forced); its run reuses it.</summary>
+    public Solver.GridPlan? Plan { get; init; }
+}
 
 /// <summary>
 /// The grid of variants of a sweep: every combination of the axes' values, made with <see cref="ScenarioEditor.With"/>
@@ -59,13 +63,14 @@ public sealed class SweepGrid
             try { v = ScenarioEditor.With(scenario, changes); }
             catch (InputException ex)
             { throw new InputException($"sweep point {i} ({string.Join(", ", changes.Select(c => c.KeyPath + "=" + c.Item2))}): {ex.Message}"); }
+            Solver.GridPlan? plan = null;
             if (!force)
             {
-                try { Simulate.CheckLimits(v, Simulate.Plan(v)); }
+                try { plan = Simulate.Plan(v); Simulate.CheckLimits(v, plan); }
                 catch (Solver.PlanLimitException ex) { throw new Solver.PlanLimitException(ex.Exceeded, $"sweep point {i}: "); }
                 catch (InputException ex) { throw new InputException($"sweep point {i}: {ex.Message}"); }
             }
-            points[i] = new SweepPoint(i, axes.Select((a, k) => a.Values[idx[k]]).ToArray(), v);
+            points[i] = new SweepPoint(i, axes.Select((a, k) => a.Values[idx[k]]).ToArray(), v) { Plan = plan };
         }
         return new SweepGrid(axes, points);
     }

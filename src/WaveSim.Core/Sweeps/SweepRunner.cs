@@ -1,6 +1,5 @@
 using System.Runtime.ExceptionServices;
 using WaveSim.Core.Analysis;
-using WaveSim.Core.Output;
 using WaveSim.Core.Solver;
 
 namespace WaveSim.Core.Sweeps;
@@ -29,14 +28,14 @@ public static class SweepRunner
     {
         options ??= new SweepRunOptions();
         var results = new SweepPointResult[grid.Points.Count];
-        var sim = new SimulationOptions { Force = options.Force };
+        // A point keeps only its figures: no eyes, verdicts or snapshots.
+        var run = new RunOptions { Force = options.Force, Analysis = AnalysisOptions.FiguresOnly(options.SettleBand) };
         int done = 0;
         var gate = new object();
         ParallelFor(grid.Points.Count, options.Serial, ct, i =>
         {
             var p = grid.Points[i];
-            var r = Simulate.Run(p.Scenario, sim, ct);
-            var figures = RunSummary.Figures(r, options.SettleBand).Select(f => f.Figures).ToArray();
+            var figures = Simulate.Run(p.Scenario, run with { Plan = p.Plan }, ct).Figures.Select(f => f.Figures).ToArray();
             results[i] = new SweepPointResult(p.Index, p.Values, figures);
             int n = Interlocked.Increment(ref done);
             if (options.Progress is { } progress) lock (gate) progress.Report((double)n / results.Length);

@@ -1,5 +1,4 @@
 using WaveSim.Core.Analysis;
-using WaveSim.Core.Output;
 using WaveSim.Core.Solver;
 
 namespace WaveSim.Core.Terminations;

@@ -1,5 +1,5 @@
+using WaveSim.Core.Analysis;
 using WaveSim.Core.Model;
-using WaveSim.Core.Output;
 using WaveSim.Core.Rendering;
 using WaveSim.Core.Units;
 
@@ -28,7 +28,7 @@ public static class TerminationPictures
             series.Add(new Rendering.PlotSeries(o.Design.Name, res.Time, res.Probe(r.ReceiverProbe).Volts) { Look = look });
         }
         var lines = new List<ReferenceLine>();
-        if (any is not null && spec is not null && spec.Anchor == ProbeAnchor.Load && RunSummary.LoadOf(any, spec.BranchPath).Receiver is { } rx)
+        if (any is not null && spec is not null && NetPaths.ReceiverAt(any, spec) is { } rx)
         {
             lines.Add(new ReferenceLine(rx.Vih, "VIH " + Quantity.Format(rx.Vih, "V", 3)));
             lines.Add(new ReferenceLine(rx.Vil, "VIL " + Quantity.Format(rx.Vil, "V", 3)));

@@ -27,7 +27,7 @@ public static class TerminationReport
                 ["thevenin_target_V"] = TheveninTarget(o.Design),
                 ["thevenin_level_V"] = TheveninLevel(o.Design),
                 ["receiver"] = o.Receiver?.ToJsonObject(),
-                ["receiver_eye"] = o.ReceiverEye is { } eye ? Output.RunEyes.Json(eye) : null,
+                ["receiver_eye"] = o.ReceiverEye?.ToJsonObject(),
                 ["probes"] = probes,
                 ["power_high_W"] = o.PowerHighW,
                 ["power_low_W"] = o.PowerLowW,

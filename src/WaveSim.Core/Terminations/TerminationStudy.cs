@@ -1,6 +1,5 @@
 using WaveSim.Core.Analysis;
 using WaveSim.Core.Model;
-using WaveSim.Core.Output;
 using WaveSim.Core.Solver;
 using WaveSim.Core.Sweeps;
 using WaveSim.Core.Units;
@@ -10,7 +9,7 @@ namespace WaveSim.Core.Terminations;
 /// <summary>
 /// Compares the termination strategies on a net: sizes each (<see cref="TerminationPlanner"/>), runs every variant through
 /// <see cref="Simulate.Run"/> (in parallel), measures the receiver, the static power and the mean simulated power, and judges
-/// every receiver on every edge by <see cref="RunVerdicts"/> (the same rules as the report): probes at a load with receiver
+/// every receiver on every edge by <see cref="RunVerdicts"/> through <see cref="Simulate.Run"/> (the same rules as the report): probes at a load with receiver
 /// thresholds, or the chosen receiver probe at the mid level when no load has thresholds.
 /// </summary>
 public static class TerminationStudy
@@ -27,15 +26,16 @@ public static class TerminationStudy
         if (!(options.SettleBand > 0 && options.SettleBand < 0.5)) throw new InputException($"settle band {options.SettleBand} must lie between 0 and 0.5");
         var (s, receiver) = WithReceiverProbe(scenario);
         var designs = TerminationPlanner.Design(s, options);
-        var sim = new SimulationOptions { Force = options.Force, TrackBranchAverages = true };
+        // Every variant is planned (and checked against the limits) before any runs; its run reuses the plan.
+        var plans = designs.Select(d => d.Variant is null ? null : Simulate.Plan(d.Variant)).ToArray();
         if (!options.Force)
-            foreach (var d in designs.Where(d => d.Variant is not null)) Simulate.CheckLimits(d.Variant!, Simulate.Plan(d.Variant!));
+            for (int i = 0; i < designs.Count; i++) if (plans[i] is { } plan) Simulate.CheckLimits(designs[i].Variant!, plan);
         var outcomes = new TerminationOutcome[designs.Count];
         int done = 0;
         var gate = new object();
         SweepRunner.ParallelFor(designs.Count, options.Serial, ct, i =>
         {
-            outcomes[i] = Evaluate(designs[i], receiver, options, sim, ct);
+            outcomes[i] = Evaluate(designs[i], plans[i], receiver, options, ct);
             int n = Interlocked.Increment(ref done);
             if (progress is not null) lock (gate) progress.Report((double)n / designs.Count);
         });
@@ -54,22 +54,26 @@ public static class TerminationStudy
         return (s with { Probes = [.. s.Probes, new ProbeSpec(name, [], ProbeAnchor.Load)] }, s.Probes.Count);
     }
 
-    static TerminationOutcome Evaluate(TerminationDesign d, int receiver, TerminationOptions o, SimulationOptions sim, CancellationToken ct)
+    static TerminationOutcome Evaluate(TerminationDesign d, GridPlan? plan, int receiver, TerminationOptions o, CancellationToken ct)
     {
         if (d.Variant is null) return new TerminationOutcome(d, null, [], null, null, null, []);
-        var result = Simulate.Run(d.Variant, sim, ct);
-        var figures = RunSummary.Figures(result, o.SettleBand).Select(f => f.Figures).ToArray();
-        var rx = figures[receiver];
-        var (low, high) = RunVerdicts.SourceLevels(d.Variant.Source);
-        var (lo, hi) = (TerminationPower.At(d, low), TerminationPower.At(d, high));
-        var eyes = RunEyes.Applies(d.Variant) ? RunEyes.Compute(result) : null;
         // Every receiver is judged; when no load has thresholds, the chosen receiver probe is judged at the mid level.
-        bool anyThresholds = d.Variant.Probes.Any(p => p.Anchor == ProbeAnchor.Load && RunSummary.LoadOf(d.Variant, p.BranchPath).Receiver is not null);
-        var verdicts = RunVerdicts.Judge(result, o.Limits, eyes, anyThresholds ? null : receiver);
-        return new TerminationOutcome(d, result, figures, rx, lo, hi, verdicts)
+        bool anyThresholds = d.Variant.Probes.Any(p => NetPaths.ReceiverAt(d.Variant, p) is not null);
+        var analysis = new AnalysisOptions
         {
-            ReceiverEye = eyes?[receiver],
-            PowerAverageW = TerminationPower.Average(d, result),
+            SettleBand = o.SettleBand,
+            Limits = o.Limits,
+            JudgeAtMidLevel = anyThresholds ? null : receiver,
+            SpaceTime = false,
+        };
+        var run = Simulate.Run(d.Variant, new RunOptions { Analysis = analysis, Force = o.Force, Plan = plan, TrackBranchAverages = true }, ct);
+        var figures = run.Figures.Select(f => f.Figures).ToArray();
+        var (low, high) = SourceEdgeFinder.Levels(d.Variant.Source);
+        var (lo, hi) = (TerminationPower.At(d, low), TerminationPower.At(d, high));
+        return new TerminationOutcome(d, run.Result, figures, figures[receiver], lo, hi, run.Verdicts)
+        {
+            ReceiverEye = run.Eyes.Count > 0 ? run.Eyes[receiver] : null,
+            PowerAverageW = TerminationPower.Average(d, run.Result),
         };
     }
 }

@@ -56,5 +56,5 @@ simulation: {{ duration: 20 ns }}
         return settled.Sum();
     }
 
-    double Settled(int p) => Simulate.Run(_scenarios[p]).Probe("rx").Volts[^1];
+    double Settled(int p) => Simulate.Solve(_scenarios[p]).Probe("rx").Volts[^1];
 }

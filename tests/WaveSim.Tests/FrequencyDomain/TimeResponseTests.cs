@@ -114,7 +114,7 @@ simulation: { duration: 15 ns }
     {
         // Independent cross-check: frequency-domain ABCD cascade (per-frequency nodal solve, numerical Laplace transform) vs
         // time-domain leapfrog. Tolerance 1 % of each probe's swing (common practice, no source).
-        var td = Simulate.Run(TestScenarios.Parse(yaml));
+        var td = Simulate.Solve(TestScenarios.Parse(yaml));
         var diffs = FrequencyDomainCheck.Compare(td);
         Assert.Equal(td.Probes.Count, diffs.Count);
         foreach (var d in diffs)

@@ -18,7 +18,7 @@ public class CausalityAndPassivityTests
         Assert.NotNull(seg.Loss);
         double start = scenario.Source.Delay, front = seg.FrontDelay;
         Assert.True(front < seg.Delay);
-        var td = WaveSim.Core.Simulate.Run(scenario);
+        var td = WaveSim.Core.Simulate.Solve(scenario);
         double dt = td.Plan.Dt;
         // The fit the run used (band 1/duration to 1/rise) is reported with its error; project target 0.1 % (no source).
         var fits = WaveSim.Core.Simulate.LossFits(scenario, td.Plan);

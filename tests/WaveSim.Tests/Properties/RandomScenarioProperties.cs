@@ -25,7 +25,7 @@ public class RandomScenarioProperties
     public static TheoryData<string> DcSeeds => PropertySeeds.Rows(FormerlyFailingDc);
 
     static Core.Solver.SimulationResult Run(RandomNet net, double duration, string waveform = "step") =>
-        Simulate.Run(ScenarioLoader.Parse(net.Yaml(duration, waveform), "random.yaml"));
+        Simulate.Solve(ScenarioLoader.Parse(net.Yaml(duration, waveform), "random.yaml"));
 
     /// <summary>
     /// Passivity (Tellegen / conservation of energy): a passive net starting at rest can never have delivered net energy back

@@ -1,6 +1,6 @@
 using SkiaSharp;
 using WaveSim.Core;
-using WaveSim.Core.Output;
+using WaveSim.Core.Pictures;
 using WaveSim.Core.Rendering;
 
 namespace WaveSim.Tests.Rendering;
@@ -98,7 +98,7 @@ load: { r: 50 ohm }
 probes: [ { name: rx1, at: stub/load }, { name: rx2, at: load } ]
 simulation: { duration: 3 ns, resolution: 10 }
 ");
-        var r = Simulate.Run(s, new Core.Solver.SimulationOptions { SnapshotTimes = RunPictures.SnapshotTimes(s, 0) });
+        var r = Simulate.Run(s).Result;
         LineLayout layout = RunPictures.Layout(r);
         Assert.Equal(["line", "stub"], layout.Pieces.Select(p => p.Name));
         var probes = layout.Elements.Where(e => e.Kind == NetMarkKind.Probe).ToDictionary(e => e.Label);

@@ -39,6 +39,6 @@ simulation: { duration: 40 ns, resolution: 10 }
     public static HtmlReportResult Build(string yaml)
     {
         var s = TestScenarios.Parse(yaml);
-        return HtmlReport.Build(ReportInput.For(Simulate.Run(s, HtmlReport.RunOptions(s)), yaml));
+        return HtmlReport.Build(ReportInput.For(Simulate.Run(s, HtmlReport.RunOptions()), yaml));
     }
 }

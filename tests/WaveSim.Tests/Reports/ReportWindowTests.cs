@@ -1,4 +1,4 @@
-using WaveSim.Core.Output;
+using WaveSim.Core.Pictures;
 
 namespace WaveSim.Tests.Reports;
 

@@ -41,7 +41,7 @@ simulation: { duration: 1 ms }
         var s = TestScenarios.Parse(GridBound);
         var plan = Simulate.Plan(s);
         Assert.True(plan.TotalCells * 16L > GridPlan.MemoryLimitBytes);
-        var ex = Assert.Throws<PlanLimitException>(() => Simulate.Run(s));
+        var ex = Assert.Throws<PlanLimitException>(() => Simulate.Solve(s));
         Assert.StartsWith("the run needs about", ex.Message);
         Assert.DoesNotContain("output_step", ex.Message);
         Assert.DoesNotContain("--", ex.Message);

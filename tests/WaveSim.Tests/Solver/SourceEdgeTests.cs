@@ -37,7 +37,7 @@ simulation: { duration: 8 ns, resolution: 4 }
         var s = TestScenarios.Parse(Matched);
         var plan = Simulate.Plan(s);
         Assert.Contains(plan.Segments, p => p.Courant < 0.98);   // the grid does disperse here
-        var r = Simulate.Run(s);
+        var r = Simulate.Solve(s);
         double peak = r.Probe("rx").Volts.Max();
         Assert.True(Math.Abs(peak - 0.5) <= 0.01 * 0.5, $"peak {peak} V, exact 0.5 V");
         Assert.Equal(0.5, r.Probe("rx").Volts[^1], 1e-3);
@@ -51,7 +51,7 @@ simulation: { duration: 8 ns, resolution: 4 }
         // Abramowitz and Stegun, Handbook of Mathematical Functions, Table 26.5, from memory); it is set to 6 time steps.
         var s = TestScenarios.Parse(Matched);
         var plan = Simulate.Plan(s);
-        var r = Simulate.Run(s);
+        var r = Simulate.Solve(s);
         double t10 = r.FirstCrossing("drv", 0.05), t90 = r.FirstCrossing("drv", 0.45);
         Assert.Equal(2 * 1.2815515655446004, SourceWaveform.GaussianTenNinetyOverSigma, 1e-9);
         Assert.Equal(GridPlan.MinimumEdgeSteps * plan.Dt, t90 - t10, 0.25 * plan.Dt);
@@ -72,7 +72,7 @@ simulation: { duration: 8 ns, resolution: 4 }
         var plan = Simulate.Plan(s);
         Assert.True(plan.CarriesAnyEdge);
         Assert.Empty(EdgeLimit.WidenedEdges(s.Source, plan));
-        var r = Simulate.Run(s);
+        var r = Simulate.Solve(s);
         var v = r.Probe("rx").Volts;
         Assert.Equal(0.5, v.Max(), 1e-12);
         Assert.Equal(0.5, r.At("rx", 0.39e-9 + 2 * plan.Dt), 1e-12);
@@ -86,7 +86,7 @@ simulation: { duration: 8 ns, resolution: 4 }
         // node (VS/2 behind the matched line) is exactly 0.25 V half way up the ramp.
         var s = TestScenarios.Parse(Matched.Replace("rise: 0 s", "rise: 1 ns"));
         Assert.Empty(EdgeLimit.WidenedEdges(s.Source, Simulate.Plan(s)));
-        var r = Simulate.Run(s);
+        var r = Simulate.Solve(s);
         Assert.Equal(0.25, r.At("drv", 0.625e-9), 1e-3);
     }
 
@@ -124,7 +124,7 @@ simulation: { duration: 8 ns, resolution: 4 }
         var (_, path) = Assert.Single(DispersionBound.Paths(s, plan));
         double bound = DispersionBound.OnePass(DispersionBound.LinearRamp(1.25 * 300e-12), path, plan.Dt);
         Assert.True(bound > ScenarioWarnings.DispersionLimit);
-        var r = Simulate.Run(s);
+        var r = Simulate.Solve(s);
         double overshoot = (r.Probe("rx").Volts.Max() - 0.5) / 0.5;
         Assert.True(overshoot > 0.002, $"overshoot {overshoot:P2}: the net should show some dispersion");
         Assert.True(overshoot <= bound, $"overshoot {overshoot:P2}, bound {bound:P2}");

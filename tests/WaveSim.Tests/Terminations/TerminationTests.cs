@@ -35,7 +35,7 @@ simulation: { duration: 200 ns, resolution: 10 }
         Assert.Equal(39, part.E24, 1e-9);      // IEC 60063 E24 value nearest 40 ohm
         Assert.IsType<Series>(series.Variant!.Line[0]);
 
-        var r = Simulate.Run(series.Variant);
+        var r = Simulate.Solve(series.Variant);
         double z0 = 50, rsTotal = 10 + part.Used, launch = z0 / (z0 + rsTotal), gs = (rsTotal - z0) / (rsTotal + z0);
         double t0 = 1e-9, ramp = 1.25 * 200e-12, td = 5e-9, tNear = 0.01 * 5e-9;
 

@@ -122,7 +122,7 @@ simulation: { duration: 85 ns, resolution: 10 }
         // No outside source: both commands must judge through one rule set (docs/verdicts.md).
         var s = TestScenarios.Parse(VttBus);
         var study = TerminationStudy.Run(s);
-        var report = HtmlReport.Build(ReportInput.For(Simulate.Run(s, HtmlReport.RunOptions(s)), VttBus));
+        var report = HtmlReport.Build(ReportInput.For(Simulate.Run(s, HtmlReport.RunOptions()), VttBus));
         var drawn = study.Outcomes[0];
         foreach (var c in report.Checks)
         {

@@ -1,6 +1,6 @@
-using WaveSim.Core.Output;
+using WaveSim.Core.Analysis;
 
-namespace WaveSim.Tests.Output;
+namespace WaveSim.Tests.Analysis;
 
 /// <summary>above_high_V and below_low_V: the worst excursions beyond the settled levels over the whole record, every edge.</summary>
 public class RecordExtremeTests
@@ -20,7 +20,7 @@ simulation: { duration: 130 ns, resolution: 10 }
     public void An_open_line_overshoots_both_rails_by_the_first_reflection()
     {
         var r = TestScenarios.Run(Yaml);
-        var f = RunSummary.Figures(r).Single().Figures;
+        var f = RunAnalysis.Figures(r).Single().Figures;
         // Lattice diagram (Bewley, Traveling Waves on Transmission Systems, Wiley 1933, from memory): the launched wave is 1 V · 50/(10 + 50),
         // doubled by the open end, so the far end first reaches 2 · 5/6 = 1.667 V; every later peak is smaller, since the
         // source reflects with Γ = (10 − 50)/(10 + 50) = −2/3. The falling edge, from a settled 1 V plateau, mirrors it to

@@ -1,6 +1,6 @@
 using WaveSim.Core.Units;
 
-namespace WaveSim.Core.Output;
+namespace WaveSim.Core.Pictures;
 
 /// <summary>The part of a record the waveform picture shows, s. <see cref="Whole"/> shows everything.</summary>
 /// <param name="Start">First instant shown, s.</param>

@@ -1,6 +1,6 @@
-using WaveSim.Core.Output;
+using WaveSim.Core.Analysis;
 
-namespace WaveSim.Tests.Output;
+namespace WaveSim.Tests.Analysis;
 
 /// <summary>
 /// The level each probe's first edge settles to comes from the network's DC solution with the driver held high, so a pulse
@@ -27,7 +27,7 @@ simulation: { duration: 8 ns, resolution: 10 }
         // DC: the capacitor is open and the lossless line a short, so every node sits at 1 V · 100/(25 + 100) = 0.8 V
         // (voltage divider, Ohm's law).
         Assert.All(r.Probes, p => Assert.Equal(0.8, p.SettledVolts!.Value, 1e-9));
-        var figures = RunSummary.Figures(r);
+        var figures = RunAnalysis.Figures(r);
         Assert.All(figures, f => Assert.Equal(0.8, f.Figures.HighV!.Value, 1e-9));
         // Within the 2 ns pulse the far end charges to at most 1 − e^(−2/4) = 39 % of 0.8 V (first-order RC charging), so
         // against the true level its edge never reaches half way and has no edge figures, instead of figures of a false plateau.

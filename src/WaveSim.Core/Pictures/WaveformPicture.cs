@@ -1,6 +1,6 @@
 using WaveSim.Core.Rendering;
 
-namespace WaveSim.Core.Output;
+namespace WaveSim.Core.Pictures;
 
 /// <summary>The waveform chart of a run and what part of the record it shows.</summary>
 /// <param name="Chart">The chart to render.</param>

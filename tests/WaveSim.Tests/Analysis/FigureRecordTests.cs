@@ -1,6 +1,6 @@
-using WaveSim.Core.Output;
+using WaveSim.Core.Analysis;
 
-namespace WaveSim.Tests.Output;
+namespace WaveSim.Tests.Analysis;
 
 /// <summary>
 /// Figures do not depend on simulation.output_step, which only thins the CSV. The net: a 1 V step through Rs = Z0/3 into a
@@ -50,7 +50,7 @@ simulation: {{ duration: 12 ns, output_step: {step} }}
     public void Overshoot_and_delays_follow_the_lattice_diagram_whatever_the_output_step(string step)
     {
         var r = TestScenarios.Run(Net(step));
-        var figures = RunSummary.Figures(r).ToDictionary(x => x.Probe.Name, x => x.Figures);
+        var figures = RunAnalysis.Figures(r).ToDictionary(x => x.Probe.Name, x => x.Figures);
 
         // Far end: overshoot = peak − 1 of the lattice sum (35 % for these values), to 0.05 % of the swing (at Courant number 1
         // the leapfrog is exact on a lossless line, Taflove and Hagness, Computational Electrodynamics, 3rd ed. 2005, ch. 2).
@@ -73,8 +73,8 @@ simulation: {{ duration: 12 ns, output_step: {step} }}
         var fine = TestScenarios.Run(Net("10 ps"));
         var coarse = TestScenarios.Run(Net("1 ns"));
         Assert.Equal(13, coarse.Time.Length);   // 0 to 12 ns in 1 ns: the CSV stays thin
-        var a = RunSummary.Figures(fine).ToDictionary(x => x.Probe.Name, x => x.Figures);
-        var b = RunSummary.Figures(coarse).ToDictionary(x => x.Probe.Name, x => x.Figures);
+        var a = RunAnalysis.Figures(fine).ToDictionary(x => x.Probe.Name, x => x.Figures);
+        var b = RunAnalysis.Figures(coarse).ToDictionary(x => x.Probe.Name, x => x.Figures);
         foreach (string p in new[] { "src", "rx" })
         {
             // Both come from the same solver steps, so they agree far inside a solver step (10 ps here).

@@ -1,10 +1,9 @@
 using System.Globalization;
 using WaveSim.Core.Analysis;
-using WaveSim.Core.Output;
 using WaveSim.Core.Scenarios;
 using WaveSim.Core.Terminations;
 
-namespace WaveSim.Tests.Output;
+namespace WaveSim.Tests.Analysis;
 
 /// <summary>
 /// Settling is counted from the edge's arrival at the probe (the source edge's 50 % instant plus the line delay), not from the
@@ -46,11 +45,11 @@ simulation: {{ duration: {5 * lengthM + 15} ns, resolution: 10 }}
     public void A_matched_line_into_a_capacitor_settles_in_tau_ln20_after_arrival_whatever_its_length(double lengthM)
     {
         var r = TestScenarios.Run(MatchedIntoC(lengthM));
-        var f = RunSummary.Figures(r).Single().Figures;
+        var f = RunAnalysis.Figures(r).Single().Figures;
         double expected = RampIntoPole(Tau, Ramp, Band);   // 3.006 ns: τ·ln 20 = 2.996 ns plus 10 ps for the ramp
         Assert.Equal(expected, f.SettlingS!.Value, Tolerance);   // was 5 ns (1 m) or 50 ns (10 m) more: the flight time
         // The verdict's rule 6 measures the same thing, so it passes the 5 ns default however long the line.
-        var edge = RunVerdicts.Judge(r).Single().Edges.Single();
+        var edge = RunAnalysis.Analyse(r, AnalysisOptions.Full).Verdicts.Single().Edges.Single();
         Assert.Equal(expected, edge.SettlingS!.Value, Tolerance);
         Assert.DoesNotContain(VerdictRule.Settling, edge.Failed);
         // delay_50_s stays the flight figure: line delay plus τ·ln 2 (the pole's own 50 % point) behind the source's 50 % instant.
@@ -61,7 +60,7 @@ simulation: {{ duration: {5 * lengthM + 15} ns, resolution: 10 }}
     [Fact]
     public void The_settling_of_a_matched_line_into_a_capacitor_does_not_depend_on_its_length()
     {
-        double Settling(double m) => RunSummary.Figures(TestScenarios.Run(MatchedIntoC(m))).Single().Figures.SettlingS!.Value;
+        double Settling(double m) => RunAnalysis.Figures(TestScenarios.Run(MatchedIntoC(m))).Single().Figures.SettlingS!.Value;
         // Same pole, same drive: only the flight differs (45 ns), and it is not settling.
         Assert.Equal(Settling(1), Settling(10), Tolerance);
     }

@@ -1,9 +1,9 @@
 using SkiaSharp;
 using WaveSim.Core;
-using WaveSim.Core.Output;
+using WaveSim.Core.Pictures;
 using WaveSim.Core.Rendering;
 
-namespace WaveSim.Tests.Output;
+namespace WaveSim.Tests.Pictures;
 
 /// <summary>
 /// The space-time map of a real run: a step on a matched 1 m, 5 ns line moves at v = 2e8 m/s, so the line reads 0 V ahead of
@@ -20,7 +20,7 @@ line: [ { segment: { length: 1 m, z0: 50 ohm, delay: 5 ns } } ]
 load: { r: 50 ohm }
 simulation: { duration: 5.5 ns, resolution: 10 }
 ");
-        var r = Simulate.Run(s, new Core.Solver.SimulationOptions { SnapshotTimes = RunPictures.SnapshotTimes(s, 0) });
+        var r = Simulate.Run(s).Result;
         using var bmp = SKBitmap.Decode(RunPictures.SpaceTime(r, 800, 600));
         Assert.Equal(800, bmp.Width);
         var (lo, hi) = RunPictures.VoltageRange(r);

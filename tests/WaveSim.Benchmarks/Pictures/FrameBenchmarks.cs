@@ -1,11 +1,12 @@
 using BenchmarkDotNet.Attributes;
 using WaveSim.Core;
-using WaveSim.Core.Output;
+using WaveSim.Core.Analysis;
+using WaveSim.Core.Pictures;
 using WaveSim.Core.Rendering;
 using WaveSim.Core.Scenarios;
 using WaveSim.Core.Solver;
 
-namespace WaveSim.Benchmarks.Output;
+namespace WaveSim.Benchmarks.Pictures;
 
 /// <summary>
 /// A run with 200 frames of a 1000-cell line: the simulation with its snapshots, then the frames rendered in parallel at
@@ -34,7 +35,7 @@ line: [ { segment: { length: 1 m, z0: 50 ohm, delay: 5 ns } } ]
 load: open
 simulation: { duration: 30 ns }
 ", "frames.yaml");
-        return Simulate.Run(s, new SimulationOptions { SnapshotTimes = RunPictures.SnapshotTimes(s, Frames) });
+        return Simulate.Solve(s, new SimulationOptions { SnapshotTimes = RunAnalysis.SnapshotTimes(s, new AnalysisOptions { Frames = Frames }) });
     }
 
     /// <summary>The simulation with 200 frame snapshots and the space-time rows.</summary>
@@ -46,7 +47,7 @@ simulation: { duration: 30 ns }
     public int RenderFrames()
     {
         var (lo, hi) = RunPictures.VoltageRange(_result);
-        return FrameSequence.WriteAll(_dir, RunPictures.Layout(_result), RunPictures.Frames(_result, Frames), lo, hi, 1280, 720).Count;
+        return FrameSequence.WriteAll(_dir, RunPictures.Layout(_result), RunPictures.Frames(_result, RunAnalysis.FrameTimes(_result.Scenario, Frames)), lo, hi, 1280, 720).Count;
     }
 
     /// <summary>Removes the frames.</summary>

@@ -1,6 +1,6 @@
-using WaveSim.Core.Output;
+using WaveSim.Core.Analysis;
 
-namespace WaveSim.Tests.Output;
+namespace WaveSim.Tests.Analysis;
 
 /// <summary>
 /// First-edge figures of a clock stop where the next source edge reaches the probe; they never run across later edges, and
@@ -26,7 +26,7 @@ simulation: { duration: 25 ns, output_step: 100 ps }
     [Fact]
     public void A_clean_clock_that_ends_high_has_no_undershoot_and_settles_on_its_first_edge()
     {
-        var f = RunSummary.Figures(TestScenarios.Run(MatchedClock)).Single().Figures;
+        var f = RunAnalysis.Figures(TestScenarios.Run(MatchedClock)).Single().Figures;
         // Linear 0-100 % ramp of 1.25 × 100 ps = 125 ps (docs/scenario-format.md). The load enters ±5 % of 0.5 V when its ramp is
         // 95 % done: at 1 ns + Td + 0.95 × 125 ps; settling counts from the edge's arrival at the load, the source's 50 % instant
         // plus the line delay, 1 ns + 62.5 ps + Td (ReferenceData/settling.md §3).
@@ -54,7 +54,7 @@ simulation: { duration: 18 ns, output_step: 200 ps }
     [Fact]
     public void A_ringing_clock_edge_is_measured_up_to_the_next_edge_and_reported_not_settled()
     {
-        var f = RunSummary.Figures(TestScenarios.Run(RingingClock)).Single().Figures;
+        var f = RunAnalysis.Figures(TestScenarios.Run(RingingClock)).Single().Figures;
         const double GammaS = -2.0 / 3;
         double first = 1 - GammaS, second = first * (1 + GammaS);   // 5/3 V and 5/9 V (open end doubles the launched wave)
         Assert.Equal((first - 1) * 100, f.OvershootPct!.Value, 0.1);   // 66.7 %

@@ -1,4 +1,4 @@
-namespace WaveSim.Core.Output;
+namespace WaveSim.Core.Pictures;
 
 /// <summary>What the waveform picture of a run shows.</summary>
 public sealed record WaveformOptions

@@ -1,6 +1,6 @@
-using WaveSim.Core.Output;
+using WaveSim.Core.Analysis;
 
-namespace WaveSim.Tests.Output;
+namespace WaveSim.Tests.Analysis;
 
 /// <summary>
 /// Figures at probes whose node no line segment ends at: the driver's pin when a series part starts the line, a load behind a
@@ -30,7 +30,7 @@ simulation: {{ duration: 8 ns }}
     public void The_driver_pin_before_a_series_part_has_its_edge_figures(string low, string high, bool rising)
     {
         var r = TestScenarios.Run(SeriesFirst(low, high));
-        var f = RunSummary.Figures(r).Single(x => x.Probe.Name == "drv").Figures;
+        var f = RunAnalysis.Figures(r).Single(x => x.Probe.Name == "drv").Figures;
 
         // Open far end: no DC current, so the pin settles at the source's level (Ohm's law); it starts at the other one.
         Assert.Equal(0, f.LowV!.Value, 1e-9);
@@ -70,7 +70,7 @@ probes:
   - { name: rx, at: load }
 simulation: { duration: 4 ns }
 ";
-        var f = RunSummary.Figures(TestScenarios.Run(yaml)).Single().Figures;
+        var f = RunAnalysis.Figures(TestScenarios.Run(yaml)).Single().Figures;
         // The incident half swing divides 40/(10 + 40) across the load; DC divider 50 + 10 + 40 ohm gives the same 0.4 V.
         Assert.Equal(0, f.LowV!.Value, 1e-9);
         Assert.Equal(0.4, f.HighV!.Value, 1e-9);
@@ -100,7 +100,7 @@ probes:
   - { name: rx1, at: stub/load }
 simulation: { duration: 4 ns }
 ";
-        var f = RunSummary.Figures(TestScenarios.Run(yaml)).Single().Figures;
+        var f = RunAnalysis.Figures(TestScenarios.Run(yaml)).Single().Figures;
         // No reflection anywhere: the tap sees 0.5 V, the stub's load 0.5 · 90/100 after Td + Td/2; DC: 50 ohm into 100 ∥ 100 ohm.
         Assert.Equal(0.45, f.HighV!.Value, 1e-9);
         Assert.Equal(1.5 * Td, f.Delay50S!.Value, 1e-12);

@@ -1,10 +1,10 @@
 using SkiaSharp;
 using WaveSim.Core;
-using WaveSim.Core.Output;
+using WaveSim.Core.Pictures;
 using WaveSim.Core.Rendering;
 using WaveSim.Tests.Rendering;
 
-namespace WaveSim.Tests.Output;
+namespace WaveSim.Tests.Pictures;
 
 /// <summary>
 /// What waveforms.png shows: the receiver's thresholds, the time window and the probes. Expected values are worked from the
@@ -33,7 +33,7 @@ probes: [ { name: tx, at: source }, { name: mid, at: 100 mm }, { name: rx, at: l
 simulation: { duration: 100 ns, output_step: 10 ps, resolution: 10 }
 ";
 
-    static Core.Solver.SimulationResult Run(string yaml) => Simulate.Run(TestScenarios.Parse(yaml), new Core.Solver.SimulationOptions());
+    static Core.Analysis.RunOutcome Run(string yaml) => Simulate.Run(TestScenarios.Parse(yaml));
 
     [Fact]
     public void A_load_with_a_receiver_puts_its_VIH_and_VIL_on_the_voltage_panel()
@@ -77,7 +77,7 @@ simulation: { duration: 100 ns, output_step: 10 ps, resolution: 10 }
     public void A_record_of_more_than_50_edges_shows_the_start_up_and_the_first_10_edges_by_default()
     {
         var r = Run(Long);
-        double[] edges = RunPictures.SourceEdgeTimes(r);
+        double[] edges = r.SourceEdges.Select(e => e.SourceMidS).ToArray();
         // 100 ns of 1 ns bits, the first starting at 0.3 ns: edges at 0.3 + k + 0.0625 ns for k = 0 … 99.
         Assert.Equal(100, edges.Length);
         for (int k = 0; k < edges.Length; k++) Assert.Equal(0.3e-9 + k * 1e-9 + 0.625 * 100e-12, edges[k], 1e-15);

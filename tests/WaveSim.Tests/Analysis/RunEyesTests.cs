@@ -1,7 +1,7 @@
 using System.Text.Json;
-using WaveSim.Core.Output;
+using WaveSim.Core.Analysis;
 
-namespace WaveSim.Tests.Output;
+namespace WaveSim.Tests.Analysis;
 
 /// <summary>Eye diagrams of bit-pattern runs.</summary>
 public class RunEyesTests

@@ -4,27 +4,11 @@ using WaveSim.Core.Rendering;
 using WaveSim.Core.Solver;
 using WaveSim.Core.Units;
 
-namespace WaveSim.Core.Output;
+namespace WaveSim.Core.Pictures;
 
 /// <summary>Turns a run's result into the rendering library's plain data: waveform charts, line layouts, frames and the space-time map.</summary>
 public static class RunPictures
 {
-    /// <summary>Rows of the space-time map recorded during a run: enough for a picture, bounded memory.</summary>
-    public const int SpaceTimeRows = 480;
-
-    /// <summary>The snapshot instants a run needs for <paramref name="frames"/> frames and the space-time map.</summary>
-    public static double[] SnapshotTimes(Scenario s, int frames)
-    {
-        double d = s.Simulation.Duration;
-        var times = Enumerable.Range(0, SpaceTimeRows).Select(k => d * k / (SpaceTimeRows - 1));
-        if (frames > 0) times = times.Concat(FrameTimes(s, frames));
-        return times.Distinct().Order().ToArray();
-    }
-
-    /// <summary>N evenly spaced instants from 0 to the duration.</summary>
-    public static double[] FrameTimes(Scenario s, int frames) =>
-        Enumerable.Range(0, frames).Select(k => frames == 1 ? 0 : s.Simulation.Duration * k / (frames - 1)).ToArray();
-
     /// <summary>Records whose source has more edges than this are drawn in part by default (common practice, no source).</summary>
     public const int MaxEdgesDrawnWhole = 50;
 
@@ -32,21 +16,24 @@ public static class RunPictures
     public const int EdgesShown = 10;
 
     /// <summary>The waveform chart of the whole record: every probe's voltage, and with <paramref name="currents"/> a second panel of currents.</summary>
-    public static ChartSpec Waveforms(SimulationResult r, bool currents) =>
-        Waveforms(r, new WaveformOptions { Currents = currents, Window = TimeWindow.Whole }).Chart;
+    public static ChartSpec Waveforms(RunOutcome run, bool currents) =>
+        Waveforms(run, new WaveformOptions { Currents = currents, Window = TimeWindow.Whole }).Chart;
 
     /// <summary>
     /// The waveform chart: the chosen probes' voltages (with the receiver's VIH and VIL as lines where a drawn probe sits at
     /// a load with a <c>receiver</c>), optionally their currents, over the chosen or default time window.
     /// </summary>
     /// <exception cref="InputException">An unknown probe name, or a window outside the record.</exception>
-    public static WaveformPicture Waveforms(SimulationResult r, WaveformOptions options)
+    public static WaveformPicture Waveforms(RunOutcome run, WaveformOptions options)
     {
+        ArgumentNullException.ThrowIfNull(run);
         ArgumentNullException.ThrowIfNull(options);
+        var r = run.Result;
         var s = r.Scenario;
         int[] chosen = ProbeIndices(s, options.Probes);
         var specs = chosen.Select(i => s.Probes[i]).ToList();
-        double[] edges = SourceEdgeTimes(r);
+        // The middles of the source's edges, found once per run on the figure record (RunOutcome.SourceEdges).
+        double[] edges = run.SourceEdges.Select(e => e.SourceMidS).ToArray();
         double t0 = r.Time[0], t1 = r.Time[^1];
         bool limited = false;
         TimeWindow window;
@@ -71,7 +58,7 @@ public static class RunPictures
         };
         var panels = new List<ChartPanel> { voltages };
         if (options.Currents) panels.Add(new ChartPanel("Current", "A", probes.Select(p => new Rendering.PlotSeries(p.Name, time, Cut(p.Amps))).ToList()));
-        double reach = specs.Count == 0 ? 0 : specs.Max(p => RunEyes.DelayTo(s.Line, p, 0));
+        double reach = specs.Count == 0 ? 0 : specs.Max(p => NetPaths.DelayTo(s, p));
         int shown = edges.Count(e => e >= window.Start && e + reach <= window.Stop);
         string title = limited ? $"{s.Title} (first {shown} of {edges.Length} source edges)" : s.Title;
         var chart = new ChartSpec(title, "Time", "s", panels) { XRange = new AxisRange(window.Start, window.Stop) };
@@ -88,33 +75,11 @@ public static class RunPictures
         double t0 = r.Time[0], t1 = r.Time[^1];
         limited = false;
         if (edges.Length <= MaxEdgesDrawnWhole) return new TimeWindow(t0, t1);
-        double delay = drawn.Count == 0 ? 0 : drawn.Max(p => RunEyes.DelayTo(r.Scenario.Line, p, 0));
+        double delay = drawn.Count == 0 ? 0 : drawn.Max(p => NetPaths.DelayTo(r.Scenario, p));
         double stop = 0.5 * (edges[EdgesShown - 1] + edges[EdgesShown]) + delay;
         if (!(stop < t1)) return new TimeWindow(t0, t1);
         limited = true;
         return new TimeWindow(t0, stop);
-    }
-
-    /// <summary>
-    /// Instants, s, where the source's open-circuit waveform crosses the middle of its range (its low and high levels; a
-    /// table's smallest and largest values), sampled on the run's output instants and interpolated between them.
-    /// </summary>
-    public static double[] SourceEdgeTimes(SimulationResult r)
-    {
-        var src = r.Scenario.Source;
-        double lo = src.Low, hi = src.High;
-        if (src.Waveform == WaveformKind.Table && src.TableVolts.Length > 0) { lo = src.TableVolts.Min(); hi = src.TableVolts.Max(); }
-        double mid = 0.5 * (lo + hi);
-        var list = new List<double>();
-        double prev = src.Value(r.Time[0]);
-        for (int k = 1; k < r.Time.Length; k++)
-        {
-            double v = src.Value(r.Time[k]);
-            if ((prev < mid) != (v < mid))
-                list.Add(r.Time[k - 1] + (mid - prev) / (v - prev) * (r.Time[k] - r.Time[k - 1]));
-            prev = v;
-        }
-        return list.ToArray();
     }
 
     /// <summary>Indices into the scenario's probes of <paramref name="names"/> (all probes when null).</summary>
@@ -142,7 +107,7 @@ public static class RunPictures
     {
         var found = new List<(ReceiverThresholds Rx, string Where)>();
         foreach (var p in drawn)
-            if (p.Anchor == ProbeAnchor.Load && RunSummary.LoadOf(s, p.BranchPath).Receiver is { } rx) found.Add((rx, p.Name));
+            if (p.Anchor == ProbeAnchor.Load && NetPaths.LoadOf(s, p.BranchPath).Receiver is { } rx) found.Add((rx, p.Name));
         if (found.Count == 0 && allProbes && s.Load.Receiver is { } main) found.Add((main, "load"));
         var distinct = found.GroupBy(f => (f.Rx.Vih, f.Rx.Vil)).ToList();
         var lines = new List<ReferenceLine>();
@@ -214,11 +179,10 @@ public static class RunPictures
         Add(pos, NetMarkKind.Load, "load " + load.Describe());
     }
 
-    /// <summary>The snapshots at the frame instants, as the renderer's type.</summary>
-    public static IReadOnlyList<LineSnapshot> Frames(SimulationResult r, int frames)
+    /// <summary>The snapshots nearest the frame instants (<see cref="RunOutcome.FrameTimes"/>), as the renderer's type.</summary>
+    public static IReadOnlyList<LineSnapshot> Frames(SimulationResult r, IReadOnlyList<double> frameTimes)
     {
-        var wanted = FrameTimes(r.Scenario, frames);
-        return wanted.Select(t =>
+        return frameTimes.Select(t =>
         {
             var snap = r.Snapshots.MinBy(x => Math.Abs(x.Time - t))!;
             return new LineSnapshot(t, snap.Volts);

@@ -1,8 +1,8 @@
-using WaveSim.Core.Output;
+using WaveSim.Core.Analysis;
 using WaveSim.Core.Reports;
 using WaveSim.Core.Units;
 
-namespace WaveSim.Tests.Output;
+namespace WaveSim.Tests.Analysis;
 
 /// <summary>
 /// Verdicts and the report's min/max come from the figure record, not the thinned output samples. The net of
@@ -32,7 +32,7 @@ simulation: { duration: 12 ns, output_step: 1 ns }
         var r = TestScenarios.Run(Net);
         // The 1 ns output samples miss the peak: their largest value is well below 1.35 V (1.0875 V at 2 ns by the same sum; ReferenceData/edge-windows.md §3).
         Assert.True(r.Probe("rx").Volts.Max() < Peak - 0.1);
-        var edge = RunVerdicts.Judge(r).Single().Edges.Single();
+        var edge = RunAnalysis.Analyse(r, AnalysisOptions.Full).Verdicts.Single().Edges.Single();
         // Settled high is the open end's DC level, 1 V: overshoot 35 % of the 1 V swing, to 0.05 % (exact leapfrog at Courant 1,
         // Taflove and Hagness, Computational Electrodynamics, 3rd ed. 2005, ch. 2).
         Assert.Equal((Peak - 1) * 100, edge.OvershootPct!.Value, 0.05);
@@ -42,7 +42,7 @@ simulation: { duration: 12 ns, output_step: 1 ns }
     public void The_report_shows_the_peak_of_the_figure_record_as_its_max()
     {
         var s = TestScenarios.Parse(Net);
-        var report = HtmlReport.Build(ReportInput.For(Core.Simulate.Run(s, HtmlReport.RunOptions(s)), Net));
+        var report = HtmlReport.Build(ReportInput.For(Core.Simulate.Run(s, HtmlReport.RunOptions()), Net));
         var doc = Reports.HtmlReportTests.Parse(report.Html);
         var table = doc.Descendants().Single(e => (string?)e.Attribute("id") == "figures");
         int max = table.Elements("tr").First().Elements("th").Select(th => th.Value).ToList().IndexOf("max");

@@ -1,0 +1,25 @@
+using WaveSim.Core.Analysis;
+using WaveSim.Core.Rendering;
+using WaveSim.Core.Units;
+
+namespace WaveSim.Core.Pictures;
+
+/// <summary>The eye picture of one probe.</summary>
+public static class EyePicture
+{
+    /// <summary>The eye of <paramref name="e"/> as PNG bytes (the receiver's thresholds drawn when known); null without a diagram.</summary>
+    public static byte[]? RenderPng(string title, ProbeEye e, int width, int height)
+    {
+        ArgumentNullException.ThrowIfNull(e);
+        if (e.Diagram is not { } d) return null;
+        var lines = e.Thresholds is { } t
+            ? new List<ReferenceLine> { new(t.Vih, "VIH " + Quantity.Format(t.Vih, "V", 3)), new(t.Vil, "VIL " + Quantity.Format(t.Vil, "V", 3)) }
+            : [];
+        var f = d.Figures;
+        string figures = f.EyeHeightV is { } h && f.EyeWidthS is { } w
+            ? $": eye {Quantity.Format(h, "V", 3)} × {(w / d.BitTimeS).ToString("0.00", System.Globalization.CultureInfo.InvariantCulture)} UI"
+            : ": eye closed";
+        return EyePlot.RenderPng($"{title} — {e.Probe.Name}{figures}", d.Traces.Select(x => (x.T, x.V)).ToList(), d.BitTimeS, width, height,
+            new EyePlotOptions { Thresholds = lines });
+    }
+}
