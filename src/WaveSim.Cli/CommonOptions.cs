@@ -29,11 +29,16 @@ public static class CommonOptions
     }
 
     /// <summary>Loads a scenario and prints its warnings (<see cref="ScenarioWarnings"/>, for its grid plan) on <paramref name="warnings"/>.</summary>
-    public static Scenario Load(string path, TextWriter warnings)
+    public static Scenario Load(string path, TextWriter warnings) => LoadDocument(path, warnings).Scenario;
+
+    /// <summary>Loads a scenario with its text (for what only the text knows: how values are written) and prints its warnings.</summary>
+    public static ScenarioDocument LoadDocument(string path, TextWriter warnings)
     {
-        var s = Load(path);
+        if (!File.Exists(path)) throw new InputException($"{path}: no such scenario file");
+        var document = ScenarioLoader.Read(path);
+        var s = document.Scenario;
         WarningOutput.Write(warnings, ScenarioWarnings.For(s, Simulate.Plan(s)));
-        return s;
+        return document;
     }
 
     /// <summary>The output folder: the option's value, or out/&lt;scenario file name without extension&gt;&lt;suffix&gt;.</summary>

@@ -1,3 +1,5 @@
+using System.Collections.Immutable;
+
 namespace WaveSim.Core.Model;
 
 /// <summary>One item of a line, in order from the source end.</summary>
@@ -67,4 +69,8 @@ public sealed record Series(LumpedParts Parts) : LineElement;
 /// <param name="Name">An identifier (letters, digits, _ and -), used in probe locations and file names.</param>
 /// <param name="Line">The branch's own elements, from the junction outward.</param>
 /// <param name="Load">The branch's far-end load.</param>
-public sealed record Branch(string Name, IReadOnlyList<LineElement> Line, LoadSpec Load) : LineElement;
+public sealed record Branch(string Name, IReadOnlyList<LineElement> Line, LoadSpec Load) : LineElement
+{
+    /// <summary>The branch's own elements, from the junction outward (held as an immutable array).</summary>
+    public IReadOnlyList<LineElement> Line { get; init => field = value.ToImmutableArray(); } = Line.ToImmutableArray();
+}

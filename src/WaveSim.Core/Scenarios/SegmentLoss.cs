@@ -35,9 +35,9 @@ internal static class SegmentLoss
             foreach (string k in skin)
                 if (!l.Has(k)) throw l.Error($"missing '{l.Join(k)}': the conductor part needs all of r_dc, skin_at and r_skin");
             if (rGiven) throw m.Error(m.Node("r")!, m.Join("r"), "give the resistance either as 'r' or in 'loss' (r_dc, r_skin), not both");
-            double rdc = l.Positive("r_dc", Dimension.ResistancePerLength)!.Value;
-            double f = l.Positive("skin_at", Dimension.Frequency)!.Value;
-            double rs = l.Positive("r_skin", Dimension.ResistancePerLength)!.Value;
+            double rdc = l.Positive("r_dc")!.Value;
+            double f = l.Positive("skin_at")!.Value;
+            double rs = l.Positive("r_skin")!.Value;
             if (!(rs > rdc * (1 + 1e-9)))
                 throw l.Error(l.Node("r_skin")!, l.Join("r_skin"), $"must be greater than r_dc ({Quantity.Format(rdc, "Ω")}/m): the skin effect raises the resistance");
             loss = loss with { RDc = rdc, SkinCorner = FrequencyLoss.CornerFromResistance(rdc, rs, f) };
@@ -48,9 +48,9 @@ internal static class SegmentLoss
             foreach (string k in diel)
                 if (!l.Has(k)) throw l.Error($"missing '{l.Join(k)}': the dielectric part needs all of tand, er and at");
             if (gGiven) throw m.Error(m.Node("g")!, m.Join("g"), "give the dielectric loss either as 'g' or in 'loss' (tand, er, at), not both");
-            double tand = l.NonNegative("tand", Dimension.Number)!.Value;
-            double er = l.Positive("er", Dimension.Number)!.Value;
-            double at = l.Positive("at", Dimension.Frequency)!.Value;
+            double tand = l.NonNegative("tand")!.Value;
+            double er = l.Positive("er")!.Value;
+            double at = l.Positive("at")!.Value;
             if (er < 1) throw l.Error(l.Node("er")!, l.Join("er"), $"must be at least 1 (got {er})");
             if (tand >= 1) throw l.Error(l.Node("tand")!, l.Join("tand"), $"must be below 1 (got {tand})");
             loss = loss with { Dielectric = DjordjevicSarkar.Fit(er, tand, at), ReferencePermittivity = er, Filling = 1 };
