@@ -14,14 +14,14 @@ public abstract record LineElement;
 public sealed record Segment(double Length, double R, double L, double G, double C) : LineElement
 {
     /// <summary>The cross-section figures this segment was derived from, when it was given by geometry.</summary>
-    public Lines.LineParameters? Derived { get; init; }
+    public GeometryFigures? Derived { get; init; }
 
     /// <summary>
     /// Frequency-dependent conductor and dielectric loss, when given; null keeps the constant R and G. With it, R is R_dc
     /// (when a conductor model is given), L is the external inductance L∞, C the capacitance at the dielectric's reference
     /// frequency and G is 0 (when a dielectric model is given).
     /// </summary>
-    public Lines.FrequencyLoss? Loss { get; init; }
+    public FrequencyLoss? Loss { get; init; }
 
     /// <summary>Series impedance per length at complex frequency s, ohm/m: R + sL, or the exact frequency-dependent form.</summary>
     public System.Numerics.Complex SeriesImpedance(System.Numerics.Complex s) => Loss is { } f ? f.SeriesImpedance(s, R, L) : R + s * L;

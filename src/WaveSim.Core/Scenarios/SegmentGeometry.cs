@@ -54,17 +54,20 @@ internal static class SegmentGeometry
                 double tand = spec.Dimensions.TryGetValue("tand", out double td) ? td : 0;
                 var loss = SegmentLoss.FromGeometry(p, er, tand)
                     ?? throw m.Error(lossNode, m.Join("loss"), "the geometry has neither a conductor thickness nor a tand, so there is no loss to make frequency-dependent");
-                return new Segment(length, loss.SkinCorner is null ? 0 : p.RDc, p.L, 0, p.C) { Derived = p, Loss = loss };
+                return new Segment(length, loss.SkinCorner is null ? 0 : p.RDc, p.L, 0, p.C) { Derived = Figures(p), Loss = loss };
             }
             if (mode != "constant")
                 throw m.Error(lossNode, m.Join("loss"), "beside a geometry, expected 'frequency' (skin effect and wideband dielectric from the cross-section) or 'constant'");
         }
         double rDerived = p.FrequencyHz is { } f ? p.ResistanceAt(f) : p.RDc;
-        var seg = new Segment(length, r ?? rDerived, p.L, g ?? 0, p.C) { Derived = p };
+        var seg = new Segment(length, r ?? rDerived, p.L, g ?? 0, p.C) { Derived = Figures(p) };
         if (g is null && spec.Dimensions.TryGetValue("tand", out double tanD) && tanD > 0)
             seg = seg with { Loss = SegmentLoss.DielectricFromGeometry(p, spec.Dimensions.TryGetValue("er", out double er1) ? er1 : 1, tanD) };
         return seg;
     }
+
+    /// <summary>What a segment keeps of its cross-section: the figures shown and warned about, as plain numbers.</summary>
+    static GeometryFigures Figures(LineParameters p) => new(p.Kind, p.Z0, p.EpsEff, p.FrequencyHz, p.Warnings);
 
     static void Derived(YamlMap m, YamlNode node, double value, Units.Dimension dim, string name)
     {

@@ -68,7 +68,7 @@ internal static class SegmentLoss
         bool skin = p.RDc > 0 && p.SkinFactor > 0, diel = tand > 0;
         if (!skin && !diel) return null;
         var loss = new FrequencyLoss();
-        if (skin) loss = loss with { RDc = p.RDc, SkinCorner = FrequencyLoss.CornerFromGeometry(p) };
+        if (skin) loss = loss with { RDc = p.RDc, SkinCorner = SkinEffect.CornerFromGeometry(p) };
         if (diel) loss = loss with { Dielectric = DielectricFromGeometry(p, er, tand).Dielectric, ReferencePermittivity = er, Filling = Filling(p, er, tand) };
         return loss;
     }
