@@ -41,8 +41,7 @@ public sealed record FreeParameter(string KeyPath, double Start, double Lower, d
             throw new InputException($"'{spec}': expected KEY or KEY=MIN..MAX, e.g. line[0].segment.z0 or load.c=0.5pF..5pF");
 
         Scenario scenario = document.Scenario;
-        ScenarioValues.Read(scenario, key);   // the key must name a value the scenario can vary
-        ScenarioKey info = ScenarioKeys.ForPath(key)!;
+        ScenarioKey info = ScenarioValues.KeyAt(scenario, key);   // the key must name a value the scenario can vary
         Dimension[] dims = [.. info.Dimensions];
         double? start = null;
         Dimension? dim = null;

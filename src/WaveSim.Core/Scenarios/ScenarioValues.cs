@@ -21,8 +21,9 @@ public readonly record struct KeyChange(string KeyPath, double Value, Dimension 
 /// A segment keeps what the key does not name: a new <c>z0</c> keeps its delay per length, a new <c>delay</c>, <c>velocity</c>
 /// or <c>eps_eff</c> keeps its z0, a new <c>l</c> keeps its c and the other way round, and a new <c>length</c> keeps every
 /// per-length value (so its delay grows with it). A delay given as a time is the whole segment's. A <c>fall</c> never written
-/// follows <c>rise</c>, as in a file. <c>frequency</c> sets a source's period. Values that are names or texts, the keys of a
-/// geometry or a loss model, and a PRBS order are not variable by key path.
+/// follows <c>rise</c>, as in a file. <c>frequency</c> sets a source's period. A geometry's keys
+/// (<c>line[0].segment.geometry.width</c>) derive the segment again from its cross-section. Values that are names or texts, the
+/// keys of a segment's <c>loss</c> mapping and a PRBS order are not variable by key path.
 /// </remarks>
 public static class ScenarioValues
 {
@@ -35,7 +36,15 @@ public static class ScenarioValues
         var (place, key) = Locate(scenario, path);
         var d = dimension ?? key.Preferred;
         if (!key.Dimensions.Contains(d)) throw new InputException($"{path}: takes {Expected(key)}, not {d.Describe()}");
-        return ReadAt(place.Get(scenario), key.Key, d);
+        return ReadAt(place.Scope, place.Get(scenario), key.Key, d);
+    }
+
+    /// <summary>The key <paramref name="keyPath"/> names in this scenario: its dimensions and sign (a geometry's keys depend on its kind).</summary>
+    /// <exception cref="InputException">The path does not name a numeric value of this scenario.</exception>
+    public static ScenarioKey KeyAt(Scenario scenario, string keyPath)
+    {
+        ArgumentNullException.ThrowIfNull(scenario);
+        return Locate(scenario, KeyPath.Parse(keyPath)).Item2;
     }
 
     /// <summary>The scenario with the value at <paramref name="keyPath"/> read from <paramref name="text"/> (e.g. "33 ohm").</summary>
@@ -73,7 +82,7 @@ public static class ScenarioValues
             var path = KeyPath.Parse(change.KeyPath);
             var (place, key) = Locate(s, path);
             Check(path, key, change.Value, change.Dimension);
-            s = place.Set(s, WriteAt(path, place.Get(s), key.Key, change.Value, change.Dimension));
+            s = place.Set(s, WriteAt(path, place.Scope, place.Get(s), key.Key, change.Value, change.Dimension));
             checks.Add(Afterwards(path, place, key.Key));
         }
         foreach (var check in checks) check(s);
@@ -108,6 +117,11 @@ public static class ScenarioValues
             default:
                 throw new InputException($"{path}: no '{top}' in a scenario; expected source, line[N], load or simulation");
         }
+        if (place.Scope == "segment" && next == parts.Length - 2 && parts[next] is { Name: "geometry", Index: null })
+        {
+            place = place with { Scope = "geometry" };
+            next++;
+        }
         if (next != parts.Length - 1)
         {
             string at = path.Prefix(Math.Min(next + 1, parts.Length));
@@ -117,6 +131,7 @@ public static class ScenarioValues
         }
         var last = parts[^1];
         if (last.Index is not null) throw new InputException($"{path}: '{last.Name}' is a single value, not a list");
+        if (place.Scope == "geometry") return (place, GeometryKey(path, (Segment)place.Get(s), last.Name));
         var key = ScenarioKeys.Find(place.Scope, last.Name);
         if (key is null)
         {
@@ -127,9 +142,20 @@ public static class ScenarioValues
         return (place, key);
     }
 
-    static string Beyond(string scope, string name) => scope == "segment" && name is "geometry" or "loss"
-        ? $"the keys of a segment's {name} cannot be varied by key path; vary length, r, g, or (without a geometry) z0, delay, l, c"
+    static string Beyond(string scope, string name) => scope == "segment" && name == "loss"
+        ? "the keys of a segment's loss model cannot be varied by key path; vary length, r, g, z0, delay, l or c"
         : $"'{name}' holds no mapping here";
+
+    /// <summary>A key of a segment's geometry: its dimension is the cross-section kind's (<see cref="Lines.CrossSectionCatalog"/>).</summary>
+    static ScenarioKey GeometryKey(KeyPath path, Segment seg, string name)
+    {
+        if (seg.Derived is null)
+            throw new InputException($"{path}: '{path.Prefix(path.Parts.Length - 2)}' is given by z0 and a delay or by l and c, not by a geometry");
+        if (name == "kind") throw NotNumeric(path, name);
+        var d = SegmentGeometry.InputDimension(seg, name)
+            ?? throw new InputException($"{path}: unknown key '{name}' for {seg.Derived.Kind}; expected one of: {string.Join(", ", SegmentGeometry.InputKeys(seg))}");
+        return new ScenarioKey("geometry", SegmentGeometry.InputKeys(seg).First(k => string.Equals(k, name, StringComparison.OrdinalIgnoreCase)), [d], KeySign.Any);
+    }
 
     static InputException NotNumeric(KeyPath path, string name) =>
         new($"{path}: '{name}' is not a number; only numeric values can be varied by key path");
@@ -220,8 +246,9 @@ public static class ScenarioValues
         if (key.Key == "velocity" && ScenarioRules.FasterThanLight(value)) throw new InputException($"{path}: '{written}' is faster than light");
     }
 
-    static double? ReadAt(object owner, string key, Dimension d) => owner switch
+    static double? ReadAt(string scope, object owner, string key, Dimension d) => owner switch
     {
+        Segment o when scope == "geometry" => o.Derived!.Inputs.TryGetValue(key, out double x) ? x : null,
         SourceSpec o => key switch
         {
             "low" => o.Low, "high" => o.High, "rise" => o.Rise, "fall" => o.Fall, "delay" => o.Delay, "width" => o.Width,
@@ -242,8 +269,9 @@ public static class ScenarioValues
         _ => null,
     };
 
-    static object WriteAt(KeyPath path, object owner, string key, double v, Dimension d) => owner switch
+    static object WriteAt(KeyPath path, string scope, object owner, string key, double v, Dimension d) => owner switch
     {
+        Segment o when scope == "geometry" => SegmentGeometry.Rebuild(o, path, key, v),
         SourceSpec o => key switch
         {
             "low" => o with { Low = v }, "high" => o with { High = v }, "rise" => o with { Rise = v }, "fall" => o with { Fall = v },
@@ -267,17 +295,18 @@ public static class ScenarioValues
 
     static Segment WriteSegment(KeyPath path, Segment o, string key, double v, Dimension d)
     {
-        bool geometry = o.Derived is not null;
-        if (geometry && key is "z0" or "delay" or "velocity" or "eps_eff" or "l" or "c")
-            throw new InputException($"{path}: a segment given by geometry takes its impedance and delay from it; vary its length, r or g");
+        if (o.Derived is { } origin && key != "length")
+        {
+            if (key is not ("r" or "g"))
+                throw new InputException($"{path}: a segment given by geometry takes its impedance and delay from it; vary its geometry, length, r or g");
+            if (origin.FrequencyLoss)
+                throw new InputException($"{path}: with 'loss: frequency' the resistance and conductance come from the geometry");
+            return SegmentGeometry.Rebuild(o, path, key, v);   // an r or g beside a geometry replaces the derived one
+        }
         if (key == "r" && o.Loss?.SkinCorner is not null)
-            throw new InputException(geometry
-                ? $"{path}: with 'loss: frequency' the resistance and conductance come from the geometry"
-                : $"{path}: the resistance is given in the segment's 'loss' (r_dc, r_skin), so it cannot be given as 'r' too");
+            throw new InputException($"{path}: the resistance is given in the segment's 'loss' (r_dc, r_skin), so it cannot be given as 'r' too");
         if (key == "g" && o.Loss?.Dielectric is not null)
-            throw new InputException(geometry
-                ? $"{path}: the dielectric loss comes from the geometry's tand"
-                : $"{path}: the dielectric loss is given in the segment's 'loss' (tand, er, at), so it cannot be given as 'g' too");
+            throw new InputException($"{path}: the dielectric loss is given in the segment's 'loss' (tand, er, at), so it cannot be given as 'g' too");
         double tau = Math.Sqrt(o.L * o.C), z0 = o.Z0;
         Segment WithTau(double t) => o with { L = z0 * t, C = t / z0 };
         return key switch

@@ -66,7 +66,8 @@ simulation: { duration: 15 ns, resolution: 10 }
     [InlineData("loud.r", "no 'loud'")]
     [InlineData("line[1].segment.z0", "is a shunt, not a segment")]
     [InlineData("line[0]", "names a whole item")]
-    [InlineData("line[0].segment.geometry.width", "geometry cannot be varied")]
+    [InlineData("line[0].segment.geometry.width", "not by a geometry")]
+    [InlineData("line[0].segment.loss.tand", "loss model cannot be varied")]
     [InlineData("load..r", "is not a scenario key path")]
     public void A_key_that_does_not_exist_or_a_wrong_unit_is_a_clear_error_naming_the_key(string path, string fragment)
     {
@@ -186,6 +187,51 @@ simulation: { duration: 15 ns, resolution: 10 }
         var grid = SweepGrid.Build(TestScenarios.Parse(Net), [SweepAxis.Parse(vary)]);
         var loaded = TestScenarios.Parse(Net.Replace(from, to));
         Assert.Equal(Describe(loaded), Describe(grid.Points[0].Scenario));
+    }
+
+    // A microstrip given by its cross-section, once with constant loss and once with the cross-section's frequency-dependent loss.
+    const string Board = @"source: { waveform: step, high: 1 V, rise: 100 ps, resistance: 20 ohm }
+line:
+  - segment:
+      length: 100 mm
+      geometry: { kind: microstrip, width: 0.3 mm, height: 0.17 mm, thickness: 35 um, er: 4.3, tand: 0.02, at: 1 GHz }
+  - segment:
+      length: 50 mm
+      geometry: { kind: microstrip, width: 0.2 mm, height: 0.17 mm, thickness: 35 um, er: 4.3, tand: 0.02 }
+      loss: frequency
+load: { r: 50 ohm }
+simulation: { duration: 5 ns, resolution: 10 }
+";
+
+    [Theory]
+    [InlineData("line[0].segment.geometry.width=0.25 mm", "width: 0.3 mm", "width: 0.25 mm")]
+    [InlineData("line[0].segment.geometry.er=3.8", "er: 4.3, tand: 0.02, at", "er: 3.8, tand: 0.02, at")]
+    [InlineData("line[1].segment.geometry.height=0.2 mm", "width: 0.2 mm, height: 0.17 mm", "width: 0.2 mm, height: 0.2 mm")]
+    [InlineData("line[0].segment.r=2 ohm/m", "length: 100 mm\n", "length: 100 mm\n      r: 2 ohm/m\n")]
+    [InlineData("line[0].segment.g=1 mS/m", "length: 100 mm\n", "length: 100 mm\n      g: 1 mS/m\n")]
+    public void A_geometry_variant_is_derived_again_as_the_loader_derives_it(string vary, string from, string to)
+    {
+        from = from.Replace("\\n", "\n"); to = to.Replace("\\n", "\n");
+        var s = TestScenarios.Parse(Board);
+        var grid = SweepGrid.Build(s, [SweepAxis.Parse(vary)]);
+        var loaded = TestScenarios.Parse(Board.Replace(from, to));
+        Assert.NotEqual(Describe(s), Describe(loaded));
+        Assert.Equal(Describe(loaded), Describe(grid.Points[0].Scenario));
+        Assert.Equal(((Segment)loaded.Line[0]).Derived!.Z0, ((Segment)grid.Points[0].Scenario.Line[0]).Derived!.Z0, 1e-9);
+    }
+
+    [Theory]
+    [InlineData("line[0].segment.z0", "50 ohm", "takes its impedance and delay from it")]
+    [InlineData("line[1].segment.r", "1 ohm/m", "with 'loss: frequency'")]
+    [InlineData("line[0].segment.geometry.gap", "1 mm", "unknown key 'gap' for microstrip")]
+    [InlineData("line[0].segment.geometry.kind", "1 mm", "is not a number")]
+    [InlineData("line[0].segment.geometry.width", "-1 mm", "width")]
+    public void A_geometry_segment_refuses_what_its_file_would_refuse(string path, string text, string fragment)
+    {
+        var s = TestScenarios.Parse(Board);
+        var ex = Assert.ThrowsAny<InputException>(() => ScenarioValues.With(s, path, text));
+        Assert.StartsWith(path + ":", ex.Message);
+        Assert.Contains(fragment, ex.Message);
     }
 
     [Fact]
