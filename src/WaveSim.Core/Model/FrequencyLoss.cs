@@ -1,3 +1,4 @@
+using System.Collections.Immutable;
 using System.Numerics;
 
 namespace WaveSim.Core.Model;
@@ -23,6 +24,16 @@ public sealed record FrequencyLoss
 {
     /// <summary>Reference frequency of a geometry's er and tan δ when it gives no <c>at</c>, Hz (a common reference for board materials; common practice, no source).</summary>
     public const double DefaultReferenceFrequency = 1e9;
+
+    /// <summary>
+    /// The values the loss was given by (r_dc, skin_at, r_skin, tand, er, at; SI, by name), so a variant can fit it again; empty
+    /// for a cross-section's loss, which its geometry's inputs give.
+    /// </summary>
+    public IReadOnlyDictionary<string, double> Inputs
+    {
+        get;
+        init => field = value.ToImmutableDictionary();
+    } = ImmutableDictionary<string, double>.Empty;
 
     /// <summary>DC resistance per length, ohm/m; used only when <see cref="SkinCorner"/> is given.</summary>
     public double RDc { get; init; }

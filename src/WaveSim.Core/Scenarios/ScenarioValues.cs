@@ -22,8 +22,8 @@ public readonly record struct KeyChange(string KeyPath, double Value, Dimension 
 /// or <c>eps_eff</c> keeps its z0, a new <c>l</c> keeps its c and the other way round, and a new <c>length</c> keeps every
 /// per-length value (so its delay grows with it). A delay given as a time is the whole segment's. A <c>fall</c> never written
 /// follows <c>rise</c>, as in a file. <c>frequency</c> sets a source's period. A geometry's keys
-/// (<c>line[0].segment.geometry.width</c>) derive the segment again from its cross-section. Values that are names or texts, the
-/// keys of a segment's <c>loss</c> mapping and a PRBS order are not variable by key path.
+/// (<c>line[0].segment.geometry.width</c>) derive the segment again from its cross-section, and the keys of its <c>loss</c>
+/// mapping fit its loss model again. Values that are names or texts, and a PRBS order, are not variable by key path.
 /// </remarks>
 public static class ScenarioValues
 {
@@ -117,9 +117,14 @@ public static class ScenarioValues
             default:
                 throw new InputException($"{path}: no '{top}' in a scenario; expected source, line[N], load or simulation");
         }
-        if (place.Scope == "segment" && next == parts.Length - 2 && parts[next] is { Name: "geometry", Index: null })
+        if (place.Scope == "segment" && next == parts.Length - 2 && parts[next] is { Name: "geometry" or "loss", Index: null } inner)
         {
-            place = place with { Scope = "geometry" };
+            var seg = (Segment)place.Get(s);
+            if (inner.Name == "loss" && seg.Loss is not { Inputs.Count: > 0 })
+                throw new InputException(seg.Derived is not null
+                    ? $"{path}: the segment's loss comes from its geometry; vary the geometry's keys"
+                    : $"{path}: the segment has no 'loss' mapping in the scenario");
+            place = place with { Scope = inner.Name };
             next++;
         }
         if (next != parts.Length - 1)
@@ -142,9 +147,7 @@ public static class ScenarioValues
         return (place, key);
     }
 
-    static string Beyond(string scope, string name) => scope == "segment" && name == "loss"
-        ? "the keys of a segment's loss model cannot be varied by key path; vary length, r, g, z0, delay, l or c"
-        : $"'{name}' holds no mapping here";
+    static string Beyond(string scope, string name) => $"'{name}' holds no mapping here{(scope == "segment" ? " (a segment holds geometry.KEY and loss.KEY)" : "")}";
 
     /// <summary>A key of a segment's geometry: its dimension is the cross-section kind's (<see cref="Lines.CrossSectionCatalog"/>).</summary>
     static ScenarioKey GeometryKey(KeyPath path, Segment seg, string name)
@@ -249,6 +252,7 @@ public static class ScenarioValues
     static double? ReadAt(string scope, object owner, string key, Dimension d) => owner switch
     {
         Segment o when scope == "geometry" => o.Derived!.Inputs.TryGetValue(key, out double x) ? x : null,
+        Segment o when scope == "loss" => o.Loss!.Inputs.TryGetValue(key, out double x) ? x : null,
         SourceSpec o => key switch
         {
             "low" => o.Low, "high" => o.High, "rise" => o.Rise, "fall" => o.Fall, "delay" => o.Delay, "width" => o.Width,
@@ -272,6 +276,7 @@ public static class ScenarioValues
     static object WriteAt(KeyPath path, string scope, object owner, string key, double v, Dimension d) => owner switch
     {
         Segment o when scope == "geometry" => SegmentGeometry.Rebuild(o, path, key, v),
+        Segment o when scope == "loss" => SegmentLoss.Rebuild(o, path, key, v),
         SourceSpec o => key switch
         {
             "low" => o with { Low = v }, "high" => o with { High = v }, "rise" => o with { Rise = v }, "fall" => o with { Fall = v },

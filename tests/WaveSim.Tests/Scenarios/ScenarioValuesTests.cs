@@ -67,7 +67,7 @@ simulation: { duration: 15 ns, resolution: 10 }
     [InlineData("line[1].segment.z0", "is a shunt, not a segment")]
     [InlineData("line[0]", "names a whole item")]
     [InlineData("line[0].segment.geometry.width", "not by a geometry")]
-    [InlineData("line[0].segment.loss.tand", "loss model cannot be varied")]
+    [InlineData("line[0].segment.loss.tand", "no 'loss' mapping")]
     [InlineData("load..r", "is not a scenario key path")]
     public void A_key_that_does_not_exist_or_a_wrong_unit_is_a_clear_error_naming_the_key(string path, string fragment)
     {
@@ -234,6 +234,35 @@ simulation: { duration: 5 ns, resolution: 10 }
         Assert.Contains(fragment, ex.Message);
     }
 
+    const string Lossy = @"source: { waveform: step, high: 1 V, rise: 100 ps }
+line:
+  - segment: { length: 1 m, z0: 50 ohm, delay: 5 ns/m, loss: { r_dc: 5 ohm/m, skin_at: 1 GHz, r_skin: 40 ohm/m, tand: 0.02, er: 4.3, at: 1 GHz } }
+load: { r: 50 ohm }
+simulation: { duration: 15 ns, resolution: 10 }
+";
+
+    [Theory]
+    [InlineData("line[0].segment.loss.tand=0.01", "tand: 0.02", "tand: 0.01")]
+    [InlineData("line[0].segment.loss.r_skin=60 ohm/m", "r_skin: 40 ohm/m", "r_skin: 60 ohm/m")]
+    [InlineData("line[0].segment.loss.r_dc=2 ohm/m", "r_dc: 5 ohm/m", "r_dc: 2 ohm/m")]
+    [InlineData("line[0].segment.z0=60 ohm", "z0: 50 ohm", "z0: 60 ohm")]
+    public void A_loss_variant_fits_its_loss_model_again_as_the_loader_does(string vary, string from, string to)
+    {
+        var grid = SweepGrid.Build(TestScenarios.Parse(Lossy), [SweepAxis.Parse(vary)]);
+        Assert.Equal(Describe(TestScenarios.Parse(Lossy.Replace(from, to))), Describe(grid.Points[0].Scenario));
+    }
+
+    [Theory]
+    [InlineData("line[0].segment.loss.r_skin", "3 ohm/m", "must be greater than r_dc")]
+    [InlineData("line[0].segment.loss.tand", "1.5", "must be below 1")]
+    [InlineData("line[0].segment.r", "1 ohm/m", "cannot be given as 'r' too")]
+    public void A_loss_value_the_loader_would_refuse_is_refused(string path, string text, string fragment)
+    {
+        var ex = Assert.ThrowsAny<InputException>(() => ScenarioValues.With(TestScenarios.Parse(Lossy), path, text));
+        Assert.StartsWith(path + ":", ex.Message);
+        Assert.Contains(fragment, ex.Message);
+    }
+
     [Fact]
     public void The_document_knows_how_and_where_a_value_is_written()
     {
@@ -284,13 +313,15 @@ simulation: { duration: 5 ns, resolution: 10 }
             {
                 switch (e)
                 {
-                    case Segment g: b.Append($"{indent}segment {F(g.Length)} {F(g.R)} {F(g.L)} {F(g.G)} {F(g.C)} {g.Loss is not null}\n"); break;
+                    case Segment g: b.Append($"{indent}segment {F(g.Length)} {F(g.R)} {F(g.L)} {F(g.G)} {F(g.C)} {Loss(g.Loss)}\n"); break;
                     case Shunt h: b.Append($"{indent}shunt {F(h.Parts.R)} {F(h.Parts.L)} {F(h.Parts.C)}\n"); break;
                     case Series r: b.Append($"{indent}series {F(r.Parts.R)} {F(r.Parts.L)} {F(r.Parts.C)}\n"); break;
                     case Branch br: b.Append($"{indent}branch {br.Name} {Load(br.Load)}\n"); Line(br.Line, indent + "  "); break;
                 }
             }
         }
+        string Loss(WaveSim.Core.Model.FrequencyLoss? l) => l is null ? "-"
+            : $"{F(l.RDc)} {F(l.SkinCorner)} {F(l.Dielectric?.EpsInfinity)} {F(l.Dielectric?.DeltaEps)} {F(l.ReferencePermittivity)} {F(l.Filling)}";
         string Load(LoadSpec l) => $"{F(l.R)} {F(l.To)} {F(l.C)} {F(l.L)} {l.Short} {F(l.Receiver?.Vih)} {F(l.Receiver?.Vil)}";
         Line(s.Line, "");
         b.Append($"load {Load(s.Load)}\n");
