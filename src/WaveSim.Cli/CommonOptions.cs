@@ -34,10 +34,21 @@ public static class CommonOptions
     /// <summary>Loads a scenario, plans its grid once and prints its warnings for that plan; pass the plan on to the run (<see cref="RunOptions.Plan"/>).</summary>
     public static (Scenario Scenario, Core.Solver.GridPlan Plan) LoadPlanned(string path, TextWriter warnings)
     {
-        var s = Load(path);
-        var plan = Simulate.Plan(s);
-        WarningOutput.Write(warnings, ScenarioWarnings.For(s, plan));
-        return (s, plan);
+        var (document, plan) = LoadDocumentPlanned(path, warnings);
+        return (document.Scenario, plan);
+    }
+
+    /// <summary>Loads a scenario with its text (for what only the text knows: how values are written) and prints its warnings.</summary>
+    public static ScenarioDocument LoadDocument(string path, TextWriter warnings) => LoadDocumentPlanned(path, warnings).Document;
+
+    /// <summary>Loads a scenario with its text, plans its grid once and prints its warnings for that plan.</summary>
+    public static (ScenarioDocument Document, Core.Solver.GridPlan Plan) LoadDocumentPlanned(string path, TextWriter warnings)
+    {
+        if (!File.Exists(path)) throw new InputException($"{path}: no such scenario file");
+        var document = ScenarioLoader.Read(path);
+        var plan = Simulate.Plan(document.Scenario);
+        WarningOutput.Write(warnings, ScenarioWarnings.For(document.Scenario, plan));
+        return (document, plan);
     }
 
     /// <summary>The output folder: the option's value, or out/&lt;scenario file name without extension&gt;&lt;suffix&gt;.</summary>

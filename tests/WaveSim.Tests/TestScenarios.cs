@@ -26,6 +26,9 @@ simulation: { duration: 27 ns, resolution: 10 }
 
     public static Scenario Parse(string yaml) => ScenarioLoader.Parse(yaml, "test.yaml");
 
+    /// <summary>The scenario with its text, as the loader reads a file.</summary>
+    public static ScenarioDocument Document(string yaml) => ScenarioLoader.ReadText(yaml, "test.yaml");
+
     public static SimulationResult Run(string yaml, SimulationOptions? options = null) => Simulate.Solve(Parse(yaml), options);
 
     /// <summary>The value of a waveform at time t by linear interpolation on the output grid.</summary>

@@ -66,7 +66,7 @@ public static class CheckCommand
             if (s.Derived is { } d)
             {
                 // A wideband dielectric has no single G: show it at its reference frequency, where it is ωC·tan δ.
-                double f = d.FrequencyHz ?? Core.Lines.FrequencyLoss.DefaultReferenceFrequency;
+                double f = d.FrequencyHz ?? Core.Model.FrequencyLoss.DefaultReferenceFrequency;
                 string g = s.Loss?.Dielectric is null ? $"G {Quantity.Format(s.G, "S")}/m"
                     : $"G {Quantity.Format(s.ShuntAdmittance(new System.Numerics.Complex(0, 2 * Math.PI * f)).Real, "S")}/m at {Quantity.Format(f, "Hz")} (wideband dielectric, none at DC)";
                 o.WriteLine($"    from {d.Kind} geometry: Z0 {Quantity.Format(d.Z0, "Ω")}, eps_eff {d.EpsEff:G4}, {Quantity.Format(d.DelayPerLength, "s")}/m, L {Quantity.Format(s.L, "H")}/m, C {Quantity.Format(s.C, "F")}/m, R {Quantity.Format(s.R, "Ω")}/m, {g}");

@@ -36,10 +36,11 @@ public static class FitCommand
         cmd.SetAction((pr, ct) => CommandGuard.RunAsync(pr.InvocationConfiguration.Error, () =>
         {
             string path = pr.GetValue(scenario)!;
-            var s = CommonOptions.Load(path, pr.InvocationConfiguration.Error);
+            var document = CommonOptions.LoadDocument(path, pr.InvocationConfiguration.Error);
+            var s = document.Scenario;
             string probeName = pr.GetValue(probe)!;
             CaptureComparison.RequireProbe(s, probeName);
-            var parameters = pr.GetValue(free)!.Select(f => FreeParameter.Parse(s, f)).ToList();
+            var parameters = pr.GetValue(free)!.Select(f => FreeParameter.Parse(document, f)).ToList();
             Capture cap = capture.Read(pr)!;
             CaptureArguments.Warn(cap, s.Simulation.Duration, pr.InvocationConfiguration.Error);
             ScenarioFitResult result;
@@ -56,7 +57,8 @@ public static class FitCommand
             var summary = FitOutputs.Json(result);
             using (var output = new OutputFolder(dir))
             {
-                File.WriteAllText(output.File("fitted.yaml"), result.FittedText);
+                // The author's text with the fitted values spliced in, comments kept.
+                File.WriteAllText(output.File("fitted.yaml"), document.Edited(ScenarioFit.Changes(parameters, result.Parameters.Select(p => p.Value).ToArray())));
                 File.WriteAllText(output.File("fit.json"), RunSummary.Text(summary));
                 File.WriteAllBytes(output.File("fit.png"),
                     XyChart.RenderPng(FitOutputs.Chart(result, $"{s.Title}: fit of {probeName} to {Path.GetFileName(cap.Source)}"),

@@ -30,8 +30,9 @@ public static class ReportCommand
             string path = pr.GetValue(scenario)!;
             double band = CommonOptions.ParseBand(pr.GetValue(settle)!);
             // The file is read once: the scenario shown is the text the run was read from.
-            var (s, plan) = CommonOptions.LoadPlanned(path, pr.InvocationConfiguration.Error);
-            string text = s.SourceText ?? "";
+            var (document, plan) = CommonOptions.LoadDocumentPlanned(path, pr.InvocationConfiguration.Error);
+            var s = document.Scenario;
+            string text = document.Text;
             var options = HtmlReport.RunOptions(band, pr.GetValue(force)) with { Plan = plan };
             RunOutcome run;
             using (var bar = new ProgressBar(pr.InvocationConfiguration.Error, "simulating"))

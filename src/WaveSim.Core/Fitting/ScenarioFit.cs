@@ -29,13 +29,13 @@ namespace WaveSim.Core.Fitting;
 /// memory), then every standard deviation is widened by √(n/n_eff) for the residual's lag-1 autocorrelation
 /// (<see cref="ResidualCorrelation"/>).</para>
 /// <para>Method: <see cref="BoundedLeastSquares"/> (Levenberg-Marquardt with bounds by change of variables); every residual
-/// evaluation is one simulation of an edited copy of the scenario text (<see cref="ScenarioEditor.With"/>). The simulations
+/// evaluation is one simulation of a variant made by key path (<see cref="ScenarioValues.With(Scenario, IEnumerable{KeyChange})"/>). The simulations
 /// run one after another: the fitter asks for its Jacobian columns one at a time.</para>
 /// </remarks>
 public static class ScenarioFit
 {
     /// <summary>Fits <paramref name="parameters"/> of <paramref name="scenario"/> so probe <paramref name="probe"/> matches <paramref name="capture"/>.</summary>
-    /// <param name="scenario">The starting scenario, read from text.</param>
+    /// <param name="scenario">The starting scenario.</param>
     /// <param name="capture">The measured waveform at the probe.</param>
     /// <param name="probe">The scenario probe the capture was taken at.</param>
     /// <param name="parameters">The free values (at least one, each key once).</param>
@@ -133,15 +133,14 @@ public static class ScenarioFit
         double[] sigma = fit.Uncertainty.Select(u => u * basis.Widening).ToArray();
 
         var fitted = parameters.Select((p, j) => new FittedParameter(p, best[j], sigma[j])).ToList();
-        string text = ScenarioEditor.EditedText(scenario, Changes(parameters, best));
-        Scenario fittedScenario = ScenarioLoader.Parse(text, scenario.FilePath ?? "scenario.yaml");
+        Scenario fittedScenario = Variant(scenario, parameters, best);
 
         double[] startSim = Difference(t0, v0, capT, capV, offset0).Select((r, i) => capV[i] - r).ToArray();
         double[] fittedSim = residual.Select((r, i) => capV[i] - r).ToArray();
         double startRms = Rms(startSim.Select((s, i) => s - capV[i]));
         double rms = Rms(residual);
         return new ScenarioFitResult(fitted, offset, fitOffset ? sigma[^1] : double.NaN, fitOffset, rms, startRms,
-            simulations, fit.Converged, text, fittedScenario, capT.Select(t => t + offset).ToArray(), capV, startSim, fittedSim, basis);
+            simulations, fit.Converged, fittedScenario, capT.Select(t => t + offset).ToArray(), capV, startSim, fittedSim, basis);
     }
 
     /// <summary>The residual standard error and the widening for correlation, from the residual at the solution.</summary>
@@ -154,16 +153,19 @@ public static class ScenarioFit
         return new UncertaintyBasis(m, p, s, rho, ResidualCorrelation.EffectiveSamples(m, rho), ResidualCorrelation.Widening(rho));
     }
 
-    /// <summary>The scenario with the parameters set to <paramref name="values"/> (SI), read back from the edited text.</summary>
-    /// <param name="scenario">The scenario, read from text.</param>
+    /// <summary>The scenario with the parameters set to <paramref name="values"/> (SI), made by key path.</summary>
+    /// <param name="scenario">The scenario.</param>
     /// <param name="parameters">The free parameters.</param>
     /// <param name="values">One SI value per parameter.</param>
     /// <returns>The validated variant.</returns>
     public static Scenario Variant(Scenario scenario, IReadOnlyList<FreeParameter> parameters, double[] values) =>
-        ScenarioEditor.With(scenario, Changes(parameters, values));
+        ScenarioValues.With(scenario, Changes(parameters, values));
 
-    static IEnumerable<(string, string)> Changes(IReadOnlyList<FreeParameter> parameters, double[] values) =>
-        parameters.Select((p, j) => (p.KeyPath, ScenarioEditor.Format(values[j], p.Unit)));
+    /// <summary>The parameters at <paramref name="values"/> (SI) as key-path changes, e.g. to splice them into the scenario's text.</summary>
+    /// <param name="parameters">The free parameters.</param>
+    /// <param name="values">One SI value per parameter.</param>
+    public static IEnumerable<KeyChange> Changes(IReadOnlyList<FreeParameter> parameters, IReadOnlyList<double> values) =>
+        parameters.Select((p, j) => new KeyChange(p.KeyPath, values[j], p.Dimension));
 
     /// <summary>Captured minus simulated (interpolated at capT + offset, held constant outside its record).</summary>
     static double[] Difference(double[] simT, double[] simV, double[] capT, double[] capV, double offset)

@@ -12,8 +12,8 @@ namespace WaveSim.Core.Fitting;
 /// <param name="StartRmsV">The same with the starting values, V.</param>
 /// <param name="Simulations">Number of simulations run, including the alignment and the Jacobians.</param>
 /// <param name="Converged">True when the fit stopped improving; false when the budget ran out first.</param>
-/// <param name="FittedText">The scenario's YAML text with the fitted values spliced in.</param>
-/// <param name="Fitted">That text read back: the fitted scenario.</param>
+/// <param name="Fitted">The fitted scenario (its text with the fitted values is <see cref="Scenarios.ScenarioDocument.Edited(IEnumerable{Scenarios.KeyChange})"/>
+/// of <see cref="ScenarioFit.Changes"/>).</param>
 /// <param name="Time">The capture's sample times used, on the simulation's time axis (the fitted offset added), s.</param>
 /// <param name="Captured">The capture's values at <paramref name="Time"/>, V.</param>
 /// <param name="StartSimulated">The starting scenario's probe at <paramref name="Time"/>, V (aligned with the starting offset).</param>
@@ -29,7 +29,6 @@ public sealed record ScenarioFitResult(
     double StartRmsV,
     int Simulations,
     bool Converged,
-    string FittedText,
     Scenario Fitted,
     double[] Time,
     double[] Captured,

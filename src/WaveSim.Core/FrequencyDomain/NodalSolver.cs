@@ -7,7 +7,7 @@ namespace WaveSim.Core.FrequencyDomain;
 /// the line ends. A line piece enters through its chain (ABCD) relation, V(l) = cosh(γl)·V(0) − Zc·sinh(γl)·I(0),
 /// I(l) = −sinh(γl)/Zc·V(0) + cosh(γl)·I(0), with γ = √((R+sL)(G+sC)), Zc = √((R+sL)/(G+sC)) (Pozar, Microwave Engineering,
 /// 4th ed. 2012, section 2.7 and Table 4.1; Paul, Analysis of Multiconductor Transmission Lines, 2nd ed. 2008); a segment with a
-/// frequency-dependent loss enters with its exact Z(s) and Y(s) (<see cref="Lines.FrequencyLoss"/>), not a fitted form. When the piece
+/// frequency-dependent loss enters with its exact Z(s) and Y(s) (<see cref="Model.FrequencyLoss"/>), not a fitted form. When the piece
 /// is lossy and long (Re γl above <see cref="ChainLimit"/>) cosh and sinh grow like e^(Re γl), so it enters instead through its
 /// admittance parameters coth(γl)/Zc and csch(γl)/Zc, computed from e^(−γl), which stay bounded however long the line.
 /// </summary>

@@ -12,7 +12,7 @@ namespace WaveSim.Core.Lines;
 /// <remarks>
 /// Loss model: R_dc from the copper cross-section (strip w t, round wire pi d^2/4 each, coax inner conductor);
 /// R_ac = max(R_dc, Rs F) with the kind's skin-effect factor F; G = omega C tan d. er and tan d are taken as
-/// constant over frequency (use <see cref="DjordjevicSarkar"/> for a wideband dielectric). Every kind also warns when
+/// constant over frequency (use <see cref="Model.DjordjevicSarkar"/> for a wideband dielectric). Every kind also warns when
 /// the evaluation frequency makes the cross-section larger than a tenth of the wavelength in the medium
 /// (quasi-static limit; common practice, no source), and coax above its TE11 cutoff.
 /// </remarks>

@@ -1,4 +1,5 @@
 using System.Numerics;
+using WaveSim.Core.Model;
 using MathNet.Numerics.LinearAlgebra;
 using Vector = MathNet.Numerics.LinearAlgebra.Vector<double>;
 

@@ -7,6 +7,14 @@ namespace WaveSim.Core.Lines;
 /// </remarks>
 public static class SkinEffect
 {
+    /// <summary>
+    /// ω0 of a <see cref="Model.FrequencyLoss"/> for a cross-section, matching R_dc·√(1 + s/ω0) to Rs(f)·F at high frequency:
+    /// ω0 = R_dc²/(F²μ0ρ).
+    /// </summary>
+    /// <param name="p">The cross-section's parameters, with R_dc &gt; 0 and a skin factor &gt; 0.</param>
+    public static double CornerFromGeometry(LineParameters p) =>
+        p.RDc * p.RDc / (p.SkinFactor * p.SkinFactor * LineConstants.Mu0 * p.Resistivity);
+
     /// <summary>Skin depth delta, m.</summary>
     /// <param name="frequency">Frequency, Hz, &gt; 0.</param>
     /// <param name="resistivity">Resistivity rho, ohm m, &gt; 0. Default annealed copper (IACS).</param>

@@ -49,7 +49,6 @@ public static class Reflectometer
             },
             Probes = [new ProbeSpec(PortProbe, [], ProbeAnchor.Source)],
             Simulation = new SimulationSpec(duration, null, scenario.Simulation.Resolution),
-            SourceText = null,
         };
     }
 

@@ -1,3 +1,5 @@
+using System.Collections.Immutable;
+
 namespace WaveSim.Core.Model;
 
 /// <summary>One item of a line, in order from the source end.</summary>
@@ -12,14 +14,14 @@ public abstract record LineElement;
 public sealed record Segment(double Length, double R, double L, double G, double C) : LineElement
 {
     /// <summary>The cross-section figures this segment was derived from, when it was given by geometry.</summary>
-    public Lines.LineParameters? Derived { get; init; }
+    public GeometryFigures? Derived { get; init; }
 
     /// <summary>
     /// Frequency-dependent conductor and dielectric loss, when given; null keeps the constant R and G. With it, R is R_dc
     /// (when a conductor model is given), L is the external inductance L∞, C the capacitance at the dielectric's reference
     /// frequency and G is 0 (when a dielectric model is given).
     /// </summary>
-    public Lines.FrequencyLoss? Loss { get; init; }
+    public FrequencyLoss? Loss { get; init; }
 
     /// <summary>Series impedance per length at complex frequency s, ohm/m: R + sL, or the exact frequency-dependent form.</summary>
     public System.Numerics.Complex SeriesImpedance(System.Numerics.Complex s) => Loss is { } f ? f.SeriesImpedance(s, R, L) : R + s * L;
@@ -67,4 +69,8 @@ public sealed record Series(LumpedParts Parts) : LineElement;
 /// <param name="Name">An identifier (letters, digits, _ and -), used in probe locations and file names.</param>
 /// <param name="Line">The branch's own elements, from the junction outward.</param>
 /// <param name="Load">The branch's far-end load.</param>
-public sealed record Branch(string Name, IReadOnlyList<LineElement> Line, LoadSpec Load) : LineElement;
+public sealed record Branch(string Name, IReadOnlyList<LineElement> Line, LoadSpec Load) : LineElement
+{
+    /// <summary>The branch's own elements, from the junction outward (held as an immutable array).</summary>
+    public IReadOnlyList<LineElement> Line { get; init => field = value.ToImmutableArray(); } = Line.ToImmutableArray();
+}

@@ -1,3 +1,5 @@
+using System.Collections.Frozen;
+
 namespace WaveSim.Core.Model;
 
 /// <summary>Pseudo-random binary sequences from the ITU-T O.150 generator polynomials.</summary>
@@ -9,7 +11,8 @@ namespace WaveSim.Core.Model;
 public static class Prbs
 {
     /// <summary>The orders supported, with the second tap of each polynomial.</summary>
-    public static readonly IReadOnlyDictionary<int, int> Taps = new Dictionary<int, int> { [7] = 6, [9] = 5, [15] = 14, [23] = 18, [31] = 28 };
+    public static readonly IReadOnlyDictionary<int, int> Taps =
+        new Dictionary<int, int> { [7] = 6, [9] = 5, [15] = 14, [23] = 18, [31] = 28 }.ToFrozenDictionary();
 
     /// <summary>One period (2^order − 1 bits) of the sequence, or <paramref name="maxBits"/> bits when that is fewer.</summary>
     /// <param name="order">7, 9, 15, 23 or 31.</param>

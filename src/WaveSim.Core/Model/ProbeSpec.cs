@@ -1,3 +1,5 @@
+using System.Collections.Immutable;
+
 namespace WaveSim.Core.Model;
 
 /// <summary>Where a probe sits.</summary>
@@ -18,6 +20,9 @@ public enum ProbeAnchor
 /// <param name="Distance">Distance from the start of that line, m (for <see cref="ProbeAnchor.Distance"/>).</param>
 public sealed record ProbeSpec(string Name, IReadOnlyList<string> BranchPath, ProbeAnchor Anchor, double Distance = 0)
 {
+    /// <summary>Branch names from the main line outward; empty for the main line (held as an immutable array).</summary>
+    public IReadOnlyList<string> BranchPath { get; init => field = value.ToImmutableArray(); } = BranchPath.ToImmutableArray();
+
     /// <summary>The location as written in a scenario, e.g. "stub/load" or "75 mm".</summary>
     public string Describe()
     {

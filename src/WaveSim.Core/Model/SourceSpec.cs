@@ -1,3 +1,5 @@
+using System.Collections.Immutable;
+
 namespace WaveSim.Core.Model;
 
 /// <summary>The shape of the driver's open-circuit voltage.</summary>
@@ -30,8 +32,9 @@ public sealed record SourceSpec
     public required double High { get; init; }
     /// <summary>10-90 % rise time, s; the edge is a linear 0-100 % ramp lasting 1.25 times this.</summary>
     public double Rise { get; init; }
-    /// <summary>10-90 % fall time, s (defaults to <see cref="Rise"/>).</summary>
-    public double Fall { get; init; }
+    /// <summary>10-90 % fall time, s. Until it is set it follows <see cref="Rise"/>, as a scenario without <c>fall</c> does.</summary>
+    public double Fall { get => _fall ?? Rise; init => _fall = value; }
+    readonly double? _fall;
     /// <summary>Start of the first edge, s.</summary>
     public double Delay { get; init; }
     /// <summary>Pulse and trapezoid: time at high between the ramps; Gaussian: full width at half maximum, s.</summary>
@@ -41,11 +44,11 @@ public sealed record SourceSpec
     /// <summary>Bits: the unit interval, s.</summary>
     public double BitTime { get; init; }
     /// <summary>Bits: the pattern of 0 and 1, repeated.</summary>
-    public IReadOnlyList<bool> Bits { get; init; } = [];
+    public IReadOnlyList<bool> Bits { get; init => field = value.ToImmutableArray(); } = ImmutableArray<bool>.Empty;
     /// <summary>Table: sample times (s, ascending) and voltages (V).</summary>
-    public double[] TableTime { get; init; } = [];
+    public ImmutableArray<double> TableTime { get; init; } = [];
     /// <summary>Table: voltages matching <see cref="TableTime"/>.</summary>
-    public double[] TableVolts { get; init; } = [];
+    public ImmutableArray<double> TableVolts { get; init; } = [];
     /// <summary>Driver output resistance, ohm (0 = ideal).</summary>
     public double Resistance { get; init; }
 

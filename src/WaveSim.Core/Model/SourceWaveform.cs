@@ -109,10 +109,10 @@ internal static class SourceWaveform
 
     static double Table(SourceSpec s, double x)
     {
-        double[] t = s.TableTime, v = s.TableVolts;
+        var (t, v) = (s.TableTime, s.TableVolts);
         if (x <= t[0]) return v[0];
         if (x >= t[^1]) return v[^1];
-        int i = Array.BinarySearch(t, x);
+        int i = System.Collections.Immutable.ImmutableArray.BinarySearch(t, x);
         if (i >= 0) return v[i];
         i = ~i;
         double f = (x - t[i - 1]) / (t[i] - t[i - 1]);
@@ -151,7 +151,7 @@ internal static class SourceWaveform
 
     static double TableMidpoint(SourceSpec s)
     {
-        double[] t = s.TableTime, v = s.TableVolts;
+        var (t, v) = (s.TableTime, s.TableVolts);
         double lo = v.Min(), hi = v.Max(), mid = (lo + hi) / 2;
         bool startLow = v[0] < mid;
         for (int i = 1; i < t.Length; i++)

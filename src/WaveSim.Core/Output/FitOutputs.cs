@@ -4,7 +4,7 @@ using WaveSim.Core.Rendering;
 
 namespace WaveSim.Core.Output;
 
-/// <summary>The files of <c>wavesim fit</c>: fit.json and the overlay chart (fitted.yaml is <see cref="ScenarioFitResult.FittedText"/>).</summary>
+/// <summary>The files of <c>wavesim fit</c>: fit.json and the overlay chart (fitted.yaml is the scenario text with <see cref="ScenarioFit.Changes"/> spliced in).</summary>
 public static class FitOutputs
 {
     /// <summary>fit.json: parameters {key: {value, uncertainty, start, lower, upper, unit}}, capture_offset_s, rms_V, start_rms_V,

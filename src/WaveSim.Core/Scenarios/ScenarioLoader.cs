@@ -43,17 +43,26 @@ public static class ScenarioLoader
 
     /// <summary>Reads and validates the scenario file at <paramref name="path"/>.</summary>
     /// <exception cref="ScenarioException">The file cannot be read or is not a valid scenario.</exception>
-    public static Scenario Load(string path)
+    public static Scenario Load(string path) => Read(path).Scenario;
+
+    /// <summary>Reads and validates a scenario from YAML text; <paramref name="file"/> names it in messages and anchors relative paths.</summary>
+    /// <exception cref="ScenarioException">The text is not a valid scenario.</exception>
+    public static Scenario Parse(string yaml, string file) => ReadText(yaml, file).Scenario;
+
+    /// <summary>Reads and validates the scenario file at <paramref name="path"/>, keeping its text beside the model.</summary>
+    /// <exception cref="ScenarioException">The file cannot be read or is not a valid scenario.</exception>
+    public static ScenarioDocument Read(string path)
     {
         string text;
         try { text = System.IO.File.ReadAllText(path); }
         catch (Exception ex) when (ex is IOException or UnauthorizedAccessException)
         { throw new ScenarioException($"{path}: cannot read the scenario ({ex.Message})"); }
-        return Parse(text, path);
+        return ReadText(text, path);
     }
 
-    /// <summary>Reads and validates a scenario from YAML text; <paramref name="file"/> names it in messages and anchors relative paths.</summary>
-    public static Scenario Parse(string yaml, string file)
+    /// <summary>Reads and validates a scenario from YAML text, kept beside the model; <paramref name="file"/> names it in messages and anchors relative paths.</summary>
+    /// <exception cref="ScenarioException">The text is not a valid scenario.</exception>
+    public static ScenarioDocument ReadText(string yaml, string file)
     {
         YamlShape.Check(yaml, file); // before the tree is built: YamlDotNet recurses where this walk does not
         var stream = new YamlStream();
@@ -84,10 +93,9 @@ public static class ScenarioLoader
             Probes = [],
             Simulation = sim,
             FilePath = file,
-            SourceText = yaml,
         };
         (scenario, _) = (WithLengthUnit(scenario, root, file), 0);
-        return scenario with { Probes = ReadProbes(top, scenario) };
+        return new ScenarioDocument(file, yaml, scenario with { Probes = ReadProbes(top, scenario) });
     }
 
     /// <summary>Takes the display length unit from the first segment's length as written ("150 mm" → mm).</summary>
@@ -115,12 +123,13 @@ public static class ScenarioLoader
         string wf = s.Text("waveform") ?? throw s.Error("missing required key 'source.waveform'");
         if (!Enum.TryParse<WaveformKind>(wf, ignoreCase: true, out var kind) || int.TryParse(wf, out _))
             throw s.Error(s.Node("waveform")!, "source.waveform", $"'{wf}' is not a waveform; expected one of: step, pulse, trapezoid, gaussian, sine, bits, table");
-        double high = s.Quantity("high", Dimension.Voltage) ?? throw s.Error("missing required key 'source.high'");
-        double low = s.Quantity("low", Dimension.Voltage) ?? 0;
-        double rise = s.NonNegative("rise", Dimension.Time) ?? 0;
-        double fall = s.NonNegative("fall", Dimension.Time) ?? rise;
-        double delay = s.NonNegative("delay", Dimension.Time) ?? 0;
-        double resistance = s.NonNegative("resistance", Dimension.Resistance) ?? 0;
+        double high = s.Quantity("high") ?? throw s.Error("missing required key 'source.high'");
+        double low = s.Quantity("low") ?? 0;
+        double rise = s.NonNegative("rise") ?? 0;
+        double? fallGiven = s.NonNegative("fall");
+        double fall = fallGiven ?? rise;
+        double delay = s.NonNegative("delay") ?? 0;
+        double resistance = s.NonNegative("resistance") ?? 0;
         double width = 0, period = 0, bitTime = 0;
         IReadOnlyList<bool> bits = [];
         double[] tt = [], tv = [];
@@ -129,34 +138,35 @@ public static class ScenarioLoader
         switch (kind)
         {
             case WaveformKind.Pulse:
-                Need("width"); width = s.NonNegative("width", Dimension.Time)!.Value; break;
+                Need("width"); width = s.NonNegative("width")!.Value; break;
             case WaveformKind.Gaussian:
-                Need("width"); width = s.Positive("width", Dimension.Time)!.Value; break;
+                Need("width"); width = s.Positive("width")!.Value; break;
             case WaveformKind.Trapezoid:
-                Need("width"); width = s.NonNegative("width", Dimension.Time)!.Value;
-                Need("period"); period = s.Positive("period", Dimension.Time)!.Value;
-                if (1.25 * rise + width + 1.25 * fall > period * (1 + 1e-12))
-                    throw s.Error(s.Node("period")!, "source.period", $"the rise ramp, width and fall ramp ({Quantity.Format(1.25 * rise + width + 1.25 * fall, "s")}) do not fit in the period");
+                Need("width"); width = s.NonNegative("width")!.Value;
+                Need("period"); period = s.Positive("period")!.Value;
+                if (ScenarioRules.TrapezoidMisfit(rise, width, fall, period) is { } misfit)
+                    throw s.Error(s.Node("period")!, "source.period", misfit);
                 break;
             case WaveformKind.Sine:
-                if (s.Has("period")) period = s.Positive("period", Dimension.Time)!.Value;
-                else if (s.Has("frequency")) period = 1 / s.Positive("frequency", Dimension.Frequency)!.Value;
+                if (s.Has("period")) period = s.Positive("period")!.Value;
+                else if (s.Has("frequency")) period = 1 / s.Positive("frequency")!.Value;
                 else throw s.Error("missing required key 'source.period' (or 'source.frequency') for waveform 'sine'");
                 break;
             case WaveformKind.Bits:
-                Need("bit_time"); bitTime = s.Positive("bit_time", Dimension.Time)!.Value;
+                Need("bit_time"); bitTime = s.Positive("bit_time")!.Value;
                 bits = ReadBits(s);
-                if (1.25 * Math.Max(rise, fall) > bitTime)
-                    throw s.Error(s.Node("bit_time")!, "source.bit_time", "the edge ramp (1.25 x rise or fall) is longer than a bit");
+                if (ScenarioRules.BitEdgeMisfit(rise, fall, bitTime) is { } edge)
+                    throw s.Error(s.Node("bit_time")!, "source.bit_time", edge);
                 break;
             case WaveformKind.Table:
                 Need("file"); (tt, tv) = ReadTable(s, file); break;
         }
-        return new SourceSpec
+        var spec = new SourceSpec
         {
-            Waveform = kind, Low = low, High = high, Rise = rise, Fall = fall, Delay = delay, Width = width,
-            Period = period, BitTime = bitTime, Bits = bits, TableTime = tt, TableVolts = tv, Resistance = resistance,
+            Waveform = kind, Low = low, High = high, Rise = rise, Delay = delay, Width = width,
+            Period = period, BitTime = bitTime, Bits = bits, TableTime = [.. tt], TableVolts = [.. tv], Resistance = resistance,
         };
+        return fallGiven is { } f ? spec with { Fall = f } : spec;   // a fall never written follows the rise, in variants too
     }
 
     static IReadOnlyList<bool> ReadBits(YamlMap s)
@@ -236,9 +246,9 @@ public static class ScenarioLoader
 
     static Segment ReadSegment(YamlMap m)
     {
-        double length = m.Positive("length", Dimension.Length) ?? throw m.Error($"missing required key '{m.Join("length")}'");
-        double? rGiven = m.NonNegative("r", Dimension.ResistancePerLength);
-        double? gGiven = m.NonNegative("g", Dimension.ConductancePerLength);
+        double length = m.Positive("length") ?? throw m.Error($"missing required key '{m.Join("length")}'");
+        double? rGiven = m.NonNegative("r");
+        double? gGiven = m.NonNegative("g");
         if (m.Has("geometry")) return SegmentGeometry.Read(m, length, rGiven, gGiven);
         if (m.Has("mode")) throw m.Error(m.Node("mode")!, m.Join("mode"), "only a segment with a coupled-pair geometry has a mode: remove this key or add a geometry");
         double r = rGiven ?? 0;
@@ -247,28 +257,28 @@ public static class ScenarioLoader
         {
             if (m.Has("l") || m.Has("c"))
                 throw m.Error("give either z0 with a delay, velocity or eps_eff, or l and c per length, not both");
-            double z0 = m.Positive("z0", Dimension.Resistance)!.Value;
+            double z0 = m.Positive("z0")!.Value;
             int given = new[] { "delay", "velocity", "eps_eff" }.Count(m.Has);
             if (given != 1)
                 throw m.Error($"with z0, give exactly one of '{m.Join("delay")}' (e.g. 6.5 ns/m or 1.2 ns), '{m.Join("velocity")}' (e.g. 0.66 c) or '{m.Join("eps_eff")}' (e.g. 3.3)");
             double perLength;
             if (m.Has("delay"))
             {
-                var (d, dim) = m.QuantityWithDim("delay", Dimension.DelayPerLength, Dimension.Time)!.Value;
+                var (d, dim) = m.QuantityWithDim("delay")!.Value;
                 if (!(d > 0)) throw m.Error(m.Node("delay")!, m.Join("delay"), "must be greater than zero");
                 perLength = dim.PerLength ? d : d / length;
             }
             else if (m.Has("velocity"))
             {
-                double v = m.Positive("velocity", Dimension.Velocity)!.Value;
-                if (v > Quantity.SpeedOfLight * (1 + 1e-9))
+                double v = m.Positive("velocity")!.Value;
+                if (ScenarioRules.FasterThanLight(v))
                     throw m.Error(m.Node("velocity")!, m.Join("velocity"), $"'{m.Text("velocity")}' is faster than light");
                 perLength = 1 / v;
             }
             else
             {
-                double ee = m.Positive("eps_eff", Dimension.Number)!.Value;
-                if (ee < 1) throw m.Error(m.Node("eps_eff")!, m.Join("eps_eff"), $"must be at least 1 (got {ee})");
+                double ee = m.Positive("eps_eff")!.Value;
+                if (ee < 1) throw m.Error(m.Node("eps_eff")!, m.Join("eps_eff"), ScenarioRules.AtLeastOne(ee));
                 perLength = Math.Sqrt(ee) / Quantity.SpeedOfLight;
             }
             return SegmentLoss.Apply(m, Segment.FromZ0(length, z0, perLength, r, g), rGiven is not null, gGiven is not null);
@@ -277,10 +287,10 @@ public static class ScenarioLoader
         {
             if (m.Has("delay") || m.Has("velocity") || m.Has("eps_eff"))
                 throw m.Error("with l and c per length, do not also give delay, velocity or eps_eff");
-            double l = m.Positive("l", Dimension.InductancePerLength)!.Value;
-            double c = m.Positive("c", Dimension.CapacitancePerLength)!.Value;
-            if (1 / Math.Sqrt(l * c) > Quantity.SpeedOfLight * (1 + 1e-6))
-                throw m.Error(m.Node("c")!, m.Join("c"), "l and c give a velocity faster than light");
+            double l = m.Positive("l")!.Value;
+            double c = m.Positive("c")!.Value;
+            if (ScenarioRules.FasterThanLight(l, c) is { } fast)
+                throw m.Error(m.Node("c")!, m.Join("c"), fast);
             return SegmentLoss.Apply(m, new Segment(length, r, l, g, c), rGiven is not null, gGiven is not null);
         }
         throw m.Error($"a segment needs z0 with one of delay, velocity or eps_eff, or l and c per length");
@@ -288,7 +298,7 @@ public static class ScenarioLoader
 
     static LumpedParts ReadParts(YamlMap m)
     {
-        var parts = new LumpedParts(m.NonNegative("r", Dimension.Resistance), m.Positive("l", Dimension.Inductance), m.Positive("c", Dimension.Capacitance));
+        var parts = new LumpedParts(m.NonNegative("r"), m.Positive("l"), m.Positive("c"));
         if (parts.R is null && parts.L is null && parts.C is null)
             throw m.Error("give at least one of r, l, c");
         return parts;
@@ -317,27 +327,27 @@ public static class ScenarioLoader
             };
         }
         var m = parent.Map(key, LoadKeys)!;
-        double? r = m.NonNegative("r", Dimension.Resistance);
-        double to = m.Quantity("to", Dimension.Voltage) ?? 0;
+        double? r = m.NonNegative("r");
+        double to = m.Quantity("to") ?? 0;
         if (m.Has("to") && r is null) throw m.Error(m.Node("to")!, m.Join("to"), "'to' is the voltage the load resistor returns to: give 'r' too");
         ReceiverThresholds? rx = null;
         if (m.Map("receiver", ReceiverKeys) is { } rm)
         {
-            double vih = rm.Quantity("vih", Dimension.Voltage) ?? throw rm.Error($"missing required key '{rm.Join("vih")}'");
-            double vil = rm.Quantity("vil", Dimension.Voltage) ?? throw rm.Error($"missing required key '{rm.Join("vil")}'");
-            if (vil >= vih) throw rm.Error(rm.Node("vil")!, rm.Join("vil"), $"vil ({Quantity.Format(vil, "V")}) must be below vih ({Quantity.Format(vih, "V")})");
+            double vih = rm.Quantity("vih") ?? throw rm.Error($"missing required key '{rm.Join("vih")}'");
+            double vil = rm.Quantity("vil") ?? throw rm.Error($"missing required key '{rm.Join("vil")}'");
+            if (ScenarioRules.ThresholdOrder(vih, vil) is { } order) throw rm.Error(rm.Node("vil")!, rm.Join("vil"), order);
             rx = new ReceiverThresholds(vih, vil);
         }
-        return new LoadSpec(r, to, m.Positive("c", Dimension.Capacitance), m.Positive("l", Dimension.Inductance), false, rx);
+        return new LoadSpec(r, to, m.Positive("c"), m.Positive("l"), false, rx);
     }
 
     static SimulationSpec ReadSimulation(YamlMap top)
     {
         var m = top.Map("simulation", SimulationKeys) ?? throw top.Error("missing required key 'simulation' (with 'duration')");
-        double duration = m.Positive("duration", Dimension.Time) ?? throw m.Error("missing required key 'simulation.duration'");
-        double? step = m.Positive("output_step", Dimension.Time);
-        double res = m.Positive("resolution", Dimension.Number) ?? 20;
-        if (res < 1) throw m.Error(m.Node("resolution")!, "simulation.resolution", $"must be at least 1 (got {res})");
+        double duration = m.Positive("duration") ?? throw m.Error("missing required key 'simulation.duration'");
+        double? step = m.Positive("output_step");
+        double res = m.Positive("resolution") ?? 20;
+        if (res < 1) throw m.Error(m.Node("resolution")!, "simulation.resolution", ScenarioRules.AtLeastOne(res));
         return new SimulationSpec(duration, step, res);
     }
 

@@ -38,11 +38,8 @@ internal static class SegmentGeometry
         }
         string context = $"{m.File}:{node.Start.Line}:{node.Start.Column}: {m.Join("geometry")}";
         var spec = CrossSection.FromDictionary(raw, context);
-        var p = ReadPairMode(m, spec) is PairMode pairMode ? CrossSection.ComputePair(spec).For(pairMode) : CrossSection.Compute(spec);
-        // Each dimension may lie in its range while their ratios are absurd (a 100 km wide strip 1 nm above its plane):
-        // the L and C the formulas give must lie in the ranges a scenario could write directly.
-        Derived(m, node, p.L, Units.Dimension.InductancePerLength, "L");
-        Derived(m, node, p.C, Units.Dimension.CapacitancePerLength, "C");
+        var pairMode = ReadPairMode(m, spec);
+        bool frequency = false;
         if (m.Node("loss") is { } lossNode)
         {
             string? mode = (lossNode as YamlScalarNode)?.Value;
@@ -50,27 +47,77 @@ internal static class SegmentGeometry
             {
                 foreach (string k in new[] { "r", "g" })
                     if (m.Has(k)) throw m.Error(m.Node(k)!, m.Join(k), "with 'loss: frequency' the resistance and conductance come from the geometry: remove this key");
-                double er = spec.Dimensions.TryGetValue("er", out double e) ? e : 1;
-                double tand = spec.Dimensions.TryGetValue("tand", out double td) ? td : 0;
-                var loss = SegmentLoss.FromGeometry(p, er, tand)
-                    ?? throw m.Error(lossNode, m.Join("loss"), "the geometry has neither a conductor thickness nor a tand, so there is no loss to make frequency-dependent");
-                return new Segment(length, loss.SkinCorner is null ? 0 : p.RDc, p.L, 0, p.C) { Derived = p, Loss = loss };
+                frequency = true;
             }
-            if (mode != "constant")
+            else if (mode != "constant")
                 throw m.Error(lossNode, m.Join("loss"), "beside a geometry, expected 'frequency' (skin effect and wideband dielectric from the cross-section) or 'constant'");
         }
+        return Build(length, spec, pairMode, frequency, r, g,
+            why => m.Error(node, m.Join("geometry"), why), why => m.Error(m.Node("loss")!, m.Join("loss"), why));
+    }
+
+    /// <summary>
+    /// The geometry segment <paramref name="seg"/> with one of its inputs replaced (<c>geometry.width</c>, or its explicit
+    /// <c>r</c> or <c>g</c>) and everything derived again, as the loader derives it; errors start with <paramref name="path"/>.
+    /// </summary>
+    public static Segment Rebuild(Segment seg, KeyPath path, string key, double value)
+    {
+        var origin = seg.Derived!;
+        var inputs = new Dictionary<string, double>(origin.Inputs, StringComparer.OrdinalIgnoreCase);
+        double? r = origin.R, g = origin.G;
+        if (key == "r") r = value;
+        else if (key == "g") g = value;
+        else inputs[key] = value;
+        var spec = new CrossSectionSpec(origin.Kind, inputs) { Context = path.Text };
+        PairMode? mode = origin.Mode switch { "differential" => PairMode.Differential, "common" => PairMode.Common, _ => null };
+        return Build(seg.Length, spec, mode, origin.FrequencyLoss, r, g,
+            why => new InputException($"{path}: {why}"), why => new InputException($"{path}: {why}"));
+    }
+
+    /// <summary>The dimension of a geometry input of this segment's kind; null when the kind has no such key.</summary>
+    public static Units.Dimension? InputDimension(Segment seg, string key) =>
+        CrossSectionCatalog.Find(seg.Derived!.Kind, "geometry").AllKeys.FirstOrDefault(k => string.Equals(k.Name, key, StringComparison.OrdinalIgnoreCase))?.Dimension;
+
+    /// <summary>The keys a geometry of this segment's kind accepts.</summary>
+    public static IEnumerable<string> InputKeys(Segment seg) => CrossSectionCatalog.Find(seg.Derived!.Kind, "geometry").AllKeys.Select(k => k.Name);
+
+    static Segment Build(double length, CrossSectionSpec spec, PairMode? pairMode, bool frequency, double? r, double? g,
+        Func<string, Exception> geometryError, Func<string, Exception> lossError)
+    {
+        var p = pairMode is PairMode mode ? CrossSection.ComputePair(spec).For(mode) : CrossSection.Compute(spec);
+        // Each dimension may lie in its range while their ratios are absurd (a 100 km wide strip 1 nm above its plane):
+        // the L and C the formulas give must lie in the ranges a scenario could write directly.
+        Derived(geometryError, p.L, Units.Dimension.InductancePerLength, "L");
+        Derived(geometryError, p.C, Units.Dimension.CapacitancePerLength, "C");
+        var origin = Figures(p, spec, pairMode, frequency, r, g);
+        if (frequency)
+        {
+            double er = spec.Dimensions.TryGetValue("er", out double e) ? e : 1;
+            double tand = spec.Dimensions.TryGetValue("tand", out double td) ? td : 0;
+            var loss = SegmentLoss.FromGeometry(p, er, tand)
+                ?? throw lossError("the geometry has neither a conductor thickness nor a tand, so there is no loss to make frequency-dependent");
+            return new Segment(length, loss.SkinCorner is null ? 0 : p.RDc, p.L, 0, p.C) { Derived = origin, Loss = loss };
+        }
         double rDerived = p.FrequencyHz is { } f ? p.ResistanceAt(f) : p.RDc;
-        var seg = new Segment(length, r ?? rDerived, p.L, g ?? 0, p.C) { Derived = p };
+        var seg = new Segment(length, r ?? rDerived, p.L, g ?? 0, p.C) { Derived = origin };
         if (g is null && spec.Dimensions.TryGetValue("tand", out double tanD) && tanD > 0)
             seg = seg with { Loss = SegmentLoss.DielectricFromGeometry(p, spec.Dimensions.TryGetValue("er", out double er1) ? er1 : 1, tanD) };
         return seg;
     }
 
-    static void Derived(YamlMap m, YamlNode node, double value, Units.Dimension dim, string name)
+    /// <summary>What a segment keeps of its cross-section: the figures shown and warned about, as plain numbers.</summary>
+    static GeometryFigures Figures(LineParameters p, CrossSectionSpec spec, PairMode? mode, bool frequency, double? r, double? g) =>
+        new(p.Kind, p.Z0, p.EpsEff, p.FrequencyHz, p.Warnings)
+        {
+            Inputs = spec.Dimensions, FrequencyLoss = frequency, R = r, G = g,
+            Mode = mode switch { PairMode.Differential => "differential", PairMode.Common => "common", _ => null },
+        };
+
+    static void Derived(Func<string, Exception> error, double value, Units.Dimension dim, string name)
     {
         if (value > 0 && double.IsFinite(value) && Units.Quantity.InRange(value, dim)) return;
         string text = $"{name} = {value.ToString("G4", System.Globalization.CultureInfo.InvariantCulture)} {dim.SiUnit}";
-        throw m.Error(node, m.Join("geometry"), $"the cross-section's dimensions give {text}, outside the range accepted for {dim.Describe()} "
+        throw error($"the cross-section's dimensions give {text}, outside the range accepted for {dim.Describe()} "
             + $"({Units.Quantity.RangeText(dim)}); check its dimensions and units");
     }
 

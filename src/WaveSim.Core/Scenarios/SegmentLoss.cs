@@ -28,31 +28,57 @@ internal static class SegmentLoss
         string[] skin = ["r_dc", "skin_at", "r_skin"], diel = ["tand", "er", "at"];
         bool hasSkin = skin.Any(l.Has), hasDiel = diel.Any(l.Has);
         if (!hasSkin && !hasDiel) throw l.Error("give the conductor part (r_dc, skin_at, r_skin), the dielectric part (tand, er, at), or both");
-        var loss = new FrequencyLoss();
-        double r = seg.R, g = seg.G;
         if (hasSkin)
         {
             foreach (string k in skin)
                 if (!l.Has(k)) throw l.Error($"missing '{l.Join(k)}': the conductor part needs all of r_dc, skin_at and r_skin");
             if (rGiven) throw m.Error(m.Node("r")!, m.Join("r"), "give the resistance either as 'r' or in 'loss' (r_dc, r_skin), not both");
-            double rdc = l.Positive("r_dc", Dimension.ResistancePerLength)!.Value;
-            double f = l.Positive("skin_at", Dimension.Frequency)!.Value;
-            double rs = l.Positive("r_skin", Dimension.ResistancePerLength)!.Value;
-            if (!(rs > rdc * (1 + 1e-9)))
-                throw l.Error(l.Node("r_skin")!, l.Join("r_skin"), $"must be greater than r_dc ({Quantity.Format(rdc, "Ω")}/m): the skin effect raises the resistance");
-            loss = loss with { RDc = rdc, SkinCorner = FrequencyLoss.CornerFromResistance(rdc, rs, f) };
-            r = rdc;
         }
         if (hasDiel)
         {
             foreach (string k in diel)
                 if (!l.Has(k)) throw l.Error($"missing '{l.Join(k)}': the dielectric part needs all of tand, er and at");
             if (gGiven) throw m.Error(m.Node("g")!, m.Join("g"), "give the dielectric loss either as 'g' or in 'loss' (tand, er, at), not both");
-            double tand = l.NonNegative("tand", Dimension.Number)!.Value;
-            double er = l.Positive("er", Dimension.Number)!.Value;
-            double at = l.Positive("at", Dimension.Frequency)!.Value;
-            if (er < 1) throw l.Error(l.Node("er")!, l.Join("er"), $"must be at least 1 (got {er})");
-            if (tand >= 1) throw l.Error(l.Node("tand")!, l.Join("tand"), $"must be below 1 (got {tand})");
+        }
+        var inputs = new Dictionary<string, double>();
+        foreach (string k in Keys)
+            if (l.Has(k)) inputs[k] = (k == "tand" ? l.NonNegative(k) : l.Positive(k))!.Value;
+        return WithLoss(seg, inputs, (k, why) => l.Error(l.Node(k) ?? l.Node(Keys.First(l.Has))!, l.Join(k), why));
+    }
+
+    /// <summary>The segment with one value of its <c>loss</c> mapping replaced and the loss model fitted again; errors start with <paramref name="path"/>.</summary>
+    public static Segment Rebuild(Segment seg, KeyPath path, string key, double value)
+    {
+        var inputs = new Dictionary<string, double>(seg.Loss!.Inputs) { [key] = value };
+        return WithLoss(seg, inputs, (_, why) => new InputException($"{path}: {why}"));
+    }
+
+    /// <summary>
+    /// The segment with the loss model of <paramref name="inputs"/> (the <c>loss</c> mapping's values, SI): R becomes r_dc with a
+    /// conductor part, G becomes 0 with a dielectric part; otherwise the segment's constant R and G stay.
+    /// </summary>
+    static Segment WithLoss(Segment seg, IReadOnlyDictionary<string, double> inputs, Func<string, string, Exception> fail)
+    {
+        string[] skin = ["r_dc", "skin_at", "r_skin"], diel = ["tand", "er", "at"];
+        var loss = new FrequencyLoss { Inputs = inputs };
+        double r = seg.R, g = seg.G;
+        if (skin.Any(inputs.ContainsKey))
+        {
+            foreach (string k in skin)
+                if (!inputs.ContainsKey(k)) throw fail(k, $"missing 'loss.{k}': the conductor part needs all of r_dc, skin_at and r_skin");
+            double rdc = inputs["r_dc"], f = inputs["skin_at"], rs = inputs["r_skin"];
+            if (!(rs > rdc * (1 + 1e-9)))
+                throw fail("r_skin", $"must be greater than r_dc ({Quantity.Format(rdc, "Ω")}/m): the skin effect raises the resistance");
+            loss = loss with { RDc = rdc, SkinCorner = FrequencyLoss.CornerFromResistance(rdc, rs, f) };
+            r = rdc;
+        }
+        if (diel.Any(inputs.ContainsKey))
+        {
+            foreach (string k in diel)
+                if (!inputs.ContainsKey(k)) throw fail(k, $"missing 'loss.{k}': the dielectric part needs all of tand, er and at");
+            double tand = inputs["tand"], er = inputs["er"], at = inputs["at"];
+            if (er < 1) throw fail("er", ScenarioRules.AtLeastOne(er));
+            if (tand >= 1) throw fail("tand", $"must be below 1 (got {tand.ToString(System.Globalization.CultureInfo.InvariantCulture)})");
             loss = loss with { Dielectric = DjordjevicSarkar.Fit(er, tand, at), ReferencePermittivity = er, Filling = 1 };
             g = 0;
         }
@@ -68,7 +94,7 @@ internal static class SegmentLoss
         bool skin = p.RDc > 0 && p.SkinFactor > 0, diel = tand > 0;
         if (!skin && !diel) return null;
         var loss = new FrequencyLoss();
-        if (skin) loss = loss with { RDc = p.RDc, SkinCorner = FrequencyLoss.CornerFromGeometry(p) };
+        if (skin) loss = loss with { RDc = p.RDc, SkinCorner = SkinEffect.CornerFromGeometry(p) };
         if (diel) loss = loss with { Dielectric = DielectricFromGeometry(p, er, tand).Dielectric, ReferencePermittivity = er, Filling = Filling(p, er, tand) };
         return loss;
     }

@@ -54,21 +54,27 @@ internal sealed partial class YamlMap
     {
         string? text = Text(key);
         if (text is null) return null;
+        if (dims.Length == 0) dims = [.. TableDimensions(key)];
         try { return Units.Quantity.ParseAny(text, dims); }
         catch (UnitException ex) { throw Error(Node(key)!, Join(key), ex.Message); }
     }
 
+    /// <summary>The dimensions of <paramref name="key"/> in this mapping, from the one key table (<see cref="ScenarioKeys"/>).</summary>
+    IReadOnlyList<Dimension> TableDimensions(string key) =>
+        ScenarioKeys.Find(ScenarioKeys.ScopeOf(Path[(Path.LastIndexOf('.') + 1)..]), key)?.Dimensions
+        ?? throw new InvalidOperationException($"'{Join(key)}' is not in the key table");
+
     public double? Positive(string key, params Dimension[] dims)
     {
         double? v = Quantity(key, dims);
-        if (v is { } x && !(x > 0)) throw Error(Node(key)!, Join(key), $"must be greater than zero (got '{Text(key)}')");
+        if (v is { } x && !(x > 0)) throw Error(Node(key)!, Join(key), ScenarioRules.Positive(Text(key)!));
         return v;
     }
 
     public double? NonNegative(string key, params Dimension[] dims)
     {
         double? v = Quantity(key, dims);
-        if (v is { } x && x < 0) throw Error(Node(key)!, Join(key), $"must not be negative (got '{Text(key)}')");
+        if (v is { } x && x < 0) throw Error(Node(key)!, Join(key), ScenarioRules.NonNegative(Text(key)!));
         return v;
     }
 

@@ -48,17 +48,15 @@ public sealed partial record SweepAxis(string KeyPath, Dimension Dimension, IRea
     };
 
     /// <summary>The SI unit symbol of the values as the scenario reader accepts it (e.g. "ohm", "F", "s/m"; "" for plain numbers).</summary>
-    public string Unit => UnitOf(Dimension);
+    public string Unit => Scenarios.ScenarioKeys.Unit(Dimension);
 
     /// <summary>The SI unit symbol for axis labels (Ω instead of ohm).</summary>
     public string DisplayUnit => Unit == "ohm" ? "\u03a9" : Unit == "ohm/m" ? "\u03a9/m" : Unit;
 
     /// <summary>Value <paramref name="index"/> written as scenario text, round-trip exact (e.g. "4.7e-12 F").</summary>
-    public string Text(int index) => Dimension == Dimension.Percent
-        ? (Values[index] * 100).ToString("R", CultureInfo.InvariantCulture) + " %"
-        : Scenarios.ScenarioEditor.Format(Values[index], Unit);
+    public string Text(int index) => Scenarios.ScenarioKeys.Format(Values[index], Dimension);
 
-    /// <summary>Reads <c>KEY=RANGE</c> as given to <c>--vary</c>.</summary>
+    /// <summary>Reads <c>KEY=RANGE</c>.</summary>
     /// <exception cref="InputException">The text is not KEY=RANGE, the range is malformed, or its values mix dimensions.</exception>
     public static SweepAxis Parse(string text)
     {
@@ -129,17 +127,6 @@ public sealed partial record SweepAxis(string KeyPath, Dimension Dimension, IRea
         return (values, dim!.Value);
     }
 
-    static string UnitOf(Dimension d)
-    {
-        string num = d.Kind switch
-        {
-            BaseKind.Voltage => "V", BaseKind.Current => "A", BaseKind.Time => "s", BaseKind.Frequency => "Hz",
-            BaseKind.Resistance => "ohm", BaseKind.Conductance => "S", BaseKind.Capacitance => "F", BaseKind.Inductance => "H",
-            BaseKind.Length => "m", BaseKind.Power => "W", BaseKind.Velocity => "m/s", BaseKind.Percent => "%",
-            _ => "",
-        };
-        return d.PerLength ? num + "/m" : num;
-    }
-
-    static InputException Bad(string text, string why) => new($"--vary '{text}': {why}");
+    // The message names the text as given (KEY=RANGE); the command line adds its option.
+    static InputException Bad(string text, string why) => new($"'{text}': {why}");
 }

@@ -6,7 +6,7 @@ namespace WaveSim.Core.Sweeps;
 /// <summary>One point of a sweep: its index, the values of the varied keys and the variant scenario.</summary>
 /// <param name="Index">Position in sweep order (the first axis changes fastest).</param>
 /// <param name="Values">One SI value per axis, in axis order.</param>
-/// <param name="Scenario">The scenario with those values written in, read back like a file.</param>
+/// <param name="Scenario">The scenario with those values in, checked as a file would be.</param>
 public sealed record SweepPoint(int Index, IReadOnlyList<double> Values, Scenario Scenario)
 {
     /// <summary>The variant's grid plan, made when the point was checked against the limits (null when forced); its run reuses it.</summary>
@@ -14,8 +14,9 @@ public sealed record SweepPoint(int Index, IReadOnlyList<double> Values, Scenari
 }
 
 /// <summary>
-/// The grid of variants of a sweep: every combination of the axes' values, made with <see cref="ScenarioEditor.With"/>
-/// and checked (keys, units, plan limits) before anything is run.
+/// The grid of variants of a sweep: every combination of the axes' values, made by key path
+/// (<see cref="ScenarioValues.With(Scenario, IEnumerable{KeyChange})"/>) and checked (keys, units, ranges, plan limits) before
+/// anything is run. Messages name the keys; the command line adds its option.
 /// </summary>
 public sealed class SweepGrid
 {
@@ -36,33 +37,31 @@ public sealed class SweepGrid
     }
 
     /// <summary>Builds and validates every variant of <paramref name="scenario"/>.</summary>
-    /// <param name="scenario">A scenario read from text (its <see cref="Scenario.SourceText"/> is edited).</param>
+    /// <param name="scenario">The scenario to vary (left unchanged).</param>
     /// <param name="axes">One or more axes with distinct keys.</param>
     /// <param name="force">Accept points whose plan exceeds the memory or cell-update limits.</param>
     /// <exception cref="InputException">A key does not exist, a value has the wrong unit or is out of range, or a plan is too large.</exception>
     public static SweepGrid Build(Scenario scenario, IReadOnlyList<SweepAxis> axes, bool force = false)
     {
-        if (axes.Count == 0) throw new InputException("a sweep needs at least one --vary KEY=RANGE");
+        ArgumentNullException.ThrowIfNull(scenario);
+        ArgumentNullException.ThrowIfNull(axes);
+        if (axes.Count == 0) throw new InputException("a sweep needs at least one varied key (KEY=RANGE)");
         var dup = axes.GroupBy(a => a.KeyPath).FirstOrDefault(g => g.Count() > 1);
-        if (dup is not null) throw new InputException($"--vary: key '{dup.Key}' is varied twice");
+        if (dup is not null) throw new InputException($"{dup.Key}: the key is varied twice");
         long total = axes.Aggregate(1L, (n, a) => n * a.Values.Count);
-        if (total > MaxPoints) throw new InputException($"--vary: the grid has {total} points (limit {MaxPoints}); use fewer values");
+        if (total > MaxPoints) throw new InputException($"the grid has {total} points (limit {MaxPoints}); use fewer values");
 
-        // Each key alone at its first value: a missing key or a wrong unit is reported against the option that caused it.
-        foreach (var a in axes)
-        {
-            try { ScenarioEditor.With(scenario, [(a.KeyPath, a.Text(0))]); }
-            catch (InputException ex) { throw new InputException($"--vary {a.KeyPath}: {ex.Message}"); }
-        }
+        // Each key alone at its first value: a missing key or a wrong unit is reported against the key that caused it.
+        foreach (var a in axes) ScenarioValues.With(scenario, a.KeyPath, a.Values[0], a.Dimension);
         var points = new SweepPoint[total];
         for (int i = 0; i < total; i++)
         {
             var idx = Indices(axes, i);
-            var changes = axes.Select((a, k) => (a.KeyPath, a.Text(idx[k]))).ToArray();
+            var changes = axes.Select((a, k) => new KeyChange(a.KeyPath, a.Values[idx[k]], a.Dimension)).ToArray();
             Scenario v;
-            try { v = ScenarioEditor.With(scenario, changes); }
+            try { v = ScenarioValues.With(scenario, changes); }
             catch (InputException ex)
-            { throw new InputException($"sweep point {i} ({string.Join(", ", changes.Select(c => c.KeyPath + "=" + c.Item2))}): {ex.Message}"); }
+            { throw new InputException($"sweep point {i} ({string.Join(", ", changes.Select(c => c.KeyPath + "=" + ScenarioKeys.Format(c.Value, c.Dimension)))}): {ex.Message}"); }
             Solver.GridPlan? plan = null;
             if (!force)
             {

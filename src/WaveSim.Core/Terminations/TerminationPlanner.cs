@@ -23,8 +23,7 @@ public static class TerminationPlanner
         if (!(options.RcRoundTrips >= 1)) throw new InputException($"RC termination: R·C must be at least one round trip (got {options.RcRoundTrips})");
         var seg = s.Line.OfType<Segment>().First();
         double z0 = seg.Z0;
-        var plain = s with { SourceText = null };
-        return [AsDrawn(plain), None(plain), Series(plain, z0, options), Parallel(plain, z0, options), Thevenin(plain, z0, options), Rc(plain, z0, options)];
+        return [AsDrawn(s), None(s), Series(s, z0, options), Parallel(s, z0, options), Thevenin(s, z0, options), Rc(s, z0, options)];
     }
 
     /// <summary>The main line's one-way delay (sum of its segments), s.</summary>

@@ -54,8 +54,9 @@ public class FitCoverageTests(ITestOutputHelper output)
     {
         var sim = TestScenarios.Run(FitScenarios.Truth);
         // 10 % off the truth, so every fit has to walk (our choice).
-        var start = TestScenarios.Parse(FitScenarios.Truth.Replace("z0: 50 ohm", "z0: 55 ohm").Replace("c: 2 pF", "c: 1.8 pF"));
-        FreeParameter[] free = [FreeParameter.Parse(start, "line[0].segment.z0"), FreeParameter.Parse(start, "load.c")];
+        var document = TestScenarios.Document(FitScenarios.Truth.Replace("z0: 50 ohm", "z0: 55 ohm").Replace("c: 2 pF", "c: 1.8 pF"));
+        var start = document.Scenario;
+        FreeParameter[] free = [FreeParameter.Parse(document, "line[0].segment.z0"), FreeParameter.Parse(document, "load.c")];
         double[] truth = [TrueZ0, TrueC, Shift];
         var results = new ScenarioFitResult[Captures];
         Parallel.For(0, Captures, new ParallelOptions { MaxDegreeOfParallelism = Environment.ProcessorCount }, i =>

@@ -18,8 +18,9 @@ public class ScenarioFitAlignmentTests
         // 1 ps, 0.1 ohm, 5 ps and 1 mV are far below what a stuck fit leaves and far above the solver's rounding.
         var sim = TestScenarios.Run(FitScenarios.Truth);
         Capture capture = FitScenarios.Shifted(sim, 1.3e-9, 0, sim.Time.Length);
-        var start = TestScenarios.Parse(FitScenarios.Truth.Replace("z0: 50 ohm", "z0: 65 ohm").Replace("delay: 1 ns }", "delay: 0.7 ns }"));
-        FreeParameter[] free = [FreeParameter.Parse(start, "line[0].segment.z0"), FreeParameter.Parse(start, "line[0].segment.delay")];
+        var document = TestScenarios.Document(FitScenarios.Truth.Replace("z0: 50 ohm", "z0: 65 ohm").Replace("delay: 1 ns }", "delay: 0.7 ns }"));
+        var start = document.Scenario;
+        FreeParameter[] free = [FreeParameter.Parse(document, "line[0].segment.z0"), FreeParameter.Parse(document, "line[0].segment.delay")];
 
         ScenarioFitResult r = ScenarioFit.Run(start, capture, "rx", free, new ScenarioFitOptions { Align = align });
 

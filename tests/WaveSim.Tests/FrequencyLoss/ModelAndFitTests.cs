@@ -2,7 +2,7 @@ using System.Numerics;
 using WaveSim.Core.Lines;
 using WaveSim.Core.Model;
 using WaveSim.Tests.Lines;
-using LossModel = WaveSim.Core.Lines.FrequencyLoss;
+using LossModel = WaveSim.Core.Model.FrequencyLoss;
 
 namespace WaveSim.Tests.FrequencyLoss;
 
@@ -19,7 +19,7 @@ public class ModelAndFitTests
         // its internal resistance at high frequency (Pozar, Microwave Engineering, 4th ed. 2012, Sec. 1.7; Paul 2008).
         var p = CrossSection.Compute(new CrossSectionSpec("microstrip", new Dictionary<string, double>
         { ["width"] = 0.2e-3, ["height"] = 0.2e-3, ["thickness"] = 35e-6, ["er"] = 4.3, ["resistivity"] = 1.678e-8 }));
-        var loss = new LossModel { RDc = p.RDc, SkinCorner = LossModel.CornerFromGeometry(p) };
+        var loss = new LossModel { RDc = p.RDc, SkinCorner = SkinEffect.CornerFromGeometry(p) };
         Complex Zint(double f) => loss.RDc + loss.InternalExcess(J(f));
         Assert.Equal(2.397, Zint(0).Real, 0.001);
         // At 100 MHz (δ = 6.5 um against t = 35 um) the one-corner form lies 0.9 % above the asymptote Rs/w: tolerance 1 %.
@@ -72,7 +72,7 @@ public class ModelAndFitTests
         { ["width"] = 0.3e-3, ["height"] = 0.17e-3, ["thickness"] = 35e-6, ["er"] = 4.3, ["tand"] = 0.02 }));
         var loss = new LossModel
         {
-            RDc = p.RDc, SkinCorner = LossModel.CornerFromGeometry(p), Dielectric = DjordjevicSarkar.Fit(4.3, 0.02, 1e9),
+            RDc = p.RDc, SkinCorner = SkinEffect.CornerFromGeometry(p), Dielectric = DjordjevicSarkar.Fit(4.3, 0.02, 1e9),
             ReferencePermittivity = 4.3, Filling = p.LossTangent * p.EpsEff / (0.02 * 4.3),
         };
         var fit = RationalLoss.Fit(loss, p.RDc, p.L, 0, p.C, fLow, fHigh);

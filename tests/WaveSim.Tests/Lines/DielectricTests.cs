@@ -1,4 +1,5 @@
 using WaveSim.Core.Lines;
+using WaveSim.Core.Model;
 
 namespace WaveSim.Tests.Lines;
 

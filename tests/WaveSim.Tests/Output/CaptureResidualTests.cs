@@ -16,7 +16,7 @@ public class CaptureResidualTests
     static readonly double[] Cap = Sim.Select(v => v + 0.1).ToArray();
 
     static ScenarioFitResult Fit(double[] captured, double[] fitted) =>
-        new([], 0, double.NaN, false, 0, 0, 1, true, "", TestScenarios.Parse(Fitting.FitScenarios.Truth), T, captured, Sim, fitted,
+        new([], 0, double.NaN, false, 0, 0, 1, true, TestScenarios.Parse(Fitting.FitScenarios.Truth), T, captured, Sim, fitted,
             new UncertaintyBasis(T.Length, 1, 0, 0, T.Length, 1));
 
     static CaptureComparisonResult Comparison() =>

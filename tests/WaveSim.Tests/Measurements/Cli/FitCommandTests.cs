@@ -74,7 +74,7 @@ public class FitCommandTests
     public void Bounds_with_units_and_an_absent_key_start_at_the_geometric_mean()
     {
         // Parsing only (no fit): sqrt(0.5 pF x 5 pF) = 1.5811 pF; default bounds are [start/3, start*3].
-        var s = TestScenarios.Parse(Truth.Replace("load: { r: 150 ohm, c: 2 pF }", "load: { r: 150 ohm }"));
+        var s = TestScenarios.Document(Truth.Replace("load: { r: 150 ohm, c: 2 pF }", "load: { r: 150 ohm }"));
         var c = Core.Fitting.FreeParameter.Parse(s, "load.c=0.5pF..5pF");
         Assert.Equal(Math.Sqrt(0.5e-12 * 5e-12), c.Start, 1e-24);
         Assert.Equal("F", c.Unit);

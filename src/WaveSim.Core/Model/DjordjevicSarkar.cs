@@ -1,6 +1,6 @@
 using System.Numerics;
 
-namespace WaveSim.Core.Lines;
+namespace WaveSim.Core.Model;
 
 /// <summary>
 /// The Djordjevic-Sarkar wideband (causal) dielectric model, fitted from er and tan d at one frequency.

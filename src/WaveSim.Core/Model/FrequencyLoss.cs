@@ -1,6 +1,7 @@
+using System.Collections.Immutable;
 using System.Numerics;
 
-namespace WaveSim.Core.Lines;
+namespace WaveSim.Core.Model;
 
 /// <summary>
 /// Frequency-dependent loss of a line segment as exact causal functions of the complex frequency s: the conductor's internal
@@ -16,13 +17,23 @@ namespace WaveSim.Core.Lines;
 /// <para>Dielectric: the Djordjevic-Sarkar wideband model (Djordjevic, Biljic, Likar-Smiljanic, Sarkar, IEEE Trans. EMC
 /// 43(4):662-667, 2001), ε(s) = ε∞ + Δε/(m2 − m1)·log10((ω2 + s)/(ω1 + s)), causal by construction. On a partly filled line
 /// (microstrip) the substrate fills a fraction q of the field: ε_eff(s) = 1 + q·(ε(s) − 1), the same filling factor that
-/// gives <see cref="LineParameters.LossTangent"/> = tan δ·er·q/ε_eff; κ(s) = ε_eff(s)/ε_eff,ref, so that at the reference
+/// gives a cross-section its effective loss tangent tan δ·er·q/ε_eff; κ(s) = ε_eff(s)/ε_eff,ref, so that at the reference
 /// frequency Y = jωC0 + ωC0·tan δ_eff, as in the constant-G model.</para>
 /// </remarks>
 public sealed record FrequencyLoss
 {
     /// <summary>Reference frequency of a geometry's er and tan δ when it gives no <c>at</c>, Hz (a common reference for board materials; common practice, no source).</summary>
     public const double DefaultReferenceFrequency = 1e9;
+
+    /// <summary>
+    /// The values the loss was given by (r_dc, skin_at, r_skin, tand, er, at; SI, by name), so a variant can fit it again; empty
+    /// for a cross-section's loss, which its geometry's inputs give.
+    /// </summary>
+    public IReadOnlyDictionary<string, double> Inputs
+    {
+        get;
+        init => field = value.ToImmutableDictionary();
+    } = ImmutableDictionary<string, double>.Empty;
 
     /// <summary>DC resistance per length, ohm/m; used only when <see cref="SkinCorner"/> is given.</summary>
     public double RDc { get; init; }
@@ -45,11 +56,6 @@ public sealed record FrequencyLoss
         double rho = rAt / rDc;
         return 2 * Math.PI * frequency / (2 * rho * Math.Sqrt(rho * rho - 1));
     }
-
-    /// <summary>ω0 from a cross-section, matching R_dc·√(1 + s/ω0) to Rs(f)·F at high frequency: ω0 = R_dc²/(F²μ0ρ).</summary>
-    /// <param name="p">The cross-section's parameters, with R_dc &gt; 0 and a skin factor &gt; 0.</param>
-    public static double CornerFromGeometry(LineParameters p) =>
-        p.RDc * p.RDc / (p.SkinFactor * p.SkinFactor * LineConstants.Mu0 * p.Resistivity);
 
     /// <summary>Z_int(s) − R_dc = R_dc·(√(1 + s/ω0) − 1), ohm/m; 0 without a conductor model.</summary>
     public Complex InternalExcess(Complex s) =>
