@@ -57,13 +57,17 @@ public static class BufferCharts
             }
             var tables = corners.Select(c => SwitchingCoefficients.For(model, c, rising)).ToList();
             var ks = new List<PlotSeries>();
+            bool openDrain = model.Type == BufferModelType.OpenDrain;
             foreach (SwitchingTable t in tables)
             {
-                if (model.Type != BufferModelType.OpenDrain) ks.Add(new PlotSeries($"Ku {Name(t.Corner)}", t.Time, t.Ku));
-                ks.Add(new PlotSeries($"Kd {Name(t.Corner)}", t.Time, t.Kd) { Look = TraceLook.Dashed });
+                if (!openDrain) ks.Add(new PlotSeries($"Ku {Name(t.Corner)}", t.Time, t.Ku));
+                ks.Add(new PlotSeries($"Kd {Name(t.Corner)}", t.Time, t.Kd) { Look = openDrain ? TraceLook.Line : TraceLook.Dashed });
             }
-            panels.Add(new ChartPanel($"{edge} Ku, Kd", "", ks));
+            panels.Add(new ChartPanel(openDrain ? $"{edge} Kd" : $"{edge} Ku, Kd", "", ks));
         }
+        // A ramp ends long before a waveform does; every trace is drawn on to the common end at its final value, as it holds.
+        double end = panels.SelectMany(p => p.Series).Max(s => s.X[^1]);
+        panels = panels.Select(p => p with { Series = p.Series.Select(s => Hold(s, end)).ToList() }).ToList();
         return new ChartSpec($"{model.Name} ({model.TypeName}): switching", "Time from the start of the edge", "s", panels);
     }
 
@@ -72,6 +76,9 @@ public static class BufferCharts
 
     /// <summary>The switching picture as PNG bytes (1200 × 1000 px).</summary>
     public static byte[] SwitchingPng(BufferModel model, IReadOnlyList<Corner> corners) => XyChart.RenderPng(SwitchingChart(model, corners), 1200, 1000);
+
+    static PlotSeries Hold(PlotSeries s, double end) =>
+        s.X[^1] >= end ? s : s with { X = [.. s.X, end], Y = [.. s.Y, s.Y[^1]] };
 
     static string Name(Corner c) => c.ToString().ToLowerInvariant();
 }
