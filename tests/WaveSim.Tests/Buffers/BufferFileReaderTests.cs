@@ -87,7 +87,7 @@ public class BufferFileReaderTests
     [Fact]
     public void Pullup_and_power_clamp_are_mirrored_about_their_reference_and_the_others_shifted()
     {
-        // The standard's convention (IBIS 5.0, from memory): [Pullup] and [POWER Clamp] are tabulated against
+        // The standard's convention (IBIS 5.0, from memory; ReferenceData/buffers.md §1): [Pullup] and [POWER Clamp] are tabulated against
         // reference − pin voltage; [Pulldown] and [GND Clamp] against pin voltage − reference. Currents are into the pin.
         BufferModel m = Read().Model("pp_io");
         BufferCurves typ = m.Curves(Corner.Typ);

@@ -3,7 +3,7 @@ using WaveSim.Core.Buffers;
 namespace WaveSim.Tests.Buffers;
 
 /// <summary>
-/// Numbers as the IBIS standard writes them (ANSI/EIA-656-B, "numerical values" rule; from memory): a decimal number with an
+/// Numbers as the IBIS standard writes them (ANSI/EIA-656-B, "numerical values" rule; from memory; ReferenceData/buffers.md §1): a decimal number with an
 /// optional exponent, an optional case-sensitive scale suffix T G M k m u n p f, and trailing unit letters that are ignored.
 /// </summary>
 public class BufferNumberTests

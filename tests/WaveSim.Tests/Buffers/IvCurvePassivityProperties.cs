@@ -6,7 +6,7 @@ namespace WaveSim.Tests.Buffers;
 
 /// <summary>
 /// Passivity of random I-V tables, P = V·I ≥ 0 (a part that never delivers energy; the definition of a passive one-port,
-/// e.g. Desoer &amp; Kuh, Basic Circuit Theory, ch. on energy and passivity; from memory).
+/// e.g. Desoer &amp; Kuh, Basic Circuit Theory, ch. on energy and passivity; from memory; ReferenceData/buffers.md §5).
 /// </summary>
 /// <remarks>
 /// What is checked, precisely. The generated tables hold the point (0, 0); points right of it have V &gt; 0 and I ≥ 0, points

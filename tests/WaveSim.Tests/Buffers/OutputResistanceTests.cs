@@ -20,7 +20,7 @@ public class OutputResistanceTests
         // A MOSFET in triode near V_DS = 0: I = k((V_GS − V_t)V_DS − V_DS²/2), so r_DS = 1/(k (V_GS − V_t)) (Sedra & Smith,
         // Microelectronic Circuits, MOSFET triode region; from memory). With the channel conducting backwards below 0
         // (gate drive V_GS − V_DS), I(−a) = −k((V_GS − V_t)a + a²/2), and the mean of the slopes either side of 0 on a
-        // symmetric grid is the exact derivative k (V_GS − V_t) (derived).
+        // symmetric grid is the exact derivative k (V_GS − V_t) (derived; ReferenceData/buffers.md §4).
         const double k = 0.02, vgs = 3.3, vt = 0.6;
         double Law(double v) => v >= 0 ? k * ((vgs - vt) * v - v * v / 2) : -k * ((vgs - vt) * -v + v * v / 2);
         var table = ResistiveDriver.Table("[Pulldown]", Law);

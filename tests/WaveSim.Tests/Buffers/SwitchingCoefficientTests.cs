@@ -19,7 +19,7 @@ public class SwitchingCoefficientTests
     /// <summary>
     /// The pin voltage of a resistive driver with coefficients ku, kd and a clamp R_c into R_f to V_f, with no capacitance:
     /// Kirchhoff's current law at the pin with Ohm's law, (V_f − V)/R_f = ku (V − Vcc)/R_u + kd V/R_d + V/R_c, solved for V
-    /// (derived here).
+    /// (derived here; ReferenceData/buffers.md §2).
     /// </summary>
     static double Pin(double ku, double kd, double vf, double ru = Ru) =>
         (vf / Rf + ku * Vcc / ru) / (1 / Rf + ku / ru + kd / Rd + 1 / Rc);
@@ -69,7 +69,7 @@ public class SwitchingCoefficientTests
     public void With_C_comp_and_C_fixture_the_coefficients_of_an_integrated_edge_come_back()
     {
         // The waveforms are integrated from (C_comp + C_f) dV/dt = (V_f − V)/R_f − Ku (V − Vcc)/R_u − Kd V/R_d − V/R_c with
-        // classical fourth-order Runge-Kutta (Press et al., Numerical Recipes, 3rd ed., §17.1) at 0.1 ps steps, Ku a raised
+        // classical fourth-order Runge-Kutta (Press et al., Numerical Recipes, 3rd ed., §17.1; ReferenceData/buffers.md §3) at 0.1 ps steps, Ku a raised
         // cosine over 1 ns from 0.2 ns and Kd = 1 − Ku, then sampled every 10 ps. The method's dV/dt is a central difference
         // on those samples, whose error is h²/6·|V'''| (Numerical Recipes §5.7): with |V'''| ≤ Vcc (π/1 ns)³ ≈ 1e29 V/s³ and
         // h = 10 ps that is 1.7e6 V/s, times C ≤ 4 pF, 7e-6 A; divided by the smallest current a unit of K moves through a
@@ -119,7 +119,7 @@ public class SwitchingCoefficientTests
     [Fact]
     public void The_ramp_rule_blends_over_the_20_80_time_divided_by_0_6()
     {
-        // Common practice, no source: the 20-80 % time covers 60 % of the swing, so the whole blend takes dt / 0.6.
+        // Common practice, no source (ReferenceData/buffers.md §6): the 20-80 % time covers 60 % of the swing, so the whole blend takes dt / 0.6.
         BufferModel m = ResistiveDriver.Model(Ru, Rd);
         SwitchingTable rise = SwitchingCoefficients.For(m, Corner.Typ, rising: true);
         Assert.Equal(SwitchingMethod.Ramp, rise.Method);
@@ -150,7 +150,7 @@ public class SwitchingCoefficientTests
     [Fact]
     public void An_open_drain_gets_its_pulldown_coefficient_from_one_waveform()
     {
-        // KCL at the pin with the pulldown alone into R_f to Vcc: (Vcc − V)/R_f = Kd V/R_d, so V = Vcc/(1 + Kd R_f/R_d) (derived).
+        // KCL at the pin with the pulldown alone into R_f to Vcc: (Vcc − V)/R_f = Kd V/R_d, so V = Vcc/(1 + Kd R_f/R_d) (derived; ReferenceData/buffers.md §2).
         const double T = 0.8e-9;
         double[] t = Enumerable.Range(0, 41).Select(k => k * 0.025e-9).ToArray();
         double Kd(double x) => 1 - KuOf(x, T);
