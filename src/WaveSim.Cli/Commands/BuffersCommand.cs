@@ -39,7 +39,7 @@ public static class BuffersCommand
             {
                 var mc = corners.Where(m.HasCorner).ToList();
                 string stem = Unique(SafeName(m.Name), used);
-                pictures.Add((stem + "-iv.png", BufferCharts.IvPng(m, mc)));
+                if (m.HasIvTables) pictures.Add((stem + "-iv.png", BufferCharts.IvPng(m, mc)));
                 if (m.Drives) pictures.Add((stem + "-switching.png", BufferCharts.SwitchingPng(m, mc)));
             }
             var summary = BufferSummary.Json(f, models, corners);

@@ -82,6 +82,11 @@ public sealed record BufferModel
     /// <summary>[Falling Waveform] tables in file order.</summary>
     public IReadOnlyList<SwitchingWaveform> FallingWaveforms { get; init; } = [];
 
+    /// <summary>True when the model has an I-V table its type uses (clamps always; the pulldown, and the pullup of a
+    /// push-pull driver, when it drives). A receiver may have none: C_comp only.</summary>
+    public bool HasIvTables => GndClamp is not null || PowerClamp is not null
+        || (Drives && (Pulldown is not null || (Type != BufferModelType.OpenDrain && Pullup is not null)));
+
     /// <summary>True for every type that drives the pin (all but Input).</summary>
     public bool Drives => Type != BufferModelType.Input;
 

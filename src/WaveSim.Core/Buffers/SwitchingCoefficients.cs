@@ -31,6 +31,9 @@ public static class SwitchingCoefficients
         if (!model.Drives)
             throw new InputException($"{model.Source}:{model.Line}: [Model] {model.Name}: is an Input model; it does not switch");
         BufferCurves curves = model.Curves(corner);
+        if (curves.Pulldown is null || (model.Type != BufferModelType.OpenDrain && curves.Pullup is null))
+            throw new InputException($"{model.Source}:{model.Line}: [Model] {model.Name}: Model_type {model.TypeName} needs " +
+                                     (model.Type == BufferModelType.OpenDrain ? "[Pulldown]" : "[Pullup] and [Pulldown]") + " to switch");
         IReadOnlyList<SwitchingWaveform> waves = rising ? model.RisingWaveforms : model.FallingWaveforms;
         string edge = rising ? "rising" : "falling";
         string keyword = rising ? "[Rising Waveform]" : "[Falling Waveform]";

@@ -66,6 +66,19 @@ public class BuffersCommandTests
     }
 
     [Fact]
+    public void A_receiver_with_no_tables_is_listed_without_a_picture()
+    {
+        using var cli = new CliRunner();
+        string file = cli.Write("bare.ibs", "[IBIS Ver] 5.0\n[Component] X\n[Pin] signal_name model_name\n1 A bare\n" +
+                                            "[Model] bare\nModel_type Input\nC_comp 1pF NA NA\n[End]\n");
+        string dir = cli.PathOf("out");
+        var (code, stdout, stderr) = CliRunner.Run("buffers", file, "--out", dir);
+        Assert.True(code == 0, stderr);
+        Assert.Contains("model bare: Input, corners typ, C_comp 1 pF", stdout);
+        Assert.Equal<string>(["buffers.json"], Directory.GetFiles(dir).Select(f => Path.GetFileName(f)!).ToArray());
+    }
+
+    [Fact]
     public void A_model_not_in_the_file_lists_the_models_and_writes_nothing()
     {
         using var cli = new CliRunner();

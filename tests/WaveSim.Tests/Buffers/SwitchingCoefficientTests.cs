@@ -177,6 +177,14 @@ public class SwitchingCoefficientTests
     }
 
     [Fact]
+    public void A_driver_without_its_tables_is_refused_not_dereferenced()
+    {
+        BufferModel m = ResistiveDriver.Model(Ru, Rd) with { Pullup = null };
+        Assert.Equal("resistive.ibs:1: [Model] resistive: Model_type Output needs [Pullup] and [Pulldown] to switch",
+            Assert.Throws<InputException>(() => SwitchingCoefficients.For(m, Corner.Typ, true)).Message);
+    }
+
+    [Fact]
     public void A_corner_the_model_lacks_is_refused()
     {
         BufferModel m = ResistiveDriver.Model(Ru, Rd, ramp: new BufferRamp(new RampRate(new CornerValue(1, null, null), new CornerValue(1e-9, null, null)),
