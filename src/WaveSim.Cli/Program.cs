@@ -18,6 +18,7 @@ public static class Program
         TdrCommand.Create(),
         ReportCommand.Create(),
         XSectionCommand.Create(),
+        BuffersCommand.Create(),
         BenchCommand.Create(),
         AboutCommand.Create(),
     };

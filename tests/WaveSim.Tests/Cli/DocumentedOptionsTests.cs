@@ -23,6 +23,7 @@ public partial class DocumentedOptionsTests
         ["tdr"] = ["docs/measurements.md"],
         ["report"] = ["docs/report.md"],
         ["xsection"] = ["docs/xsection.md"],
+        ["buffers"] = ["docs/buffers.md"],
         ["bench"] = ["docs/PERFORMANCE.md"],
         ["about"] = [],
     };
