@@ -30,7 +30,7 @@ public static class ReportCommand
             string path = pr.GetValue(scenario)!;
             double band = CommonOptions.ParseBand(pr.GetValue(settle)!);
             var s = CommonOptions.Load(path, pr.InvocationConfiguration.Error);
-            string text = File.ReadAllText(path);
+            string text = s.SourceText ?? Core.Io.BoundedText.Read(path, Core.Io.InputLimits.ScenarioBytes, "scenario");
             var options = HtmlReport.RunOptions(s, pr.GetValue(force));
             SimulationResult result;
             using (var bar = new ProgressBar(pr.InvocationConfiguration.Error, "simulating"))
