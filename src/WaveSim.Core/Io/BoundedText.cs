@@ -102,11 +102,11 @@ public static class BoundedText
         ArgumentNullException.ThrowIfNull(path);
         ArgumentOutOfRangeException.ThrowIfNegative(limitBytes);
         if (Directory.Exists(path))
-            throw new FileReadException(label, $"is a folder, not a {what} file");
+            throw new FileReadException(label, $"a folder, not a {what} file");
         if (!File.Exists(path))
             throw new FileReadException(label, "file not found");
         if (FileKind.NotRegular(path) is { } kind)
-            throw new FileReadException(label, $"is {kind}, not a {what} file; give a regular file");
+            throw new FileReadException(label, $"not a regular file but {kind}; a {what} is read from a regular file");
         FileStream stream;
         try
         {

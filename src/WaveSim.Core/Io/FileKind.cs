@@ -41,7 +41,7 @@ internal static partial class FileKind
             0x2000 => "a character device",
             0x6000 => "a block device",
             0xC000 => "a socket",
-            _ => "not a regular file",
+            _ => "a special file",
         };
     }
 }
