@@ -220,15 +220,21 @@ public static partial class CaptureReader
             string[] fields = Split(text, _delimiter);
             if (fields.All(f => f.Length == 0))
                 return;
-            if (!IsNumericRow(fields) && Delimiters.FirstOrDefault(d => d != _delimiter && IsNumericRow(Split(text, d))) is var other and not '\0')
-                throw Mixed(line, other, _blockLine, _delimiter);
             int needed = Math.Max(_timeCol, _voltCol) + 1;
-            if (fields.Length < needed)
-                throw new InputException(
-                    $"{name} line {line}: {fields.Length} field(s), but column {needed} is needed (the data block has {_fieldCount})");
-
-            double? t = Cell(fields[_timeCol], line, _timeCol, _delimiter, name);
-            double? v = Cell(fields[_voltCol], line, _voltCol, _delimiter, name);
+            double? t, v;
+            try
+            {
+                if (fields.Length < needed)
+                    throw new InputException(
+                        $"{name} line {line}: {fields.Length} field(s), but column {needed} is needed (the data block has {_fieldCount})");
+                t = Cell(fields[_timeCol], line, _timeCol, _delimiter, name);
+                v = Cell(fields[_voltCol], line, _voltCol, _delimiter, name);
+            }
+            catch (InputException) when (OtherDelimiter(text) is char other)
+            {
+                // A row that does not read in the block's delimiter but does in another: the file mixes them.
+                throw Mixed(line, other, _blockLine, _delimiter);
+            }
             if (t is null || v is null)
             {
                 if (_dropped++ < DroppedLinesShown) _droppedShown.Add(line);
@@ -246,6 +252,9 @@ public static partial class CaptureReader
             _time.Add(Sample(t.Value * options.TimeScale, Units.Dimension.Time, "time", name, line));
             _volts.Add(Sample(v.Value * options.VoltScale, Units.Dimension.Voltage, "voltage", name, line));
         }
+
+        char? OtherDelimiter(string text) =>
+            Delimiters.Where(d => d != _delimiter).Select(d => (char?)d).FirstOrDefault(d => IsNumericRow(Split(text, d!.Value)));
 
         InputException Mixed(int line, char found, int blockLine, char block) => new(
             $"{name} line {line}: numbers separated by {Describe(found)}, but the data block from line {blockLine} is separated by "
