@@ -31,15 +31,20 @@ public static class WaveformComparison
     {
         Validate(simT, simV, "simulation");
         Validate(capT, capV, "capture");
-        double dt = step ?? Math.Min(MedianStep(simT), MedianStep(capT));
+        double simStep = MedianStep(simT), capStep = MedianStep(capT);
+        double dt = step ?? Math.Min(simStep, capStep);
         if (!(dt > 0) || !double.IsFinite(dt))
             throw new InputException($"comparison step must be a positive time, got {Text(dt)} s");
+        // Advice the user can follow: say which record sets the step (no command has a step option).
+        string tooFine = step is not null ? "pass a coarser step"
+            : simStep <= capStep ? "the simulation's sample interval sets the step: set a coarser simulation.output_step"
+            : "the capture's sample interval sets the step: compare a capture sampled less finely (every k-th row) or a shorter one";
 
         double offset = mode switch
         {
             AlignMode.None => 0.0,
             AlignMode.Edge50 => Crossing50Of(simT, simV, "simulation") - Crossing50Of(capT, capV, "capture"),
-            AlignMode.CrossCorrelation => CorrelationOffset(simT, simV, capT, capV, dt),
+            AlignMode.CrossCorrelation => CorrelationOffset(simT, simV, capT, capV, dt, tooFine),
             _ => throw new ArgumentOutOfRangeException(nameof(mode), mode, "Unknown alignment mode."),
         };
 
@@ -48,7 +53,7 @@ public static class WaveformComparison
         if (!(t1 > t0))
             throw new InputException(
                 $"the capture and the simulation do not overlap in time after alignment (capture shifted by {Text(offset)} s)");
-        int n = GridCount(t1 - t0, dt);
+        int n = GridCount(t1 - t0, dt, tooFine);
         if (n < 2)
             throw new InputException($"the overlap of capture and simulation ({Text(t1 - t0)} s) is shorter than one grid step ({Text(dt)} s)");
 
@@ -164,10 +169,10 @@ public static class WaveformComparison
     /// product (MathNet <see cref="Fourier"/>), the overlap sums Σa, Σa², Σb, Σb² from running totals (the scheme of
     /// J. P. Lewis, "Fast normalized cross-correlation", Vision Interface 1995; from memory).
     /// </remarks>
-    static double CorrelationOffset(double[] simT, double[] simV, double[] capT, double[] capV, double dt)
+    static double CorrelationOffset(double[] simT, double[] simV, double[] capT, double[] capV, double dt, string tooFine)
     {
-        double[] a = Resample(simT, simV, dt);
-        double[] b = Resample(capT, capV, dt);
+        double[] a = Resample(simT, simV, dt, tooFine);
+        double[] b = Resample(capT, capV, dt, tooFine);
         int ns = a.Length, nc = b.Length;
         RemoveMean(a);   // keeps the running sums well conditioned; the coefficient does not depend on it
         RemoveMean(b);
@@ -234,9 +239,9 @@ public static class WaveformComparison
         return p;
     }
 
-    static double[] Resample(double[] t, double[] v, double dt)
+    static double[] Resample(double[] t, double[] v, double dt, string tooFine)
     {
-        int n = GridCount(t[^1] - t[0], dt);
+        int n = GridCount(t[^1] - t[0], dt, tooFine);
         var spline = LinearSpline.InterpolateSorted(t, v);
         var y = new double[n];
         for (int k = 0; k < n; k++)
@@ -244,12 +249,12 @@ public static class WaveformComparison
         return y;
     }
 
-    static int GridCount(double span, double dt)
+    static int GridCount(double span, double dt, string tooFine)
     {
         double count = Math.Floor(span / dt * (1 + 1e-12)) + 1;
         if (count > MaxGridPoints)
             throw new InputException(
-                $"the comparison grid would have {count:0} points (step {Text(dt)} s over {Text(span)} s); give a coarser step (at most {MaxGridPoints} points)");
+                $"the comparison grid would have {count:0} points (step {Text(dt)} s over {Text(span)} s), more than the {MaxGridPoints} it may hold; {tooFine}");
         return (int)count;
     }
 

@@ -1,4 +1,5 @@
 using System.Globalization;
+using WaveSim.Core.Io;
 using WaveSim.Core.Model;
 using WaveSim.Core.Units;
 using YamlDotNet.Core;
@@ -54,9 +55,8 @@ public static class ScenarioLoader
     public static ScenarioDocument Read(string path)
     {
         string text;
-        try { text = System.IO.File.ReadAllText(path); }
-        catch (Exception ex) when (ex is IOException or UnauthorizedAccessException)
-        { throw new ScenarioException($"{path}: cannot read the scenario ({ex.Message})"); }
+        try { text = BoundedText.Read(path, InputLimits.ScenarioBytes, "scenario"); }
+        catch (FileReadException ex) { throw new ScenarioException(ex.Message); }
         return ReadText(text, path);
     }
 
@@ -86,7 +86,7 @@ public static class ScenarioLoader
         var sim = ReadSimulation(top);
         var scenario = new Scenario
         {
-            Title = top.Text("title") ?? System.IO.Path.GetFileNameWithoutExtension(file),
+            Title = EchoText.Clean(top.Text("title") ?? System.IO.Path.GetFileNameWithoutExtension(file)),
             Source = source,
             Line = line,
             Load = load,
@@ -190,31 +190,33 @@ public static class ScenarioLoader
         string rel = s.Text("file")!;
         string dir = System.IO.Path.GetDirectoryName(System.IO.Path.GetFullPath(file)) ?? ".";
         string path = System.IO.Path.Combine(dir, rel);
-        string[] lines;
-        try { lines = System.IO.File.ReadAllLines(path); }
-        catch (Exception ex) when (ex is IOException or UnauthorizedAccessException)
-        { throw s.Error(s.Node("file")!, "source.file", $"cannot read '{rel}' ({ex.Message})"); }
         var t = new List<double>(); var v = new List<double>();
-        for (int i = 0; i < lines.Length; i++)
+        int i = -1;
+        try
         {
-            string l = lines[i].Trim();
-            if (l.Length == 0) continue;
-            var f = l.Split(',');
-            bool ok = f.Length >= 2 && double.TryParse(f[0], NumberStyles.Float, CultureInfo.InvariantCulture, out double ti)
-                      & double.TryParse(f[1], NumberStyles.Float, CultureInfo.InvariantCulture, out double vi);
-            if (!ok)
+            foreach (string line in BoundedText.Lines(path, InputLimits.TableBytes, "waveform table", InputLimits.LineChars, rel))
             {
-                if (t.Count == 0 && i == 0) continue; // header row
-                throw new ScenarioException($"{path}:{i + 1}: expected 'time_s,volts_V' numbers, found '{l}'");
+                i++;
+                string l = line.Trim();
+                if (l.Length == 0) continue;
+                var f = l.Split(',');
+                bool ok = f.Length >= 2 && double.TryParse(f[0], NumberStyles.Float, CultureInfo.InvariantCulture, out double ti)
+                          & double.TryParse(f[1], NumberStyles.Float, CultureInfo.InvariantCulture, out double vi);
+                if (!ok)
+                {
+                    if (t.Count == 0 && i == 0) continue; // header row
+                    throw new ScenarioException($"{path}:{i + 1}: expected 'time_s,volts_V' numbers, found '{EchoText.Excerpt(l)}'");
+                }
+                double.TryParse(f[0], NumberStyles.Float, CultureInfo.InvariantCulture, out ti);
+                double.TryParse(f[1], NumberStyles.Float, CultureInfo.InvariantCulture, out vi);
+                if (!double.IsFinite(ti) || !double.IsFinite(vi))
+                    throw new ScenarioException($"{path}:{i + 1}: time and voltage must be finite numbers, found '{EchoText.Excerpt(l)}'");
+                if (t.Count > 0 && ti <= t[^1])
+                    throw new ScenarioException($"{path}:{i + 1}: time must increase from row to row ({ti} after {t[^1]})");
+                t.Add(ti); v.Add(vi);
             }
-            double.TryParse(f[0], NumberStyles.Float, CultureInfo.InvariantCulture, out ti);
-            double.TryParse(f[1], NumberStyles.Float, CultureInfo.InvariantCulture, out vi);
-            if (!double.IsFinite(ti) || !double.IsFinite(vi))
-                throw new ScenarioException($"{path}:{i + 1}: time and voltage must be finite numbers, found '{l}'");
-            if (t.Count > 0 && ti <= t[^1])
-                throw new ScenarioException($"{path}:{i + 1}: time must increase from row to row ({ti} after {t[^1]})");
-            t.Add(ti); v.Add(vi);
         }
+        catch (FileReadException ex) { throw s.Error(s.Node("file")!, "source.file", $"'{EchoText.Excerpt(rel)}': {ex.Reason}"); }
         if (t.Count < 2) throw s.Error(s.Node("file")!, "source.file", $"'{rel}' holds fewer than two samples");
         return (t.ToArray(), v.ToArray());
     }

@@ -154,4 +154,80 @@ public class HostileInputTests
         Assert.Contains("1e6 V", err, StringComparison.Ordinal);
         Assert.False(Directory.Exists(cli.PathOf("out")));
     }
+
+    // An ANSI escape in the title reached the terminal raw (here: red text, then a clear-screen); the title is printed clean.
+    [Fact]
+    public void Control_characters_in_the_title_never_reach_the_terminal()
+    {
+        using var cli = new CliRunner();
+        string yaml = Scenario().Replace("title: hostile", "title: \"\\e[31mred\\e[2J\\u202eevil\"", StringComparison.Ordinal);
+        var (code, stdout, err) = CliRunner.Run("check", cli.Write("s.yaml", yaml));
+        Assert.True(code == 0, err);
+        Assert.Contains("[31mred[2Jevil", stdout, StringComparison.Ordinal);
+        Assert.DoesNotContain('\u001b', stdout);
+        Assert.DoesNotContain('\u202e', stdout);
+    }
+
+    // A waveform table naming /dev/zero was read until memory ran out (2.7 GB resident).
+    [SkippableFact]
+    public void A_table_naming_a_device_is_refused_at_its_key()
+    {
+        Skip.IfNot(OperatingSystem.IsLinux() && File.Exists("/dev/zero"), "needs Linux and /dev/zero");
+        RunRefused(TableScenario("/dev/zero"), ":2:", "source.file", "'/dev/zero': not a regular file but a character device");
+    }
+
+    // An error quoted the whole offending line of whatever file a table named (`file: /etc/shadow`): now a short, clean excerpt.
+    [Fact]
+    public void A_table_line_is_quoted_as_a_short_excerpt()
+    {
+        using var cli = new CliRunner();
+        string secret = "root:$6$saltsalt$" + new string('h', 86) + ":19000:0:99999:7:::";
+        cli.Write("shadow", "daemon:*:19000:0:99999:7:::\n" + secret + "\n");
+        string file = cli.Write("s.yaml", TableScenario("shadow"));
+        var (code, _, err) = CliRunner.Run("check", file);
+        Assert.True(code == 2, $"exit {code}: {err}");
+        Assert.Contains("shadow:2: expected 'time_s,volts_V' numbers, found 'root:$6$saltsalt$hhhhhhhhhhhhhhhhhhhhhhh…'", err, StringComparison.Ordinal);
+        Assert.DoesNotContain(secret[..50], err, StringComparison.Ordinal);
+    }
+
+    static string TableScenario(string table) => Scenario().Replace(
+        "source: { waveform: step, low: 0 V, high: 3.3 V, rise: 200 ps, resistance: 25 ohm }",
+        $"source: {{ waveform: table, high: 1 V, file: {table}, resistance: 25 ohm }}", StringComparison.Ordinal);
+
+    // The comparison grid's limit advised "give a coarser step", an option no command has; the advice names what sets the step.
+    [Theory]
+    [InlineData(true, "set a coarser simulation.output_step")]
+    [InlineData(false, "compare a capture sampled less finely (every k-th row) or a shorter one")]
+    public void The_comparison_grid_limit_advises_what_the_user_can_change(bool fineSimulation, string advice)
+    {
+        static (double[] T, double[] V) Ramp(int n) =>
+            (Enumerable.Range(0, n).Select(i => i / (double)(n - 1)).ToArray(), Enumerable.Range(0, n).Select(i => i / (double)(n - 1)).ToArray());
+        var fine = Ramp(Core.Measurements.WaveformComparison.MaxGridPoints + 10);
+        var coarse = Ramp(11);
+        var (sim, cap) = fineSimulation ? (fine, coarse) : (coarse, fine);
+        var ex = Assert.Throws<Core.InputException>(() =>
+            Core.Measurements.WaveformComparison.Compare(sim.T, sim.V, cap.T, cap.V, Core.Measurements.AlignMode.None));
+        Assert.Contains("more than the 4000000 it may hold", ex.Message, StringComparison.Ordinal);
+        Assert.EndsWith(advice, ex.Message, StringComparison.Ordinal);
+        Assert.DoesNotContain("give a coarser step", ex.Message, StringComparison.Ordinal);
+    }
+
+    // A 100 MB title took 2.7 GB resident: a scenario file over its limit is refused before it is parsed.
+    [Fact]
+    public void A_scenario_file_over_its_size_limit_is_refused_unread()
+    {
+        string yaml = Scenario().Replace("title: hostile", "title: " + new string('t', (int)Core.Io.InputLimits.ScenarioBytes), StringComparison.Ordinal);
+        RunRefusedWith("check", yaml, "larger than 16 MiB, the most a scenario may be");
+    }
+
+    static void RunRefusedWith(string command, string yaml, string fragment)
+    {
+        using var cli = new CliRunner();
+        string file = cli.Write("s.yaml", yaml);
+        var (code, _, err) = CliRunner.Run(command, file);
+        Assert.True(code == 2, $"exit {code}: {(err.Length > 500 ? err[..500] : err)}");
+        Assert.StartsWith("error: " + file + ": ", err, StringComparison.Ordinal);
+        Assert.Single(err.Split('\n', StringSplitOptions.RemoveEmptyEntries));
+        Assert.Contains(fragment, err, StringComparison.Ordinal);
+    }
 }
