@@ -41,6 +41,8 @@ public static class FitCommand
             var parameters = pr.GetValue(free)!.Select(f => FreeParameter.Parse(s, f)).ToList();
             Capture cap = capture.Read(pr)!;
             CaptureArguments.Warn(cap, s.Simulation.Duration, pr.InvocationConfiguration.Error);
+            string dir = CommonOptions.OutputDir(pr.GetValue(outDir), path, "-fit");
+            using var output = new OutputFolder(dir, "fit"); // held from before the work starts, so a second run into it is refused at once
             ScenarioFitResult result;
             using (var bar = new ProgressBar(pr.InvocationConfiguration.Error, "fitting"))
                 result = ScenarioFit.Run(s, cap, probeName, parameters, new ScenarioFitOptions
@@ -51,16 +53,12 @@ public static class FitCommand
                     Force = pr.GetValue(force),
                 }, ct);
 
-            string dir = CommonOptions.OutputDir(pr.GetValue(outDir), path, "-fit");
             var summary = FitOutputs.Json(result);
-            using (var output = new OutputFolder(dir))
-            {
-                File.WriteAllText(output.File("fitted.yaml"), result.FittedText);
-                File.WriteAllText(output.File("fit.json"), RunSummary.Text(summary));
-                File.WriteAllBytes(output.File("fit.png"),
-                    XyChart.RenderPng(FitOutputs.Chart(result, $"{s.Title}: fit of {probeName} to {Path.GetFileName(cap.Source)}"), 1200, 800));
-                output.Commit();
-            }
+            output.WriteText("fitted.yaml", result.FittedText);
+            output.WriteText("fit.json", RunSummary.Text(summary));
+            output.Write("fit.png", XyChart.RenderPng(FitOutputs.Chart(result, $"{s.Title}: fit of {probeName} to {Path.GetFileName(cap.Source)}"),
+                PictureSizes.Overlay.Width, PictureSizes.Overlay.Height));
+            output.Commit();
             var o = pr.InvocationConfiguration.Output;
             if (pr.GetValue(json)) o.WriteLine(RunSummary.Text(summary));
             else Print(o, result, dir);

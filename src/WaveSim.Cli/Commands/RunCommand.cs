@@ -23,7 +23,7 @@ public static class RunCommand
         var svg = new Option<bool>("--svg") { Description = "Also write waveforms.svg" };
         var currents = new Option<bool>("--currents") { Description = "Add a panel of probe currents to the waveform plot" };
         var frames = new Option<int>("--frames") { Description = "Write N frames of the voltage along the line to frames/", DefaultValueFactory = _ => 0 };
-        var frameSize = new Option<string>("--frame-size") { Description = "Frame size WIDTHxHEIGHT in pixels", DefaultValueFactory = _ => "1280x720" };
+        var frameSize = new Option<string>("--frame-size") { Description = "Frame size WIDTHxHEIGHT in pixels", DefaultValueFactory = _ => PictureSizes.DefaultFrame };
         var settle = CommonOptions.SettleBand();
         var fdCheck = new Option<bool>("--check-frequency-domain") { Description = "Cross-check against the frequency-domain solver; also write frequency.csv and frequency.png" };
         var window = new Option<string?>("--window") { Description = "Time span of waveforms.png: START..STOP (e.g. 10ns..20ns) or all; default: all, or the first edges of a source with more than 50" };
@@ -40,6 +40,8 @@ public static class RunCommand
             var s = CommonOptions.Load(path, pr.InvocationConfiguration.Error);
             var pictureOptions = PictureOptions(s, pr.GetValue(window), pr.GetValue(plot), pr.GetValue(currents));
             var options = new SimulationOptions { Force = pr.GetValue(force), SnapshotTimes = RunPictures.SnapshotTimes(s, nFrames) };
+            string dir = CommonOptions.OutputDir(pr.GetValue(outDir), path);
+            using var output = new OutputFolder(dir, "run"); // held from before the simulation, so a second run into it is refused at once
             SimulationResult result;
             using (var bar = new ProgressBar(pr.InvocationConfiguration.Error, "simulating"))
                 result = Simulate.Run(s, options with { Progress = bar }, ct);
@@ -57,25 +59,24 @@ public static class RunCommand
                 response = FrequencySweep.Compute(s, f0, f1, 200, log: true);
             }
             var picture = RunPictures.Waveforms(result, pictureOptions);
-            string dir = CommonOptions.OutputDir(pr.GetValue(outDir), path);
-            using (var output = new OutputFolder(dir))
             {
-                ProbesCsv.Write(result, output.File("probes.csv"));
-                File.WriteAllText(output.File("summary.json"), RunSummary.Text(summary));
+                output.WriteText("probes.csv", w => ProbesCsv.Write(result, w));
+                output.WriteText("summary.json", RunSummary.Text(summary));
                 var chart = picture.Chart;
-                File.WriteAllBytes(output.File("waveforms.png"), XyChart.RenderPng(chart, 1200, pr.GetValue(currents) ? 900 : 600));
-                if (pr.GetValue(svg)) File.WriteAllText(output.File("waveforms.svg"), XyChart.RenderSvg(chart, 1200, pr.GetValue(currents) ? 900 : 600));
-                File.WriteAllBytes(output.File("spacetime.png"), RunPictures.SpaceTime(result, 1000, 800));
+                var size = pr.GetValue(currents) ? PictureSizes.WaveformsWithCurrents : PictureSizes.Waveforms;
+                output.Write("waveforms.png", XyChart.RenderPng(chart, size.Width, size.Height));
+                if (pr.GetValue(svg)) output.WriteText("waveforms.svg", XyChart.RenderSvg(chart, size.Width, size.Height));
+                output.Write("spacetime.png", RunPictures.SpaceTime(result, PictureSizes.SpaceTime.Width, PictureSizes.SpaceTime.Height));
                 foreach (var eye in eyes)
-                    if (RunEyes.RenderPng(s.Title, eye, 1000, 700) is { } png) File.WriteAllBytes(output.File($"eye_{eye.Probe.Name}.png"), png);
+                    if (RunEyes.RenderPng(s.Title, eye, PictureSizes.Eye.Width, PictureSizes.Eye.Height) is { } png) output.Write($"eye_{eye.Probe.Name}.png", png);
                 if (nFrames > 0)
                 {
                     var (lo, hi) = RunPictures.VoltageRange(result);
-                    string framesDir = Path.GetDirectoryName(output.File("frames/frame_00001.png"))!;
                     using var bar = new ProgressBar(pr.InvocationConfiguration.Error, "frames");
-                    FrameSequence.WriteAll(framesDir, RunPictures.Layout(result), RunPictures.Frames(result, nFrames), lo, hi, fw, fh, ct);
+                    foreach (var (name, png) in FrameSequence.Render(RunPictures.Layout(result), RunPictures.Frames(result, nFrames), lo, hi, fw, fh, ct))
+                        output.Write("frames/" + name, png);
                 }
-                if (response is not null) FrequencyOutputs.Write(Path.GetDirectoryName(output.File("frequency.csv"))!, response, s.Title);
+                if (response is not null) FrequencyOutputs.Write(output, response, s.Title);
                 output.Commit();
             }
             var o = pr.InvocationConfiguration.Output;
