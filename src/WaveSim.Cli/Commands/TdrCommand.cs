@@ -43,6 +43,8 @@ public static class TdrCommand
             Capture? cap = capture.Read(pr);
             if (cap is null && pr.GetValue(incident) is not null)
                 throw new InputException("--incident: applies only with --capture (the simulated instrument's incident step is 1 V)");
+            if (pr.GetValue(toScenario) is { } target && Directory.Exists(target))
+                throw new InputException($"--to-scenario: {target} is a folder; give a file name"); // said before the simulation, not after
             string dir = CommonOptions.OutputDir(pr.GetValue(outDir), path, "-tdr");
             using var output = new OutputFolder(dir, "tdr"); // held from before the simulation, so a second run into it is refused at once
 

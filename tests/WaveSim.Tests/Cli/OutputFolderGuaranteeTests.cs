@@ -118,6 +118,20 @@ simulation: { duration: 3 ns, output_step: 10 ps }
     }
 
     [Fact]
+    public void Tdr_with_a_scenario_file_below_a_plain_file_is_refused_at_the_commit_and_writes_nothing()
+    {
+        // Found only when the commit checks the destinations (after the analysis): the folder must not be committed either.
+        using var cli = new CliRunner();
+        string plain = cli.Write("plain.txt", "x");
+        string outDir = cli.PathOf(Path.Combine("new1", "out"));
+        var (code, _, err) = CliRunner.Run("tdr", cli.Write("s.yaml", Matched), "--out", outDir, "--to-scenario", Path.Combine(plain, "line.yaml"));
+        Assert.Equal(2, code);
+        Assert.Contains(plain, err);
+        Assert.False(Directory.Exists(cli.PathOf("new1")), "no output folder and no new parent folders");
+        Assert.Equal("x", File.ReadAllText(plain));
+    }
+
+    [Fact]
     public void Tdr_writes_the_scenario_file_together_with_the_folder()
     {
         using var cli = new CliRunner();
