@@ -11,9 +11,9 @@ namespace WaveSim.Cli;
 public static class CommandGuard
 {
     /// <summary>
-    /// Runs <paramref name="body"/> on the thread pool, as <see cref="Run"/> does in line. The command line arms its Ctrl+C and
-    /// SIGTERM handling only once an action has returned its task: a body run synchronously inside the action would finish (or
-    /// be killed by the signal, leaving its staging folder) before any handler was there to cancel it.
+    /// Runs <paramref name="body"/> on the thread pool, as <see cref="Run"/> does in line, so the action returns its task at once
+    /// and <see cref="Program.Main"/> can wait for it with the signal handling of <see cref="SignalCancellation"/>: a signal
+    /// cancels the body's token, and the body then removes its staging folder and ends in `error: cancelled`.
     /// </summary>
     public static Task<int> RunAsync(TextWriter error, Func<int> body) => Task.Run(() => Run(error, body));
 

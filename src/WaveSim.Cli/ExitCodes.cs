@@ -13,6 +13,8 @@ public static class ExitCodes
     public const int NumericalFailure = 3;
     /// <summary>A defect in WaveSim itself: an exception no input check anticipated (reported in one line, never a stack trace).</summary>
     public const int InternalError = 4;
-    /// <summary>Stopped by Ctrl+C.</summary>
+    /// <summary>Stopped by Ctrl+C (SIGINT): 128 + 2, as shells report a process ended by that signal.</summary>
     public const int Cancelled = 130;
+    /// <summary>Stopped by SIGTERM: 128 + 15.</summary>
+    public const int Terminated = 143;
 }

@@ -25,12 +25,17 @@ public static class Program
 
     /// <summary>
     /// How long a command may take, after Ctrl+C or SIGTERM cancels it, to stop and remove its staging folder before the
-    /// process exits anyway. The library's default of 2 s cut off a run stopping between frames, leaving its staging folder
-    /// and no message behind.
+    /// process exits anyway.
     /// </summary>
     public static readonly TimeSpan CancelGrace = TimeSpan.FromSeconds(30);
 
-    /// <summary>Runs the command line and returns the exit code.</summary>
-    public static async Task<int> Main(string[] args) =>
-        await BuildRoot().Parse(args).InvokeAsync(new InvocationConfiguration { ProcessTerminationTimeout = CancelGrace });
+    /// <summary>Runs the command line and returns the exit code (130 after SIGINT, 143 after SIGTERM).</summary>
+    public static async Task<int> Main(string[] args)
+    {
+        // The signals are handled here rather than by the command-line library, which answers SIGTERM with 130 as well.
+        using var signals = new SignalCancellation();
+        var configuration = new InvocationConfiguration { ProcessTerminationTimeout = null };
+        Task<int> command = BuildRoot().Parse(args).InvokeAsync(configuration, signals.Token);
+        return await signals.ExitCodeAsync(command, CancelGrace, configuration.Error);
+    }
 }

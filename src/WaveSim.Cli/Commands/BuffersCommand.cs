@@ -44,7 +44,7 @@ public static class BuffersCommand
             }
             var summary = BufferSummary.Json(f, models, corners);
             string dir = CommonOptions.OutputDir(pr.GetValue(outDir), path, "-buffers");
-            using (var output = new OutputFolder(dir))
+            using (var output = new OutputFolder(dir, "buffers"))
             {
                 output.WriteText("buffers.json", JsonText.Write(summary));
                 foreach (var (n, bytes) in pictures) output.Write(n, bytes);

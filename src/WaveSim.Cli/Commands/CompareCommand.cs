@@ -34,22 +34,19 @@ public static class CompareCommand
             CaptureComparison.RequireProbe(s, probeName);
             Capture cap = capture.Read(pr)!;
             CaptureArguments.Warn(cap, s.Simulation.Duration, pr.InvocationConfiguration.Error);
+            string dir = CommonOptions.OutputDir(pr.GetValue(outDir), path, "-compare");
+            using var output = new OutputFolder(dir, "compare"); // held from before the work starts, so a second run into it is refused at once
             CaptureComparisonResult result;
             using (var bar = new ProgressBar(pr.InvocationConfiguration.Error, "simulating"))
                 result = CaptureComparison.Run(s, cap, probeName, ParseAlign(pr.GetValue(align)!),
                     new RunOptions { Force = pr.GetValue(force), Plan = plan, Progress = bar }, ct);
 
-            string dir = CommonOptions.OutputDir(pr.GetValue(outDir), path, "-compare");
             var summary = CompareOutputs.Json(result);
-            using (var output = new OutputFolder(dir))
-            {
-                File.WriteAllText(output.File("compare.json"), RunSummary.Text(summary));
-                CompareOutputs.WriteCsv(result, output.File("compare.csv"));
-                File.WriteAllBytes(output.File("compare.png"),
-                    XyChart.RenderPng(CompareOutputs.Chart(result, $"{s.Title}: {probeName} against {Path.GetFileName(cap.Source)}"),
-                        PictureSizes.Default.CaptureChartWidth, PictureSizes.Default.CaptureChartHeight));
-                output.Commit();
-            }
+            output.WriteText("compare.json", RunSummary.Text(summary));
+            output.WriteText("compare.csv", w => CompareOutputs.WriteCsv(result, w));
+            output.Write("compare.png", XyChart.RenderPng(CompareOutputs.Chart(result, $"{s.Title}: {probeName} against {Path.GetFileName(cap.Source)}"),
+                PictureSizes.Overlay.Width, PictureSizes.Overlay.Height));
+            output.Commit();
             var o = pr.InvocationConfiguration.Output;
             if (pr.GetValue(json)) o.WriteLine(RunSummary.Text(summary));
             else Print(o, result, dir);

@@ -43,6 +43,8 @@ public static class FitCommand
             var parameters = pr.GetValue(free)!.Select(f => FreeParameter.Parse(document, f)).ToList();
             Capture cap = capture.Read(pr)!;
             CaptureArguments.Warn(cap, s.Simulation.Duration, pr.InvocationConfiguration.Error);
+            string dir = CommonOptions.OutputDir(pr.GetValue(outDir), path, "-fit");
+            using var output = new OutputFolder(dir, "fit"); // held from before the work starts, so a second run into it is refused at once
             ScenarioFitResult result;
             using (var bar = new ProgressBar(pr.InvocationConfiguration.Error, "fitting"))
                 result = ScenarioFit.Run(s, cap, probeName, parameters, new ScenarioFitOptions
@@ -53,18 +55,13 @@ public static class FitCommand
                     Force = pr.GetValue(force),
                 }, ct);
 
-            string dir = CommonOptions.OutputDir(pr.GetValue(outDir), path, "-fit");
             var summary = FitOutputs.Json(result);
-            using (var output = new OutputFolder(dir))
-            {
-                // The author's text with the fitted values spliced in, comments kept.
-                File.WriteAllText(output.File("fitted.yaml"), document.Edited(ScenarioFit.Changes(parameters, result.Parameters.Select(p => p.Value).ToArray())));
-                File.WriteAllText(output.File("fit.json"), RunSummary.Text(summary));
-                File.WriteAllBytes(output.File("fit.png"),
-                    XyChart.RenderPng(FitOutputs.Chart(result, $"{s.Title}: fit of {probeName} to {Path.GetFileName(cap.Source)}"),
-                        PictureSizes.Default.CaptureChartWidth, PictureSizes.Default.CaptureChartHeight));
-                output.Commit();
-            }
+            // The author's text with the fitted values spliced in, comments kept.
+            output.WriteText("fitted.yaml", document.Edited(ScenarioFit.Changes(parameters, result.Parameters.Select(p => p.Value).ToArray())));
+            output.WriteText("fit.json", RunSummary.Text(summary));
+            output.Write("fit.png", XyChart.RenderPng(FitOutputs.Chart(result, $"{s.Title}: fit of {probeName} to {Path.GetFileName(cap.Source)}"),
+                PictureSizes.Overlay.Width, PictureSizes.Overlay.Height));
+            output.Commit();
             var o = pr.InvocationConfiguration.Output;
             if (pr.GetValue(json)) o.WriteLine(RunSummary.Text(summary));
             else Print(o, result, dir);

@@ -34,6 +34,8 @@ public static class ReportCommand
             var s = document.Scenario;
             string text = document.Text;
             var options = HtmlReport.RunOptions(band, pr.GetValue(force)) with { Plan = plan };
+            string dir = CommonOptions.OutputDir(pr.GetValue(outDir), path);
+            using var output = new OutputFolder(dir, "report"); // held from before the work starts, so a second run into it is refused at once
             RunOutcome run;
             using (var bar = new ProgressBar(pr.InvocationConfiguration.Error, "simulating"))
                 run = Simulate.Run(s, options with { Progress = bar }, ct);
@@ -42,12 +44,8 @@ public static class ReportCommand
                 using (var bar = new ProgressBar(pr.InvocationConfiguration.Error, "terminations"))
                     study = TerminationStudy.Run(s, new TerminationOptions { SettleBand = band, Force = pr.GetValue(force) }, bar, ct);
             var report = HtmlReport.Build(ReportInput.For(run, text, study));
-            string dir = CommonOptions.OutputDir(pr.GetValue(outDir), path);
-            using (var output = new OutputFolder(dir))
-            {
-                File.WriteAllText(output.File(FileName), report.Html);
-                output.Commit();
-            }
+            output.WriteText(FileName, report.Html);
+            output.Commit();
             string file = Path.Combine(Path.GetFullPath(dir), FileName);
             var o = pr.InvocationConfiguration.Output;
             int pass = report.Checks.Count(c => c.Pass == true), fail = report.Checks.Count(c => c.Pass == false);

@@ -21,7 +21,7 @@ public static class RunCommand
         var svg = new Option<bool>("--svg") { Description = "Also write waveforms.svg" };
         var currents = new Option<bool>("--currents") { Description = "Add a panel of probe currents to the waveform plot" };
         var frames = new Option<int>("--frames") { Description = "Write N frames of the voltage along the line to frames/", DefaultValueFactory = _ => 0 };
-        var frameSize = new Option<string>("--frame-size") { Description = "Frame size WIDTHxHEIGHT in pixels", DefaultValueFactory = _ => "1280x720" };
+        var frameSize = new Option<string>("--frame-size") { Description = "Frame size WIDTHxHEIGHT in pixels", DefaultValueFactory = _ => PictureSizes.DefaultFrame };
         var settle = CommonOptions.SettleBand();
         var fdCheck = new Option<bool>("--check-frequency-domain") { Description = "Cross-check against the frequency-domain solver; also write frequency.csv and frequency.png" };
         var window = new Option<string?>("--window") { Description = "Time span of waveforms.png: START..STOP (e.g. 10ns..20ns) or all; default: all, or the first edges of a source with more than 50" };
@@ -40,15 +40,15 @@ public static class RunCommand
             {
                 Waveforms = PictureOptions(s, pr.GetValue(window), pr.GetValue(plot), pr.GetValue(currents)),
                 Svg = pr.GetValue(svg),
-                Sizes = PictureSizes.Default with { FrameWidth = fw, FrameHeight = fh },
+                FrameSize = new PixelSize(fw, fh),
             };
             var analysis = new AnalysisOptions { SettleBand = band, Frames = nFrames, FrequencyCheck = pr.GetValue(fdCheck) };
+            string dir = CommonOptions.OutputDir(pr.GetValue(outDir), path);
+            using var output = new OutputFolder(dir, "run"); // held from before the simulation, so a second run into it is refused at once
             RunOutcome run;
             using (var bar = new ProgressBar(pr.InvocationConfiguration.Error, "simulating"))
                 run = Simulate.Run(s, new RunOptions { Analysis = analysis, Force = pr.GetValue(force), Plan = plan, Progress = bar }, ct);
-            string dir = CommonOptions.OutputDir(pr.GetValue(outDir), path);
             RunFilesWritten written;
-            using (var output = new OutputFolder(dir))
             {
                 written = RunFiles.Write(run, output, files, ct);
                 output.Commit();

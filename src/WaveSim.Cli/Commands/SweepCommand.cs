@@ -44,29 +44,28 @@ public static class SweepCommand
             var limits = (pr.GetValue(limit) ?? []).Select(l => SweepLimit.Parse(l, probes)).ToArray();
             if (limits.Length > 0 && g is null) throw new InputException("--limit: give --goal too (the limits choose among points for the goal)");
             var grid = SweepGrid.Build(s, axes, pr.GetValue(force));
+            string dir = CommonOptions.OutputDir(pr.GetValue(outDir), path);
+            using var output = new OutputFolder(dir, "sweep"); // held from before the work starts, so a second run into it is refused at once
 
             SweepResult result;
             using (var bar = new ProgressBar(pr.InvocationConfiguration.Error, $"sweep of {grid.Points.Count} points"))
                 result = SweepRunner.Run(grid, new SweepRunOptions { Serial = pr.GetValue(serial), SettleBand = band, Force = pr.GetValue(force), Progress = bar }, ct);
 
-            string dir = CommonOptions.OutputDir(pr.GetValue(outDir), path);
             var best = g is null ? null : result.Best(g, limits);
             var charted = new List<string>();
             var leftOut = new List<string>();   // panels (or whole charts) with no data, and why
-            using (var output = new OutputFolder(dir))
+            output.WriteText("sweep.csv", w => SweepCsv.Write(result, w));
+            foreach (string f in figures)
             {
-                SweepCsv.Write(result, output.File("sweep.csv"));
-                foreach (string f in figures)
-                {
-                    var chart = SweepPictures.Chart(result, f, best, g);
-                    string file = $"sweep_{FigureSelector.Stem(f)}.png";
-                    leftOut.AddRange(SweepPanelGaps.LeftOut(result, f).Select(l => $"{file}: {l}" + (chart.Panels.Count == 0 ? "; no chart written" : "")));
-                    if (chart.Panels.Count == 0) continue;
-                    File.WriteAllBytes(output.File(file), XyChart.RenderPng(chart, 1200, 300 + 300 * chart.Panels.Count));
-                    charted.Add(file);
-                }
-                output.Commit();
+                var chart = SweepPictures.Chart(result, f, best, g);
+                string file = $"sweep_{FigureSelector.Stem(f)}.png";
+                leftOut.AddRange(SweepPanelGaps.LeftOut(result, f).Select(l => $"{file}: {l}" + (chart.Panels.Count == 0 ? "; no chart written" : "")));
+                if (chart.Panels.Count == 0) continue;
+                var size = PictureSizes.Sweep(chart.Panels.Count);
+                output.Write(file, XyChart.RenderPng(chart, size.Width, size.Height));
+                charted.Add(file);
             }
+            output.Commit();
             var o = pr.InvocationConfiguration.Output;
             if (pr.GetValue(json))
             {

@@ -43,6 +43,10 @@ public static class TdrCommand
             Capture? cap = capture.Read(pr);
             if (cap is null && pr.GetValue(incident) is not null)
                 throw new InputException("--incident: applies only with --capture (the simulated instrument's incident step is 1 V)");
+            if (pr.GetValue(toScenario) is { } target && Directory.Exists(target))
+                throw new InputException($"--to-scenario: {target} is a folder; give a file name"); // said before the simulation, not after
+            string dir = CommonOptions.OutputDir(pr.GetValue(outDir), path, "-tdr");
+            using var output = new OutputFolder(dir, "tdr"); // held from before the simulation, so a second run into it is refused at once
 
             ReflectometerTrace trace;
             if (cap is null)
@@ -61,27 +65,13 @@ public static class TdrCommand
             TdrResult result = TdrAnalysis.Analyse(trace, v);
 
             string title = cap is null ? $"{s.Title}: simulated reflectometer" : $"{Path.GetFileName(cap.Source)}: reflectometer trace";
-            string? yaml = pr.GetValue(toScenario) is null ? null : TdrScenarioWriter.Yaml(result, title);
-            string dir = CommonOptions.OutputDir(pr.GetValue(outDir), path, "-tdr");
             var summary = TdrOutputs.Json(result);
-            // The scenario file is staged beside its target before the folder is committed and moved into place after it,
-            // so a failure anywhere before the commit leaves neither.
-            string? staged = yaml is null ? null : Stage(pr.GetValue(toScenario)!, yaml);
-            try
-            {
-                using (var output = new OutputFolder(dir))
-                {
-                    TdrOutputs.WriteCsv(result, output.File("tdr.csv"));
-                    File.WriteAllText(output.File("tdr.json"), RunSummary.Text(summary));
-                    File.WriteAllBytes(output.File("tdr.png"), XyChart.RenderPng(TdrOutputs.Chart(result, title, cap is null ? s : null), 1200, 800));
-                    output.Commit();
-                }
-                if (staged is not null) File.Move(staged, Path.GetFullPath(pr.GetValue(toScenario)!), overwrite: true);
-            }
-            finally
-            {
-                if (staged is not null && File.Exists(staged)) File.Delete(staged);
-            }
+            output.WriteText("tdr.csv", w => TdrOutputs.WriteCsv(result, w));
+            output.WriteText("tdr.json", RunSummary.Text(summary));
+            output.Write("tdr.png", XyChart.RenderPng(TdrOutputs.Chart(result, title, cap is null ? s : null), PictureSizes.Overlay.Width, PictureSizes.Overlay.Height));
+            // The scenario file commits with the folder: both appear, or neither.
+            if (pr.GetValue(toScenario) is { } scenarioFile) output.WriteBeside(scenarioFile, TdrScenarioWriter.Yaml(result, title));
+            output.Commit();
 
             var o = pr.InvocationConfiguration.Output;
             foreach (string w in result.Warnings) pr.InvocationConfiguration.Error.WriteLine("warning: " + w);
@@ -118,17 +108,6 @@ public static class TdrCommand
             return Quantity.SpeedOfLight / Math.Sqrt(e);
         }
         return s.Line.OfType<Segment>().First().Velocity;
-    }
-
-    /// <summary>Writes <paramref name="text"/> whole to a temporary name beside <paramref name="path"/>; returns that name.</summary>
-    static string Stage(string path, string text)
-    {
-        string full = Path.GetFullPath(path);
-        string? parent = Path.GetDirectoryName(full);
-        if (parent is not null) Directory.CreateDirectory(parent);
-        string temp = full + ".partial-" + Guid.NewGuid().ToString("N");
-        File.WriteAllText(temp, text);
-        return temp;
     }
 
     static void Print(TextWriter o, TdrResult r, string dir, string? scenarioFile)

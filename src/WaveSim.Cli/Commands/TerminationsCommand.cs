@@ -41,16 +41,14 @@ public static class TerminationsCommand
                 Force = pr.GetValue(force),
             };
             var s = CommonOptions.Load(path, pr.InvocationConfiguration.Error);
+            string dir = CommonOptions.OutputDir(pr.GetValue(outDir), path);
+            using var output = new OutputFolder(dir, "terminations"); // held from before the work starts, so a second run into it is refused at once
             TerminationStudyResult result;
             using (var bar = new ProgressBar(pr.InvocationConfiguration.Error, "terminations"))
                 result = TerminationStudy.Run(s, options, bar, ct);
-            string dir = CommonOptions.OutputDir(pr.GetValue(outDir), path);
-            using (var output = new OutputFolder(dir))
-            {
-                TerminationsCsv.Write(result, output.File("terminations.csv"));
-                File.WriteAllBytes(output.File("terminations.png"), XyChart.RenderPng(TerminationPictures.Receiver(result), 1200, 650));
-                output.Commit();
-            }
+            output.WriteText("terminations.csv", w => TerminationsCsv.Write(result, w));
+            output.Write("terminations.png", XyChart.RenderPng(TerminationPictures.Receiver(result), PictureSizes.Terminations.Width, PictureSizes.Terminations.Height));
+            output.Commit();
             var o = pr.InvocationConfiguration.Output;
             if (pr.GetValue(json)) o.WriteLine(RunSummary.Text(TerminationReport.Json(result, dir)));
             else Print(o, result, dir);

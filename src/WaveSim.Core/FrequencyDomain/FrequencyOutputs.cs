@@ -1,10 +1,11 @@
 using System.Globalization;
 using CsvHelper;
+using WaveSim.Core.Output;
 using WaveSim.Core.Rendering;
 
 namespace WaveSim.Core.FrequencyDomain;
 
-/// <summary>Writes a <see cref="FrequencyResponse"/> as frequency.csv and frequency.png, each whole or not at all.</summary>
+/// <summary>Writes a <see cref="FrequencyResponse"/> as frequency.csv and frequency.png into an <see cref="OutputFolder"/>.</summary>
 public static class FrequencyOutputs
 {
     /// <summary>The table's file name.</summary>
@@ -12,25 +13,27 @@ public static class FrequencyOutputs
     /// <summary>The chart's file name.</summary>
     public const string PngName = "frequency.png";
 
-    /// <summary>Writes <see cref="CsvName"/> and <see cref="PngName"/> into <paramref name="dir"/> (created if missing).</summary>
-    /// <param name="dir">Output folder.</param>
+    /// <summary>Writes <see cref="CsvName"/> and <see cref="PngName"/> into <paramref name="output"/> (committed with its other files).</summary>
+    /// <param name="output">Output folder.</param>
     /// <param name="response">The sweep.</param>
     /// <param name="title">Chart title.</param>
-    public static void Write(string dir, FrequencyResponse response, string title)
+    public static void Write(OutputFolder output, FrequencyResponse response, string title)
     {
-        Directory.CreateDirectory(dir);
-        WriteCsv(Path.Combine(dir, CsvName), response);
-        WriteAtomic(Path.Combine(dir, PngName), path => File.WriteAllBytes(path, XyChart.RenderPng(Chart(response, title), 1200, 960)));
+        ArgumentNullException.ThrowIfNull(output);
+        output.WriteText(CsvName, w => WriteCsv(w, response));
+        output.Write(PngName, XyChart.RenderPng(Chart(response, title), PictureSizes.Frequency.Width, PictureSizes.Frequency.Height));
     }
 
     /// <summary>
     /// Writes the table: f_Hz, zin_re_ohm, zin_im_ohm, zin_mag_ohm, then for each probe &lt;probe&gt;_gain_dB and &lt;probe&gt;_phase_deg
     /// (invariant culture; a field is left empty where the value is not finite, e.g. the gain of a shorted node).
     /// </summary>
-    public static void WriteCsv(string path, FrequencyResponse r) => WriteAtomic(path, temp =>
+    /// <param name="writer">Where the table goes (left open).</param>
+    /// <param name="r">The sweep.</param>
+    public static void WriteCsv(TextWriter writer, FrequencyResponse r)
     {
-        using var writer = new StreamWriter(temp);
-        using var csv = new CsvWriter(writer, CultureInfo.InvariantCulture);
+        ArgumentNullException.ThrowIfNull(r);
+        using var csv = new CsvWriter(writer, CultureInfo.InvariantCulture, leaveOpen: true);
         foreach (string h in new[] { "f_Hz", "zin_re_ohm", "zin_im_ohm", "zin_mag_ohm" }) csv.WriteField(h);
         foreach (var p in r.Probes) { csv.WriteField(p.Name + "_gain_dB"); csv.WriteField(p.Name + "_phase_deg"); }
         csv.NextRecord();
@@ -41,7 +44,7 @@ public static class FrequencyOutputs
             foreach (var p in r.Probes) { Field(p.GainDb(k)); Field(p.PhaseDeg(k)); }
             csv.NextRecord();
         }
-    });
+    }
 
     /// <summary>
     /// The chart: each probe's gain (dB) and phase (degrees, wrapped to ±180°), then |Zin| (ohm), against frequency. A
@@ -82,19 +85,5 @@ public static class FrequencyOutputs
             ys.Add(phase[k]);
         }
         return new PlotSeries(name, xs.ToArray(), ys.ToArray());
-    }
-
-    static void WriteAtomic(string path, Action<string> write)
-    {
-        string temp = path + ".tmp-" + Environment.ProcessId;
-        try
-        {
-            write(temp);
-            File.Move(temp, path, overwrite: true);
-        }
-        finally
-        {
-            if (File.Exists(temp)) File.Delete(temp);
-        }
     }
 }

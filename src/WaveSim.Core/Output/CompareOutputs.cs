@@ -34,13 +34,12 @@ public static class CompareOutputs
 
     /// <summary>compare.csv: time_s, simulated_V, captured_V, residual_V (captured minus simulated, <see cref="CaptureResidual"/>), round-trip doubles.</summary>
     /// <param name="r">The comparison.</param>
-    /// <param name="path">The file to write.</param>
-    public static void WriteCsv(CaptureComparisonResult r, string path)
+    /// <param name="writer">Where the table goes (left open).</param>
+    public static void WriteCsv(CaptureComparisonResult r, TextWriter writer)
     {
         ArgumentNullException.ThrowIfNull(r);
         var c = r.Comparison;
-        using var writer = new StreamWriter(path);
-        using var csv = new CsvWriter(writer, CultureInfo.InvariantCulture);
+        using var csv = new CsvWriter(writer, CultureInfo.InvariantCulture, leaveOpen: true);
         foreach (string h in new[] { "time_s", "simulated_V", "captured_V", "residual_V" }) csv.WriteField(h);
         csv.NextRecord();
         for (int k = 0; k < c.Time.Length; k++)

@@ -7,11 +7,11 @@ namespace WaveSim.Core.Output;
 /// <summary>Writes probes.csv: time_s, then &lt;probe&gt;_V and &lt;probe&gt;_A for every probe, invariant culture, round-trip doubles.</summary>
 public static class ProbesCsv
 {
-    /// <summary>Writes the result's probe waveforms to <paramref name="stream"/> (UTF-8, no byte-order mark), a row at a time.</summary>
-    public static void Write(SimulationResult result, Stream stream)
+    /// <summary>Writes the result's probe waveforms to <paramref name="writer"/> (left open), row by row.</summary>
+    public static void Write(SimulationResult result, TextWriter writer)
     {
-        using var writer = new StreamWriter(stream);
-        using var csv = new CsvWriter(writer, CultureInfo.InvariantCulture);
+        ArgumentNullException.ThrowIfNull(result);
+        using var csv = new CsvWriter(writer, CultureInfo.InvariantCulture, leaveOpen: true);
         csv.WriteField("time_s");
         foreach (var p in result.Probes) { csv.WriteField(p.Name + "_V"); csv.WriteField(p.Name + "_A"); }
         csv.NextRecord();

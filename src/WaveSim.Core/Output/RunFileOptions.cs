@@ -11,6 +11,6 @@ public sealed record RunFileOptions
     /// <summary>Also write waveforms.svg.</summary>
     public bool Svg { get; init; }
 
-    /// <summary>The pictures' sizes.</summary>
-    public PictureSizes Sizes { get; init; } = PictureSizes.Default;
+    /// <summary>The size of each frame (the other pictures' sizes are fixed in <see cref="PictureSizes"/>).</summary>
+    public PixelSize FrameSize { get; init; } = PictureSizes.Frame;
 }

@@ -27,20 +27,19 @@ public static class RunFiles
         ArgumentNullException.ThrowIfNull(output);
         options ??= new RunFileOptions();
         var r = outcome.Result;
-        var sizes = options.Sizes;
         var files = new List<string>();
         void Add(string name) => files.Add(name);
 
         var picture = RunPictures.Waveforms(outcome, options.Waveforms);
-        output.Write("probes.csv", stream => ProbesCsv.Write(r, stream)); Add("probes.csv");
+        output.WriteText("probes.csv", w => ProbesCsv.Write(r, w)); Add("probes.csv");
         string summary = RunSummary.Text(RunSummary.Json(outcome));
         output.WriteText("summary.json", summary); Add("summary.json");
-        int height = options.Waveforms.Currents ? sizes.WaveformWithCurrentsHeight : sizes.WaveformHeight;
-        output.Write("waveforms.png", XyChart.RenderPng(picture.Chart, sizes.WaveformWidth, height)); Add("waveforms.png");
-        if (options.Svg) { output.WriteText("waveforms.svg", XyChart.RenderSvg(picture.Chart, sizes.WaveformWidth, height)); Add("waveforms.svg"); }
-        output.Write("spacetime.png", RunPictures.SpaceTime(r, sizes.SpaceTimeWidth, sizes.SpaceTimeHeight)); Add("spacetime.png");
+        var size = options.Waveforms.Currents ? PictureSizes.WaveformsWithCurrents : PictureSizes.Waveforms;
+        output.Write("waveforms.png", XyChart.RenderPng(picture.Chart, size.Width, size.Height)); Add("waveforms.png");
+        if (options.Svg) { output.WriteText("waveforms.svg", XyChart.RenderSvg(picture.Chart, size.Width, size.Height)); Add("waveforms.svg"); }
+        output.Write("spacetime.png", RunPictures.SpaceTime(r, PictureSizes.SpaceTime.Width, PictureSizes.SpaceTime.Height)); Add("spacetime.png");
         foreach (var eye in outcome.Eyes)
-            if (EyePicture.RenderPng(r.Scenario.Title, eye, sizes.EyeWidth, sizes.EyeHeight) is { } png)
+            if (EyePicture.RenderPng(r.Scenario.Title, eye, PictureSizes.Eye.Width, PictureSizes.Eye.Height) is { } png)
             {
                 string name = $"eye_{eye.Probe.Name}.png";
                 output.Write(name, png); Add(name);
@@ -48,13 +47,14 @@ public static class RunFiles
         if (outcome.FrameTimes.Count > 0)
         {
             var (lo, hi) = RunPictures.VoltageRange(r);
-            string framesDir = Path.GetDirectoryName(output.File("frames/" + FrameSequence.FileName(1)))!;
-            FrameSequence.WriteAll(framesDir, RunPictures.Layout(r), RunPictures.Frames(r, outcome.FrameTimes), lo, hi, sizes.FrameWidth, sizes.FrameHeight, ct);
+            foreach (var (name, png) in FrameSequence.Render(RunPictures.Layout(r), RunPictures.Frames(r, outcome.FrameTimes), lo, hi,
+                         options.FrameSize.Width, options.FrameSize.Height, ct))
+                output.Write("frames/" + name, png); // one at a time: a thousand frames are never held together
             Add("frames/");
         }
         if (outcome.FrequencyResponse is { } response)
         {
-            FrequencyOutputs.Write(Path.GetDirectoryName(output.File(FrequencyOutputs.CsvName))!, response, r.Scenario.Title);
+            FrequencyOutputs.Write(output, response, r.Scenario.Title);
             Add(FrequencyOutputs.CsvName); Add(FrequencyOutputs.PngName);
         }
         return new RunFilesWritten(files, picture, summary);

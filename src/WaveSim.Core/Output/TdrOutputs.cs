@@ -51,12 +51,11 @@ public static class TdrOutputs
 
     /// <summary>tdr.csv: time_s (round trip from the reference plane), distance_m, port_V, rho, z_naive_ohm, z_layer_ohm.</summary>
     /// <param name="r">The analysis.</param>
-    /// <param name="path">The file to write.</param>
-    public static void WriteCsv(TdrResult r, string path)
+    /// <param name="writer">Where the table goes (left open).</param>
+    public static void WriteCsv(TdrResult r, TextWriter writer)
     {
         ArgumentNullException.ThrowIfNull(r);
-        using var writer = new StreamWriter(path);
-        using var csv = new CsvWriter(writer, CultureInfo.InvariantCulture);
+        using var csv = new CsvWriter(writer, CultureInfo.InvariantCulture, leaveOpen: true);
         foreach (string h in new[] { "time_s", "distance_m", "port_V", "rho", "z_naive_ohm", "z_layer_ohm" }) csv.WriteField(h);
         csv.NextRecord();
         for (int k = 0; k < r.TimeS.Length; k++)

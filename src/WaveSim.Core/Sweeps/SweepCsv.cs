@@ -33,12 +33,5 @@ public static class SweepCsv
         }
     }
 
-    /// <summary>Writes the CSV to the file <paramref name="path"/>.</summary>
-    public static void Write(SweepResult r, string path)
-    {
-        using var w = new StreamWriter(path);
-        Write(r, w);
-    }
-
     static string Cell(double v) => Output.CsvNumber.Format(v);
 }

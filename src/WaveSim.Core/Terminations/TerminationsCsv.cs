@@ -49,12 +49,5 @@ public static class TerminationsCsv
         }
     }
 
-    /// <summary>Writes the CSV to the file <paramref name="path"/>.</summary>
-    public static void Write(TerminationStudyResult r, string path)
-    {
-        using var w = new StreamWriter(path);
-        Write(r, w);
-    }
-
     static string Cell(double? v) => v is { } x ? Output.CsvNumber.Format(x) : "";
 }

@@ -1,6 +1,7 @@
 using BenchmarkDotNet.Attributes;
 using WaveSim.Core;
 using WaveSim.Core.Analysis;
+using WaveSim.Core.Output;
 using WaveSim.Core.Pictures;
 using WaveSim.Core.Rendering;
 using WaveSim.Core.Scenarios;
@@ -42,12 +43,20 @@ simulation: { duration: 30 ns }
     [Benchmark]
     public int SimulateWithSnapshots() => RunWithSnapshots().Snapshots.Count;
 
-    /// <summary>Rendering and writing the 200 frames (in parallel).</summary>
+    /// <summary>Rendering the 200 frames (in parallel batches) and writing them into an output folder, committed.</summary>
     [Benchmark]
     public int RenderFrames()
     {
         var (lo, hi) = RunPictures.VoltageRange(_result);
-        return FrameSequence.WriteAll(_dir, RunPictures.Layout(_result), RunPictures.Frames(_result, RunAnalysis.FrameTimes(_result.Scenario, Frames)), lo, hi, 1280, 720).Count;
+        int n = 0;
+        using var output = new OutputFolder(Path.Combine(_dir, "out"));
+        foreach (var (name, png) in FrameSequence.Render(RunPictures.Layout(_result), RunPictures.Frames(_result, RunAnalysis.FrameTimes(_result.Scenario, Frames)), lo, hi, 1280, 720))
+        {
+            output.Write("frames/" + name, png);
+            n++;
+        }
+        output.Commit();
+        return n;
     }
 
     /// <summary>Removes the frames.</summary>

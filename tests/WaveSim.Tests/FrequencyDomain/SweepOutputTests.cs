@@ -84,8 +84,13 @@ simulation: { duration: 5 ns }
         string dir = Path.Combine(Path.GetTempPath(), "wavesim-freq-" + Guid.NewGuid().ToString("N"));
         try
         {
-            FrequencyOutputs.Write(dir, r, "sweep");
-            Assert.Equal(["frequency.csv", "frequency.png"], Directory.GetFiles(dir).Select(f => Path.GetFileName(f)!).Order().ToArray());
+            using (var output = new Core.Output.OutputFolder(dir))
+            {
+                FrequencyOutputs.Write(output, r, "sweep");
+                output.Commit();
+            }
+            // Besides the two files, only the folder's own records (names starting with a dot, docs/outputs.md).
+            Assert.Equal(["frequency.csv", "frequency.png"], Directory.GetFiles(dir).Select(f => Path.GetFileName(f)!).Where(f => f[0] != '.').Order().ToArray());
             string[] lines = File.ReadAllLines(Path.Combine(dir, "frequency.csv"));
             Assert.Equal("f_Hz,zin_re_ohm,zin_im_ohm,zin_mag_ohm,near_gain_dB,near_phase_deg,far_gain_dB,far_phase_deg", lines[0]);
             Assert.Equal(32, lines.Length);

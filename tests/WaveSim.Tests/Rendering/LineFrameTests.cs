@@ -34,22 +34,25 @@ public class LineFrameTests
     }
 
     [Fact]
-    public void Frame_sequence_writes_one_numbered_png_per_snapshot()
+    public void Frame_sequence_renders_one_numbered_png_per_snapshot_in_order()
     {
-        string dir = Directory.CreateTempSubdirectory("wavesim-frames-").FullName;
-        try
+        // More snapshots than one parallel batch, so the order across batches is checked too.
+        var snaps = Enumerable.Range(0, 4 * Environment.ProcessorCount + 3).Select(k => new LineSnapshot(k * 0.3e-9 / Environment.ProcessorCount, Front(k * 0.3e-9 / Environment.ProcessorCount))).ToList();
+        var frames = FrameSequence.Render(Line, snaps, -0.5, 1.5, 200, 140).ToList();
+        Assert.Equal(Enumerable.Range(1, snaps.Count).Select(k => $"frame_{k:D5}.png"), frames.Select(f => f.Name));
+        for (int k = 0; k < frames.Count; k++)
         {
-            var snaps = Enumerable.Range(0, 4).Select(k => new LineSnapshot(k * 0.3e-9, Front(k * 0.3e-9))).ToList();
-            IReadOnlyList<string> paths = FrameSequence.WriteAll(dir, Line, snaps, -0.5, 1.5, 200, 140);
-            Assert.Equal(Enumerable.Range(1, 4).Select(k => Path.Combine(dir, $"frame_{k:D5}.png")), paths);
-            foreach (string p in paths)
-            {
-                using SKBitmap bmp = PngProbe.Decode(File.ReadAllBytes(p));
-                Assert.Equal((200, 140), (bmp.Width, bmp.Height));
-            }
-            Assert.Empty(Directory.GetFiles(dir, "*.tmp"));
+            using SKBitmap bmp = PngProbe.Decode(frames[k].Png);
+            Assert.Equal((200, 140), (bmp.Width, bmp.Height));
+            Assert.Equal(FrameRenderer.RenderPng(Line, snaps[k], -0.5, 1.5, 200, 140), frames[k].Png);
         }
-        finally { Directory.Delete(dir, recursive: true); }
+    }
+
+    [Fact]
+    public void Frame_sequence_refuses_a_bad_snapshot_before_the_first_frame()
+    {
+        var snaps = new[] { new LineSnapshot(0, Front(0)), new LineSnapshot(1e-9, new double[3]) };
+        Assert.Throws<ArgumentException>(() => FrameSequence.Render(Line, snaps, -0.5, 1.5, 200, 140));
     }
 
     [Fact]
