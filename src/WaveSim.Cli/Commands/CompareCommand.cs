@@ -1,5 +1,6 @@
 using System.CommandLine;
 using System.Globalization;
+using WaveSim.Cli.Parsing;
 using WaveSim.Core;
 using WaveSim.Core.Measurements;
 using WaveSim.Core.Output;
@@ -18,7 +19,7 @@ public static class CompareCommand
         var scenario = CommonOptions.Scenario();
         var capture = new CaptureArguments(required: true);
         var probe = CaptureArguments.ProbeOption();
-        var align = AlignOption("xcorr", "xcorr", "edge", "none");
+        var align = AlignOption();
         var outDir = new Option<string?>("--out", "-o") { Description = "Output folder (default: out/<scenario>-compare)" };
         var json = CommonOptions.Json();
         var force = CommonOptions.Force();
@@ -30,12 +31,12 @@ public static class CompareCommand
             string path = pr.GetValue(scenario)!;
             var s = CommonOptions.Load(path, pr.InvocationConfiguration.Error);
             string probeName = pr.GetValue(probe)!;
-            CaptureComparison.RequireProbe(s, probeName);
+            LibraryErrors.Naming(() => CaptureComparison.RequireProbe(s, probeName), ("probe", "--probe"));
             Capture cap = capture.Read(pr)!;
             CaptureArguments.Warn(cap, s.Simulation.Duration, pr.InvocationConfiguration.Error);
             CaptureComparisonResult result;
             using (var bar = new ProgressBar(pr.InvocationConfiguration.Error, "simulating"))
-                result = CaptureComparison.Run(s, cap, probeName, ParseAlign(pr.GetValue(align)!),
+                result = CaptureComparison.Run(s, cap, probeName, pr.GetValue(align),
                     new SimulationOptions { Force = pr.GetValue(force), Progress = bar }, ct);
 
             string dir = CommonOptions.OutputDir(pr.GetValue(outDir), path, "-compare");
@@ -56,25 +57,10 @@ public static class CompareCommand
         return cmd;
     }
 
-    /// <summary>--align with the given choices and default.</summary>
-    internal static Option<string> AlignOption(string defaultValue, params string[] choices)
-    {
-        var o = new Option<string>("--align")
-        {
-            Description = "Time alignment of the capture: xcorr (cross-correlation), edge (first 50 % crossings) or none",
-            DefaultValueFactory = _ => defaultValue,
-        };
-        o.AcceptOnlyFromAmong(choices);
-        return o;
-    }
-
-    /// <summary>Maps an --align choice to the library's mode.</summary>
-    internal static AlignMode ParseAlign(string text) => text switch
-    {
-        "none" => AlignMode.None,
-        "edge" => AlignMode.Edge50,
-        _ => AlignMode.CrossCorrelation,
-    };
+    /// <summary>--align: xcorr (the default), edge or none, read into the library's mode.</summary>
+    internal static Option<AlignMode> AlignOption() => ChoiceOption.Create("--align",
+        "Time alignment of the capture: xcorr (cross-correlation), edge (first 50 % crossings) or none",
+        [("xcorr", AlignMode.CrossCorrelation), ("edge", AlignMode.Edge50), ("none", AlignMode.None)], "xcorr");
 
     static void Print(TextWriter o, CaptureComparisonResult r, string dir)
     {

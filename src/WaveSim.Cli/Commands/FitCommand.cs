@@ -1,5 +1,6 @@
 using System.CommandLine;
 using System.Globalization;
+using WaveSim.Cli.Parsing;
 using WaveSim.Core;
 using WaveSim.Core.Fitting;
 using WaveSim.Core.Measurements;
@@ -23,9 +24,9 @@ public static class FitCommand
             Description = "A key path to fit, with optional bounds: line[0].segment.z0, load.c=0.5pF..5pF (repeat for each)",
             Required = true, HelpName = "KEY[=MIN..MAX]", AllowMultipleArgumentsPerToken = false,
         };
-        var align = CompareCommand.AlignOption("xcorr", "xcorr", "edge", "none");
+        var align = CompareCommand.AlignOption();
         align.Description = "Capture time axis: xcorr or edge (aligned once with the start, searched over the window, then the offset is fitted too) or none (taken as it is)";
-        var maxSims = new Option<int>("--max-sims") { Description = "Budget of simulations", DefaultValueFactory = _ => ScenarioFitOptions.DefaultMaxSimulations, HelpName = "N" };
+        var maxSims = IntegerOption.Create("--max-sims", "Budget of simulations", 1, 1_000_000, ScenarioFitOptions.DefaultMaxSimulations, "N");
         var outDir = new Option<string?>("--out", "-o") { Description = "Output folder (default: out/<scenario>-fit)" };
         var json = CommonOptions.Json();
         var force = CommonOptions.Force();
@@ -37,19 +38,19 @@ public static class FitCommand
             string path = pr.GetValue(scenario)!;
             var s = CommonOptions.Load(path, pr.InvocationConfiguration.Error);
             string probeName = pr.GetValue(probe)!;
-            CaptureComparison.RequireProbe(s, probeName);
-            var parameters = pr.GetValue(free)!.Select(f => FreeParameter.Parse(s, f)).ToList();
+            LibraryErrors.Naming(() => CaptureComparison.RequireProbe(s, probeName), ("probe", "--probe"));
+            var parameters = pr.GetValue(free)!.Select(f => LibraryErrors.Naming(() => FreeParameter.Parse(s, f), ("spec", "--free"))).ToList();
             Capture cap = capture.Read(pr)!;
             CaptureArguments.Warn(cap, s.Simulation.Duration, pr.InvocationConfiguration.Error);
             ScenarioFitResult result;
             using (var bar = new ProgressBar(pr.InvocationConfiguration.Error, "fitting"))
-                result = ScenarioFit.Run(s, cap, probeName, parameters, new ScenarioFitOptions
+                result = LibraryErrors.Naming(() => ScenarioFit.Run(s, cap, probeName, parameters, new ScenarioFitOptions
                 {
-                    Align = CompareCommand.ParseAlign(pr.GetValue(align)!),
+                    Align = pr.GetValue(align),
                     MaxSimulations = pr.GetValue(maxSims),
                     Progress = bar,
                     Force = pr.GetValue(force),
-                }, ct);
+                }, ct), ("parameters", "--free"), (nameof(ScenarioFitOptions.MaxSimulations), "--max-sims"));
 
             string dir = CommonOptions.OutputDir(pr.GetValue(outDir), path, "-fit");
             var summary = FitOutputs.Json(result);

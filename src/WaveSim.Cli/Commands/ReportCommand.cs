@@ -28,7 +28,7 @@ public static class ReportCommand
         cmd.SetAction((pr, ct) => CommandGuard.RunAsync(pr.InvocationConfiguration.Error, () =>
         {
             string path = pr.GetValue(scenario)!;
-            double band = CommonOptions.ParseBand(pr.GetValue(settle)!);
+            double band = pr.GetValue(settle);
             var s = CommonOptions.Load(path, pr.InvocationConfiguration.Error);
             string text = File.ReadAllText(path);
             var options = HtmlReport.RunOptions(s, pr.GetValue(force));

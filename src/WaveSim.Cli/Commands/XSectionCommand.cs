@@ -1,6 +1,7 @@
 using System.CommandLine;
 using System.Globalization;
 using System.Text.Json.Nodes;
+using WaveSim.Cli.Parsing;
 using WaveSim.Core;
 using WaveSim.Core.Lines;
 using WaveSim.Core.Output;
@@ -21,7 +22,7 @@ public static class XSectionCommand
         var kind = new Argument<string>("kind") { Description = "Line kind: " + string.Join(", ", CrossSectionCatalog.Kinds.Select(k => k.Name)) };
         kind.AcceptOnlyFromAmong(CrossSectionCatalog.Kinds.Select(k => k.Name).ToArray());
         var dims = CrossSectionCatalog.AllKeys.Select(d => new Option<string>("--" + d.Name) { Description = Describe(d.Name), HelpName = "value" }).ToList();
-        var z0 = new Option<string>("--z0") { Description = "Target impedance for synthesis, e.g. \"50 ohm\" (Zdiff for a coupled pair); leave one dimension out", HelpName = "ohm" };
+        var z0 = QuantityOption.Optional("--z0", Dimension.Resistance, "Target impedance for synthesis, e.g. \"50 ohm\" (Zdiff for a coupled pair); leave one dimension out", QuantityOption.Positive, "ohm");
         var solve = new Option<string>("--solve") { Description = "The dimension to solve for with --z0 (default: the one left out)", HelpName = "key" };
         var json = new Option<bool>("--json") { Description = "Print one JSON object (SI units) instead of a table" };
 
@@ -43,6 +44,9 @@ public static class XSectionCommand
 
     const string Context = "xsection";
 
+    /// <summary>Names a cross-section key (and the target "z0", the choice "solve") as this command's option.</summary>
+    static string Flag(string key) => "--" + key;
+
     static string Describe(string key)
     {
         var uses = CrossSectionCatalog.Kinds
@@ -52,35 +56,14 @@ public static class XSectionCommand
         return string.Join("; ", uses);
     }
 
-    static int Execute(string kind, Dictionary<string, string> raw, string? z0Text, string? solveKey, bool asJson, TextWriter output, TextWriter error)
+    static int Execute(string kind, Dictionary<string, string> raw, double? target, string? solveKey, bool asJson, TextWriter output, TextWriter error)
     {
         LineKindInfo info = CrossSectionCatalog.Find(kind, Context);
-        string? free = null;
-        double target = 0;
-        if (z0Text is null)
-        {
-            if (solveKey is not null) throw new InputException($"{Context}: --solve needs a target impedance --z0");
-        }
-        else
-        {
-            try { target = Quantity.Parse(z0Text, Dimension.Resistance); }
-            catch (UnitException ex) { throw new InputException($"{Context}: --z0: {ex.Message}"); }
-            var missing = info.Dimensions.Where(d => d.Required && !raw.ContainsKey(d.Name)).Select(d => d.Name).ToList();
-            if (solveKey is not null)
-            {
-                free = info.Solvable.FirstOrDefault(s => string.Equals(s, solveKey, StringComparison.OrdinalIgnoreCase))
-                    ?? throw new InputException($"{Context}: cannot solve {info.Name} for '--solve {solveKey}'; solvable: {string.Join(", ", info.Solvable)}");
-                raw.Remove(free); // the solved value replaces any given one
-            }
-            else if (missing.Count == 1) free = missing[0];
-            else if (missing.Count == 0)
-                throw new InputException($"{Context}: --z0 needs one dimension left out, or --solve KEY (solvable: {string.Join(", ", info.Solvable)})");
-            else
-                throw new InputException($"{Context}: --z0 solves for one dimension, but {string.Join(", ", missing.Select(m => "--" + m))} are missing");
-        }
+        if (target is null && solveKey is not null) throw new InputException($"{Context}: --solve needs a target impedance --z0");
+        string? free = target is null ? null : CrossSection.FreeDimension(info.Name, raw, solveKey, Context, Flag);
 
-        CrossSectionSpec spec = CrossSection.FromDictionary(info.Name, raw, Context, "--", free);
-        SynthesisResult? solved = free is null ? null : CrossSection.Solve(spec, free, target);
+        CrossSectionSpec spec = CrossSection.FromDictionary(info.Name, raw, Context, Flag, free);
+        SynthesisResult? solved = free is null ? null : CrossSection.Solve(spec, free, target!.Value);
         if (info.Pair)
         {
             CoupledLineParameters pair = CrossSection.ComputePair(solved is null ? spec : spec.With(solved.Dimension, solved.Value));

@@ -21,7 +21,7 @@ public sealed record FreeParameter(string KeyPath, double Start, double Lower, d
     /// positive start. A key the scenario does not have needs bounds; it starts at their geometric mean (their midpoint when the
     /// lower bound is not positive).</remarks>
     /// <param name="scenario">The scenario (read from text, so its values can be looked up and edited).</param>
-    /// <param name="spec">The option text.</param>
+    /// <param name="spec">The text KEY or KEY=MIN..MAX; errors name this parameter (<see cref="InputException.Parameter"/>).</param>
     /// <returns>The parameter.</returns>
     /// <exception cref="InputException">Malformed text, a unit of the wrong kind, bounds out of order, or a start outside them.</exception>
     public static FreeParameter Parse(Scenario scenario, string spec)
@@ -33,12 +33,12 @@ public sealed record FreeParameter(string KeyPath, double Start, double Lower, d
         string key = (eq < 0 ? text : text[..eq]).Trim();
         string? range = eq < 0 ? null : text[(eq + 1)..].Trim();
         if (key.Length == 0)
-            throw new InputException($"--free '{spec}': expected KEY or KEY=MIN..MAX, e.g. line[0].segment.z0 or load.c=0.5pF..5pF");
+            throw new InputException($"'{spec}': expected KEY or KEY=MIN..MAX, e.g. line[0].segment.z0 or load.c=0.5pF..5pF") { Parameter = "spec" };
 
         Dimension[] dims = KeyQuantity.Dimensions(key);
         string? current;
         try { current = ScenarioEditor.Get(scenario, key); }
-        catch (InputException ex) { throw new InputException($"--free {key}: {ex.Message}"); }
+        catch (InputException ex) { throw new InputException($"{key}: {ex.Message}") { Parameter = "spec" }; }
 
         double? start = null;
         Dimension? dim = null;
@@ -50,16 +50,16 @@ public sealed record FreeParameter(string KeyPath, double Start, double Lower, d
                 start = v;
                 dim = d;
             }
-            catch (UnitException ex) { throw new InputException($"--free {key}: the scenario's value cannot be fitted: {ex.Message}"); }
+            catch (UnitException ex) { throw new InputException($"{key}: the scenario's value cannot be fitted: {ex.Message}") { Parameter = "spec" }; }
         }
 
         double lower, upper;
         if (range is null)
         {
             if (start is not { } s0)
-                throw new InputException($"--free {key}: the scenario has no value there; give bounds, e.g. {key}=MIN..MAX");
+                throw new InputException($"{key}: the scenario has no value there; give bounds, e.g. {key}=MIN..MAX") { Parameter = "spec" };
             if (!(s0 > 0))
-                throw new InputException($"--free {key}: the start value {Show(s0)} is not positive, so default bounds [start/3, start*3] do not apply; give bounds, e.g. {key}=MIN..MAX");
+                throw new InputException($"{key}: the start value {Show(s0)} is not positive, so default bounds [start/3, start*3] do not apply; give bounds, e.g. {key}=MIN..MAX") { Parameter = "spec" };
             lower = s0 / DefaultBoundRatio;
             upper = s0 * DefaultBoundRatio;
         }
@@ -67,27 +67,27 @@ public sealed record FreeParameter(string KeyPath, double Start, double Lower, d
         {
             int dots = range.IndexOf("..", StringComparison.Ordinal);
             if (dots < 0)
-                throw new InputException($"--free {key}: bounds '{range}' are not MIN..MAX, e.g. {key}=0.5pF..5pF");
+                throw new InputException($"{key}: bounds '{range}' are not MIN..MAX, e.g. {key}=0.5pF..5pF") { Parameter = "spec" };
             Dimension[] boundDims = dim is { } fixedDim ? [fixedDim] : dims;
             (lower, Dimension d1) = Bound(range[..dots], key, boundDims);
             (upper, Dimension d2) = Bound(range[(dots + 2)..], key, boundDims);
             if (d1 != d2)
-                throw new InputException($"--free {key}: the bounds are of different kinds ({d1.Describe()} and {d2.Describe()})");
+                throw new InputException($"{key}: the bounds are of different kinds ({d1.Describe()} and {d2.Describe()})") { Parameter = "spec" };
             dim ??= d1;
             if (!(upper > lower))
-                throw new InputException($"--free {key}: the upper bound {Show(upper)} must be above the lower bound {Show(lower)}");
+                throw new InputException($"{key}: the upper bound {Show(upper)} must be above the lower bound {Show(lower)}") { Parameter = "spec" };
         }
 
         double startValue = start ?? (lower > 0 ? Math.Sqrt(lower * upper) : 0.5 * (lower + upper));
         if (startValue < lower || startValue > upper)
-            throw new InputException($"--free {key}: the scenario's value {Show(startValue)} lies outside the bounds {Show(lower)}..{Show(upper)}");
+            throw new InputException($"{key}: the scenario's value {Show(startValue)} lies outside the bounds {Show(lower)}..{Show(upper)}") { Parameter = "spec" };
         return new FreeParameter(key, startValue, lower, upper, KeyQuantity.Unit(dim!.Value));
     }
 
     static (double, Dimension) Bound(string text, string key, Dimension[] dims)
     {
         try { return Quantity.ParseAny(text.Trim(), dims); }
-        catch (UnitException ex) { throw new InputException($"--free {key}: bound {ex.Message}"); }
+        catch (UnitException ex) { throw new InputException($"{key}: bound {ex.Message}") { Parameter = "spec" }; }
     }
 
     static string Show(double x) => x.ToString("G6", CultureInfo.InvariantCulture);

@@ -51,15 +51,15 @@ public static class ScenarioFit
         options ??= new ScenarioFitOptions();
         CaptureComparison.RequireProbe(scenario, probe);
         if (parameters.Count == 0)
-            throw new InputException("--free: give at least one key path to fit, e.g. --free line[0].segment.z0");
+            throw new InputException("give at least one key path to fit, e.g. line[0].segment.z0") { Parameter = "parameters" };
         var dup = parameters.GroupBy(p => p.KeyPath).FirstOrDefault(g => g.Count() > 1);
         if (dup is not null)
-            throw new InputException($"--free: '{dup.Key}' is given more than once");
+            throw new InputException($"'{dup.Key}' is given more than once") { Parameter = "parameters" };
 
         bool fitOffset = options.Align != AlignMode.None;
         int n = parameters.Count + (fitOffset ? 1 : 0);
         if (options.MaxSimulations < 2 * n + 3)
-            throw new InputException($"--max-sims: {options.MaxSimulations} is too few for {n} fitted value(s); give at least {2 * n + 3}");
+            throw new InputException($"{options.MaxSimulations} is too few for {n} fitted value(s); give at least {2 * n + 3}") { Parameter = nameof(ScenarioFitOptions.MaxSimulations) };
 
         int simulations = 0;
         var cache = new Dictionary<string, (double[] T, double[] V)>();

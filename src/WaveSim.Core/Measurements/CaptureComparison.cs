@@ -93,10 +93,10 @@ public static class CaptureComparison
     /// <summary>Throws a one-line error naming the probes when <paramref name="probe"/> is not one of the scenario's.</summary>
     /// <param name="s">The scenario.</param>
     /// <param name="probe">Probe name.</param>
-    /// <exception cref="InputException">No such probe.</exception>
+    /// <exception cref="InputException">No such probe (naming the <c>probe</c> parameter).</exception>
     public static void RequireProbe(Scenario s, string probe)
     {
         if (!s.Probes.Any(p => p.Name == probe))
-            throw new InputException($"--probe: the scenario has no probe named '{probe}'; probes: {string.Join(", ", s.Probes.Select(p => p.Name))}");
+            throw new InputException($"the scenario has no probe named '{probe}'; probes: {string.Join(", ", s.Probes.Select(p => p.Name))}") { Parameter = "probe" };
     }
 }

@@ -26,6 +26,37 @@ public static class Reflectometer
     /// <summary>Name of the port probe of the simulated instrument.</summary>
     public const string PortProbe = "port";
 
+    /// <summary>10-90 % rise time of the simulated instrument's step when none is given, s: 35 ps.</summary>
+    public const double DefaultRiseS = 35e-12;
+
+    /// <summary>
+    /// The velocity that turns round-trip times into distances: <paramref name="velocity"/> when given, else
+    /// c/√<paramref name="epsEff"/>, else the first segment's own velocity.
+    /// </summary>
+    /// <param name="scenario">The device under test.</param>
+    /// <param name="velocity">A velocity, m/s, positive and not above c; or null.</param>
+    /// <param name="epsEff">An effective permittivity, at least 1; or null. Not together with <paramref name="velocity"/>.</param>
+    /// <returns>The velocity, m/s.</returns>
+    /// <exception cref="InputException">Both are given, or one is out of range (naming its parameter).</exception>
+    public static double DistanceVelocity(Scenario scenario, double? velocity, double? epsEff)
+    {
+        ArgumentNullException.ThrowIfNull(scenario);
+        if (velocity is not null && epsEff is not null)
+            throw new InputException("give a velocity or an effective permittivity, not both") { Parameter = nameof(epsEff) };
+        if (velocity is { } v)
+        {
+            if (!(v > 0) || !double.IsFinite(v)) throw new InputException($"expected a positive velocity, got {v} m/s") { Parameter = nameof(velocity) };
+            if (v > Units.Quantity.SpeedOfLight * (1 + 1e-9)) throw new InputException($"{v} m/s is faster than light") { Parameter = nameof(velocity) };
+            return v;
+        }
+        if (epsEff is { } e)
+        {
+            if (!(e >= 1) || !double.IsFinite(e)) throw new InputException($"must be at least 1, got {e}") { Parameter = nameof(epsEff) };
+            return Units.Quantity.SpeedOfLight / Math.Sqrt(e);
+        }
+        return scenario.Line.OfType<Segment>().First().Velocity;
+    }
+
     /// <summary>The scenario with its source replaced by the reflectometer, probed at the port, run for a round trip of the line.</summary>
     /// <param name="scenario">The device under test.</param>
     /// <param name="riseS">10-90 % rise time of the step, s. Must be positive.</param>
@@ -106,7 +137,7 @@ public static class Reflectometer
         if (first <= 0 || !(v[first] > baseline))
             throw new InputException($"{Path.GetFileName(capture.Source)}: no rising incident edge after a flat baseline; a reflectometer trace starts before the edge");
         if (incidentVolts is { } given && !(given > 0 && double.IsFinite(given)))
-            throw new InputException($"--incident: expected a positive voltage, got {given} V");
+            throw new InputException($"expected a positive voltage, got {given} V") { Parameter = "incidentVolts" };
 
         double ramp = 1.25 * riseHintS, inc = incidentVolts ?? 0, t50 = t[first];
         for (int pass = 0; pass < 6; pass++)
@@ -114,7 +145,7 @@ public static class Reflectometer
             if (incidentVolts is null)
                 inc = Plateau(t, v, t[first] + 1.5 * ramp, t[first] + 3 * ramp) - baseline;
             if (!(inc > threshold))
-                throw new InputException($"{Path.GetFileName(capture.Source)}: the incident step is lost in the noise; give --incident");
+                throw new InputException($"{Path.GetFileName(capture.Source)}: the incident step is lost in the noise; give its size") { Parameter = "incidentVolts" };
             double t10 = Crossing(t, v, baseline + 0.1 * inc), t90 = Crossing(t, v, baseline + 0.9 * inc);
             t50 = Crossing(t, v, baseline + 0.5 * inc);
             if (!double.IsFinite(t10) || !double.IsFinite(t90) || !(t90 > t10))

@@ -58,7 +58,7 @@ public sealed partial record SweepAxis(string KeyPath, Dimension Dimension, IRea
         ? (Values[index] * 100).ToString("R", CultureInfo.InvariantCulture) + " %"
         : Scenarios.ScenarioEditor.Format(Values[index], Unit);
 
-    /// <summary>Reads <c>KEY=RANGE</c> as given to <c>--vary</c>.</summary>
+    /// <summary>Reads <c>KEY=RANGE</c>; an error names the <c>text</c> parameter (<see cref="InputException.Parameter"/>).</summary>
     /// <exception cref="InputException">The text is not KEY=RANGE, the range is malformed, or its values mix dimensions.</exception>
     public static SweepAxis Parse(string text)
     {
@@ -141,5 +141,5 @@ public sealed partial record SweepAxis(string KeyPath, Dimension Dimension, IRea
         return d.PerLength ? num + "/m" : num;
     }
 
-    static InputException Bad(string text, string why) => new($"--vary '{text}': {why}");
+    static InputException Bad(string text, string why) => new($"'{text}': {why}") { Parameter = "text" };
 }

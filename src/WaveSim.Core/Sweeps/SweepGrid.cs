@@ -38,17 +38,17 @@ public sealed class SweepGrid
     /// <exception cref="InputException">A key does not exist, a value has the wrong unit or is out of range, or a plan is too large.</exception>
     public static SweepGrid Build(Scenario scenario, IReadOnlyList<SweepAxis> axes, bool force = false)
     {
-        if (axes.Count == 0) throw new InputException("a sweep needs at least one --vary KEY=RANGE");
+        if (axes.Count == 0) throw new InputException("a sweep needs at least one axis (KEY=RANGE)") { Parameter = "axes" };
         var dup = axes.GroupBy(a => a.KeyPath).FirstOrDefault(g => g.Count() > 1);
-        if (dup is not null) throw new InputException($"--vary: key '{dup.Key}' is varied twice");
+        if (dup is not null) throw new InputException($"key '{dup.Key}' is varied twice") { Parameter = "axes" };
         long total = axes.Aggregate(1L, (n, a) => n * a.Values.Count);
-        if (total > MaxPoints) throw new InputException($"--vary: the grid has {total} points (limit {MaxPoints}); use fewer values");
+        if (total > MaxPoints) throw new InputException($"the grid has {total} points (limit {MaxPoints}); use fewer values") { Parameter = "axes" };
 
-        // Each key alone at its first value: a missing key or a wrong unit is reported against the option that caused it.
+        // Each key alone at its first value: a missing key or a wrong unit is reported against the axis that caused it.
         foreach (var a in axes)
         {
             try { ScenarioEditor.With(scenario, [(a.KeyPath, a.Text(0))]); }
-            catch (InputException ex) { throw new InputException($"--vary {a.KeyPath}: {ex.Message}"); }
+            catch (InputException ex) { throw new InputException($"{a.KeyPath}: {ex.Message}") { Parameter = "axes" }; }
         }
         var points = new SweepPoint[total];
         for (int i = 0; i < total; i++)
