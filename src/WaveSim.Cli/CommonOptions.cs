@@ -43,7 +43,7 @@ public static class CommonOptions
 
     /// <summary>--settle-band: the settling band of the signal-quality figures, read as a fraction of the swing ("5 %" or "0.05").</summary>
     public static Option<double> SettleBand() =>
-        OptionValue.Create("--settle-band", "Settling band as a fraction or percentage of the swing", ParseBand, "5 %");
+        OptionValue.Create("--settle-band", "Settling band as a fraction or percentage of the swing", ParseBand, "5 %", "BAND");
 
     /// <summary>Reads a settling band: "5 %" or "0.05".</summary>
     public static double ParseBand(string text)

@@ -21,8 +21,8 @@ public static class TerminationsCommand
         var json = CommonOptions.Json();
         var force = CommonOptions.Force();
         var series = ChoiceOption.Create("--series", "Resistor series to simulate with (both are printed)", [("E24", PreferredSeries.E24), ("E96", PreferredSeries.E96)], "E96");
-        var maxOvershoot = OptionValue.Create("--max-overshoot", "Largest acceptable overshoot at the receiver", ParseOvershoot, "10 %");
-        var maxSettling = QuantityOption.Create("--max-settling", Dimension.Time, "Largest acceptable settling time at the receiver", "5 ns", t => t > 0 ? null : "expected a time greater than zero");
+        var maxOvershoot = OptionValue.Create("--max-overshoot", "Largest acceptable overshoot at the receiver", ParseOvershoot, "10 %", "PERCENT");
+        var maxSettling = QuantityOption.Create("--max-settling", Dimension.Time, "Largest acceptable settling time at the receiver", "5 ns", t => t > 0 ? null : "expected a time greater than zero", "TIME");
         var level = QuantityOption.Optional("--thevenin-level", Dimension.Voltage, "Thevenin termination level (default: halfway between the source's low and high)", helpName: "VOLTS");
         var settle = CommonOptions.SettleBand();
         var serial = new Option<bool>("--serial") { Description = "Run the strategies one at a time" };

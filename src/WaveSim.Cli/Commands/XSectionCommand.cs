@@ -19,7 +19,7 @@ public static class XSectionCommand
     /// <summary>Creates the command; its dimension options come from <see cref="CrossSectionCatalog"/>.</summary>
     public static Command Create()
     {
-        var kind = new Argument<string>("kind") { Description = "Line kind: " + string.Join(", ", CrossSectionCatalog.Kinds.Select(k => k.Name)) };
+        var kind = new Argument<string>("kind") { Description = "Line kind: " + string.Join(", ", CrossSectionCatalog.Kinds.Select(k => k.Name)), HelpName = "KIND" };
         kind.AcceptOnlyFromAmong(CrossSectionCatalog.Kinds.Select(k => k.Name).ToArray());
         var dims = CrossSectionCatalog.AllKeys.Select(d => new Option<string>("--" + d.Name) { Description = Describe(d.Name), HelpName = "value" }).ToList();
         var z0 = QuantityOption.Optional("--z0", Dimension.Resistance, "Target impedance for synthesis, e.g. \"50 ohm\" (Zdiff for a coupled pair); leave one dimension out", QuantityOption.Positive, "ohm");
