@@ -35,7 +35,7 @@ public static class BenchCommand
                 o.WriteLine(string.Format(inv, "{0} line, {1} cells x {2} steps in {3:F3} s on one thread ({4}): {5:E3} cell updates/s",
                     ll ? "lossless" : "lossy", n, m, r.Seconds, KernelBench.VectorDescription, r.CellUpdatesPerSecond));
                 o.WriteLine(string.Format(inv, "CPU time {0:F3} s ({1:P0} of a core): {2:E3} cell updates per CPU second",
-                    r.CpuSeconds, r.CoreShare, r.CellUpdatesPerCpuSecond));
+                    r.CpuTimeS, r.CoreShare, r.CellUpdatesPerCpuSecond));
                 if (all.Count > 1)
                     o.WriteLine(string.Format(inv, "fastest of {0} repetitions; all: {1}", all.Count,
                         string.Join(", ", all.Select(x => x.CellUpdatesPerSecond.ToString("E3", inv)))));

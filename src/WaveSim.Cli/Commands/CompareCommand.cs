@@ -65,7 +65,7 @@ public static class CompareCommand
     static void Print(TextWriter o, CaptureComparisonResult r, string dir)
     {
         var c = r.Comparison;
-        o.WriteLine($"{r.Probe}: capture shifted by {Quantity.Format(c.OffsetSeconds, "s")}, {c.Time.Length} points compared");
+        o.WriteLine($"{r.Probe}: capture shifted by {Quantity.Format(c.OffsetS, "s")}, {c.Time.Length} points compared");
         o.WriteLine($"  RMS difference  {Quantity.Format(c.RmsV, "V", 3)} ({Pct(c.RmsPct)} of swing)");
         o.WriteLine($"  peak difference {Quantity.Format(c.PeakV, "V", 3)} ({Pct(c.PeakPct)} of swing)");
         o.WriteLine($"  {"figure",-20} {"simulated",12} {"captured",12} {"difference",12}");

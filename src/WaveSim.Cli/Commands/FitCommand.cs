@@ -84,8 +84,8 @@ public static class FitCommand
         }
         if (r.OffsetFitted)
         {
-            string sigma = double.IsFinite(r.OffsetUncertaintySeconds) ? Quantity.Format(r.OffsetUncertaintySeconds, "s", 3) : "undetermined";
-            o.WriteLine($"  {"capture time offset".PadRight(width)} {Quantity.Format(r.OffsetSeconds, "s"),12} ± {sigma}");
+            string sigma = double.IsFinite(r.OffsetUncertaintyS) ? Quantity.Format(r.OffsetUncertaintyS, "s", 3) : "undetermined";
+            o.WriteLine($"  {"capture time offset".PadRight(width)} {Quantity.Format(r.OffsetS, "s"),12} ± {sigma}");
         }
         o.WriteLine($"RMS error {Quantity.Format(r.RmsV, "V", 3)} (start {Quantity.Format(r.StartRmsV, "V", 3)})");
         var b = r.Basis;

@@ -54,7 +54,7 @@ public static class TdrCommand
             {
                 CaptureArguments.Warn(cap, s.Simulation.Duration, pr.InvocationConfiguration.Error);
                 trace = LibraryErrors.Naming(() => Reflectometer.FromCapture(cap, sourceOhms, pr.GetValue(incident), riseS ?? Reflectometer.DefaultRiseS),
-                    ("incidentVolts", "--incident"));
+                    ("incidentV", "--incident"));
                 if (riseS is { } given) trace = trace with { RampS = 1.25 * given };
             }
             TdrResult result = TdrAnalysis.Analyse(trace, v);
@@ -104,7 +104,7 @@ public static class TdrCommand
 
     static void Print(TextWriter o, TdrResult r, string dir, string? scenarioFile)
     {
-        o.WriteLine($"reference {Quantity.Format(r.ReferenceOhms, "Ω")}, incident {Quantity.Format(r.IncidentVolts, "V", 3)}, rise {Quantity.Format(r.RiseS, "s", 3)}, " +
+        o.WriteLine($"reference {Quantity.Format(r.ReferenceOhm, "Ω")}, incident {Quantity.Format(r.IncidentV, "V", 3)}, rise {Quantity.Format(r.RiseS, "s", 3)}, " +
                     $"velocity {Quantity.Format(r.VelocityMps, "m/s", 3)}, layer step {Quantity.Format(r.LayerStepS, "s", 3)} ({Quantity.Format(r.VelocityMps * r.LayerStepS / 2, "m", 3)})");
         o.WriteLine($"  {"from",10} {"to",10} {"Z0",10}");
         foreach (var seg in r.Segments)

@@ -85,13 +85,13 @@ public static class XSectionCommand
         var o = new JsonObject
         {
             ["z0_ohm"] = p.Z0, ["eps_eff"] = p.EpsEff, ["delay_s_per_m"] = p.DelayPerLength,
-            ["l_h_per_m"] = p.L, ["c_f_per_m"] = p.C, ["r_dc_ohm_per_m"] = p.RDc,
+            ["l_H_per_m"] = p.L, ["c_F_per_m"] = p.C, ["r_dc_ohm_per_m"] = p.RDc,
         };
         if (p.FrequencyHz is double f)
         {
-            o["frequency_hz"] = f;
+            o["frequency_Hz"] = f;
             o["r_ac_ohm_per_m"] = p.RAc;
-            o["g_s_per_m"] = p.G;
+            o["g_S_per_m"] = p.G;
         }
         return o;
     }

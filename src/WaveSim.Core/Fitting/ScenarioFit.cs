@@ -87,7 +87,7 @@ public static class ScenarioFit
         double offset0 = 0.0;
         if (fitOffset)
         {
-            double aligned = WaveformComparison.Compare(t0, v0, capture.Time, capture.Volts, options.Align).OffsetSeconds;
+            double aligned = WaveformComparison.Compare(t0, v0, capture.Time, capture.Volts, options.Align).OffsetS;
             offset0 = OffsetSearch.Best(t0, v0, capture.Time, capture.Volts, aligned, window);
         }
         CaptureTimeSpan.RequireOverlap(capture, offset0, t0[0], t0[^1]);

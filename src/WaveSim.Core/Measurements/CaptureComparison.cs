@@ -41,7 +41,7 @@ public static class CaptureComparison
         ProbeTrace trace = sim.Probe(probe);
         CaptureTimeSpan.RequireFits(capture, sim.Time[^1] - sim.Time[0]);
         AlignedWaveforms c = WaveformComparison.Compare(sim.Time, trace.Volts, capture.Time, capture.Volts, mode);
-        CaptureTimeSpan.RequireOverlap(capture, c.OffsetSeconds, sim.Time[0], sim.Time[^1]);
+        CaptureTimeSpan.RequireOverlap(capture, c.OffsetS, sim.Time[0], sim.Time[^1]);
         // Both sets of figures on the same grid and with the same options, so that their difference is the capture's doing.
         // The simulation's edge heads for its DC level, as in `wavesim run` (a clock's record tail is no settled level).
         SignalQualityOptions simOptions = FigureOptions(sim.Scenario, probe) with { FinalLevelV = trace.SettledVolts };
