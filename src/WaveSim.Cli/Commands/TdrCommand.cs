@@ -53,9 +53,7 @@ public static class TdrCommand
             else
             {
                 CaptureArguments.Warn(cap, s.Simulation.Duration, pr.InvocationConfiguration.Error);
-                trace = LibraryErrors.Naming(() => Reflectometer.FromCapture(cap, sourceOhms, pr.GetValue(incident), riseS ?? Reflectometer.DefaultRiseS),
-                    ("incidentV", "--incident"));
-                if (riseS is { } given) trace = trace with { RampS = 1.25 * given };
+                trace = LibraryErrors.Naming(() => Reflectometer.FromCapture(cap, sourceOhms, pr.GetValue(incident), riseS), ("incidentV", "--incident"));
             }
             TdrResult result = TdrAnalysis.Analyse(trace, v);
 

@@ -101,6 +101,23 @@ public static class Reflectometer
         return new ReflectometerTrace(r.Time, r.Probe(PortProbe).Volts, instrument.Source.Delay + ramp / 2, incident, 0, ramp, sourceOhm);
     }
 
+    /// <summary>
+    /// Finds the incident step in a captured port record, with the edge's rise time either given, when it also sets the edge
+    /// ramp (1.25 × the 10-90 % rise, as for the simulated instrument), or measured from the record starting from
+    /// <see cref="DefaultRiseS"/>.
+    /// </summary>
+    /// <param name="capture">The port voltage record.</param>
+    /// <param name="referenceOhm">The instrument's impedance, Ω.</param>
+    /// <param name="incidentV">The incident step amplitude, V; null to read it from the plateau after the edge.</param>
+    /// <param name="riseS">The edge's 10-90 % rise time, s; null to measure it.</param>
+    /// <returns>The trace with its reference instant, incident amplitude, baseline and edge ramp.</returns>
+    /// <exception cref="InputException">No rising incident edge can be found.</exception>
+    public static ReflectometerTrace FromCapture(Capture capture, double referenceOhm, double? incidentV, double? riseS)
+    {
+        var trace = FromCapture(capture, referenceOhm, incidentV, riseS ?? DefaultRiseS);
+        return riseS is { } given ? trace with { RampS = 1.25 * given } : trace;
+    }
+
     /// <summary>Finds the incident step in a captured port record (see the class remarks).</summary>
     /// <param name="capture">The port voltage record.</param>
     /// <param name="referenceOhm">The instrument's impedance, Ω.</param>

@@ -44,3 +44,25 @@ simulation: { duration: 5 ns, resolution: 10 }
         Assert.DoesNotContain("--", ex.Message);
     }
 }
+
+/// <summary>A captured trace read with a given or a measured rise time (the choice used to be made inside the tdr command).</summary>
+public class CaptureRiseTests
+{
+    // A 1 V step through a first-order edge (time constant 20 ps) at 1 ns, sampled every 1 ps: its 10-90 % rise is
+    // τ·ln 9 (single-pole response; common practice, no source).
+    static Capture Trace()
+    {
+        double[] t = Enumerable.Range(0, 4000).Select(i => i * 1e-12).ToArray();
+        double[] v = t.Select(x => x < 1e-9 ? 0 : 1 - Math.Exp(-(x - 1e-9) / 20e-12)).ToArray();
+        return new Capture(t, v, "trace.csv");
+    }
+
+    [Fact]
+    public void A_given_rise_sets_the_ramp_and_a_missing_one_is_measured()
+    {
+        var given = Reflectometer.FromCapture(Trace(), 50, null, (double?)100e-12);
+        Assert.Equal(1.25 * 100e-12, given.RampS, 1e-18);
+        var measured = Reflectometer.FromCapture(Trace(), 50, null, (double?)null);
+        Assert.InRange(measured.RampS, 1.25 * 20e-12 * Math.Log(9) * 0.8, 1.25 * 20e-12 * Math.Log(9) * 1.2);
+    }
+}
