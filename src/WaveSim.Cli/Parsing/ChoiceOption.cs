@@ -12,10 +12,7 @@ public static class ChoiceOption
     /// <param name="choices">The names and their values.</param>
     /// <param name="defaultName">The name used when the option is not given.</param>
     public static Option<T> Create<T>(string name, string description, IReadOnlyList<(string Name, T Value)> choices, string defaultName)
-    {
-        var option = OptionValue.Create(name, description, t => Read(t, choices), defaultName, string.Join("|", choices.Select(c => c.Name)));
-        return option;
-    }
+        => OptionValue.Create(name, description, t => Read(t, choices), defaultName, string.Join("|", choices.Select(c => c.Name)));
 
     static T Read<T>(string text, IReadOnlyList<(string Name, T Value)> choices)
     {
