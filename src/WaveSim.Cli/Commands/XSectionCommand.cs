@@ -1,6 +1,5 @@
 using System.CommandLine;
 using System.Globalization;
-using System.Text.Json.Nodes;
 using WaveSim.Cli.Parsing;
 using WaveSim.Core;
 using WaveSim.Core.Lines;
@@ -68,50 +67,16 @@ public static class XSectionCommand
         {
             CoupledLineParameters pair = CrossSection.ComputePair(solved is null ? spec : spec.With(solved.Dimension, solved.Value));
             foreach (string w in pair.Warnings) error.WriteLine("warning: " + w);
-            if (asJson) WritePairJson(pair, solved, output);
+            if (asJson) output.WriteLine(JsonText.Write(CrossSectionJson.Pair(pair, solved)));
             else WritePairTable(pair, solved, output);
             return ExitCodes.Ok;
         }
         LineParameters line = solved?.Line ?? CrossSection.Compute(spec);
 
         foreach (string w in line.Warnings) error.WriteLine("warning: " + w);
-        if (asJson) WriteJson(line, solved, output);
+        if (asJson) output.WriteLine(JsonText.Write(CrossSectionJson.Line(line, solved)));
         else WriteTable(line, solved, output);
         return ExitCodes.Ok;
-    }
-
-    static JsonObject LineJson(LineParameters p)
-    {
-        var o = new JsonObject
-        {
-            ["z0_ohm"] = p.Z0, ["eps_eff"] = p.EpsEff, ["delay_s_per_m"] = p.DelayPerLength,
-            ["l_H_per_m"] = p.L, ["c_F_per_m"] = p.C, ["r_dc_ohm_per_m"] = p.RDc,
-        };
-        if (p.FrequencyHz is double f)
-        {
-            o["frequency_Hz"] = f;
-            o["r_ac_ohm_per_m"] = p.RAc;
-            o["g_S_per_m"] = p.G;
-        }
-        return o;
-    }
-
-    static void WritePairJson(CoupledLineParameters p, SynthesisResult? solved, TextWriter output)
-    {
-        var o = new JsonObject { ["kind"] = p.Kind };
-        if (solved is not null)
-            o[solved.Dimension == "er" ? "er" : solved.Dimension + "_m"] = solved.Value;
-        o["z0_even_ohm"] = p.Z0Even;
-        o["z0_odd_ohm"] = p.Z0Odd;
-        o["eps_eff_even"] = p.Even.EpsEff;
-        o["eps_eff_odd"] = p.Odd.EpsEff;
-        o["z_diff_ohm"] = p.Zdiff;
-        o["z_comm_ohm"] = p.Zcomm;
-        o["coupling"] = p.Coupling;
-        o["differential"] = LineJson(p.Differential);
-        o["common"] = LineJson(p.Common);
-        o["warnings"] = new JsonArray(p.Warnings.Select(w => (JsonNode?)JsonValue.Create(w)).ToArray());
-        output.WriteLine(JsonText.Write(o));
     }
 
     static void WritePairTable(CoupledLineParameters p, SynthesisResult? solved, TextWriter output)
@@ -162,17 +127,6 @@ public static class XSectionCommand
         int width = rows.Max(r => r.Name.Length) + 2;
         output.WriteLine(kind);
         foreach (var (name, value) in rows) output.WriteLine("  " + name.PadRight(width) + value);
-    }
-
-    static void WriteJson(LineParameters p, SynthesisResult? solved, TextWriter output)
-    {
-        var o = new JsonObject { ["kind"] = p.Kind };
-        if (solved is not null)
-            o[solved.Dimension == "er" ? "er" : solved.Dimension + "_m"] = solved.Value;
-        foreach (var (key, value) in LineJson(p).ToList())
-            o[key] = value?.DeepClone();
-        o["warnings"] = new JsonArray(p.Warnings.Select(w => (JsonNode?)JsonValue.Create(w)).ToArray());
-        output.WriteLine(JsonText.Write(o));
     }
 
     static void WriteTable(LineParameters p, SynthesisResult? solved, TextWriter output)
