@@ -56,6 +56,32 @@ simulation: { duration: 2 ns, resolution: 10 }
     public void A_library_error_about_a_parameter_is_shown_against_its_flag(string start, params string[] args) => Refused(2, start, args);
 
     [Fact]
+    public void Values_and_help_defaults_read_the_same_under_a_decimal_comma_locale()
+    {
+        // Option values are now read while the line is parsed, outside the command's invariant-culture scope: they must
+        // still read "1.5 ns" with a point, and help must show the defaults as written, not as "0,05".
+        var saved = System.Globalization.CultureInfo.CurrentCulture;
+        try
+        {
+            var comma = (System.Globalization.CultureInfo)System.Globalization.CultureInfo.InvariantCulture.Clone();
+            comma.NumberFormat.NumberDecimalSeparator = ",";
+            comma.NumberFormat.NumberGroupSeparator = ".";
+            System.Globalization.CultureInfo.CurrentCulture = comma;
+            var root = WaveSim.Cli.Program.BuildRoot();
+            var tdr = root.Subcommands.Single(c => c.Name == "tdr");
+            var rise = tdr.Options.OfType<System.CommandLine.Option<double?>>().Single(o => o.Name == "--rise");
+            var pr = root.Parse(["tdr", "x.yaml", "--rise", "1.5 ns"]);
+            Assert.Empty(pr.Errors);
+            Assert.Equal(1.5e-9, pr.GetValue(rise)!.Value, 1e-24);
+            var (code, help, _) = CliRunner.Run("run", "--help");
+            Assert.Equal(0, code);
+            Assert.Contains("[default: 5 %]", help);
+            Assert.DoesNotContain("0,05", help);
+        }
+        finally { System.Globalization.CultureInfo.CurrentCulture = saved; }
+    }
+
+    [Fact]
     public void The_library_names_no_command_line_flag()
     {
         // Issue 13: the library knows no command line. Any "--word" in its code, messages or comments is a flag.
