@@ -76,12 +76,10 @@ public static class CompareCommand
 
     static string Pct(double p) => double.IsFinite(p) ? p.ToString("F2", CultureInfo.InvariantCulture) + " %" : "-";
 
-    static string Show(string name, double? x)
+    static string Show(string name, double? x) => x is not { } v ? "-" : Core.Sweeps.FigureSelector.Unit(name) switch
     {
-        if (x is not { } v) return "-";
-        if (name.EndsWith("_s", StringComparison.Ordinal)) return Quantity.Format(v, "s", 3);
-        if (name.EndsWith("_V", StringComparison.Ordinal)) return Quantity.Format(v, "V", 3);
-        if (name.EndsWith("_pct", StringComparison.Ordinal)) return v.ToString("F1", CultureInfo.InvariantCulture) + " %";
-        return v.ToString("G4", CultureInfo.InvariantCulture);
-    }
+        "%" => v.ToString("F1", CultureInfo.InvariantCulture) + " %",
+        "" => v.ToString("G4", CultureInfo.InvariantCulture),
+        var unit => Quantity.Format(v, unit, 3),
+    };
 }
