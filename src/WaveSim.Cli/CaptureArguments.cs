@@ -1,5 +1,6 @@
 using System.CommandLine;
 using System.Globalization;
+using WaveSim.Cli.Parsing;
 using WaveSim.Core;
 using WaveSim.Core.Measurements;
 
@@ -9,31 +10,26 @@ namespace WaveSim.Cli;
 public sealed class CaptureArguments
 {
     /// <summary>Seconds per unit accepted by --time-unit.</summary>
-    public static readonly IReadOnlyDictionary<string, double> TimeUnits = new Dictionary<string, double>
-    {
-        ["s"] = 1, ["ms"] = 1e-3, ["us"] = 1e-6, ["ns"] = 1e-9, ["ps"] = 1e-12,
-    };
+    public static readonly IReadOnlyList<(string Name, double Seconds)> TimeUnits = [("s", 1), ("ms", 1e-3), ("us", 1e-6), ("ns", 1e-9), ("ps", 1e-12)];
 
     /// <summary>--capture FILE.</summary>
     public Option<string?> File { get; }
     /// <summary>--skip N.</summary>
-    public Option<int?> Skip { get; } = new("--skip") { Description = "Lines to skip before the header or first data row (default: found automatically)", HelpName = "N" };
+    public Option<int?> Skip { get; } = IntegerOption.Optional("--skip", "Lines to skip before the header or first data row (default: found automatically)", 0, int.MaxValue, "N");
     /// <summary>--time-col NAME|N.</summary>
     public Option<string?> TimeColumn { get; } = new("--time-col") { Description = "Time column: header name or 1-based number (default: first numeric column)", HelpName = "NAME|N" };
     /// <summary>--volt-col NAME|N.</summary>
     public Option<string?> VoltColumn { get; } = new("--volt-col") { Description = "Voltage column: header name or 1-based number (default: next numeric column)", HelpName = "NAME|N" };
     /// <summary>--time-unit s|ms|us|ns|ps.</summary>
-    public Option<string> TimeUnit { get; }
+    public Option<double> TimeUnit { get; } = ChoiceOption.Create("--time-unit", "Unit of the time column", TimeUnits, "s");
     /// <summary>--volt-scale X.</summary>
-    public Option<string> VoltScale { get; } = new("--volt-scale") { Description = "Volts per file unit, e.g. 0.001 for mV or -1 for an inverted probe", HelpName = "X", DefaultValueFactory = _ => "1" };
+    public Option<double> VoltScale { get; } = OptionValue.Create("--volt-scale", "Volts per file unit, e.g. 0.001 for mV or -1 for an inverted probe", ReadScale, "1", "X");
 
     /// <summary>Creates the options; <paramref name="required"/> makes --capture mandatory.</summary>
     /// <param name="required">True for commands that cannot work without a capture.</param>
     public CaptureArguments(bool required)
     {
         File = new Option<string?>("--capture") { Description = "Measured waveform: delimited text, time and voltage columns", HelpName = "FILE", Required = required };
-        TimeUnit = new Option<string>("--time-unit") { Description = "Unit of the time column", DefaultValueFactory = _ => "s" };
-        TimeUnit.AcceptOnlyFromAmong([.. TimeUnits.Keys]);
     }
 
     /// <summary>Adds every option to <paramref name="command"/>.</summary>
@@ -56,19 +52,20 @@ public sealed class CaptureArguments
     {
         string? path = pr.GetValue(File);
         if (path is null) return null;
-        string scaleText = pr.GetValue(VoltScale)!;
-        if (!double.TryParse(scaleText, NumberStyles.Float, CultureInfo.InvariantCulture, out double scale) || scale == 0 || !double.IsFinite(scale))
-            throw new InputException($"--volt-scale: expected a non-zero number of volts per file unit, e.g. 0.001, got '{scaleText}'");
         var options = new CaptureOptions
         {
             Skip = pr.GetValue(Skip),
             TimeColumn = pr.GetValue(TimeColumn),
             VoltColumn = pr.GetValue(VoltColumn),
-            TimeScale = TimeUnits[pr.GetValue(TimeUnit)!],
-            VoltScale = scale,
+            TimeScale = pr.GetValue(TimeUnit),
+            VoltScale = pr.GetValue(VoltScale),
         };
         return CaptureReader.Read(path, options);
     }
+
+    static double ReadScale(string text) =>
+        double.TryParse(text, NumberStyles.Float, CultureInfo.InvariantCulture, out double scale) && scale != 0 && double.IsFinite(scale) ? scale
+        : throw new OptionValueException($"expected a non-zero number of volts per file unit, e.g. 0.001, got '{text}'");
 
     /// <summary>The required --probe option: the scenario probe a capture was taken at.</summary>
     public static Option<string> ProbeOption() =>

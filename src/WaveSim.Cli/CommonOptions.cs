@@ -1,4 +1,5 @@
 using System.CommandLine;
+using WaveSim.Cli.Parsing;
 using WaveSim.Core;
 using WaveSim.Core.Model;
 using WaveSim.Core.Scenarios;
@@ -55,15 +56,15 @@ public static class CommonOptions
     public static string OutputDir(string? option, string scenarioPath, string suffix = "") =>
         option ?? Path.Combine("out", Path.GetFileNameWithoutExtension(scenarioPath) + suffix);
 
-    /// <summary>--settle-band: the settling band of the signal-quality figures.</summary>
-    public static Option<string> SettleBand() =>
-        new("--settle-band") { Description = "Settling band as a fraction or percentage of the swing", DefaultValueFactory = _ => "5 %" };
+    /// <summary>--settle-band: the settling band of the signal-quality figures, read as a fraction of the swing ("5 %" or "0.05").</summary>
+    public static Option<double> SettleBand() =>
+        OptionValue.Create("--settle-band", "Settling band as a fraction or percentage of the swing", ParseBand, "5 %", "BAND");
 
     /// <summary>Reads a settling band: "5 %" or "0.05".</summary>
     public static double ParseBand(string text)
     {
         var (v, _) = Quantity.ParseAny(text, Dimension.Percent, Dimension.Number);
-        if (!(v > 0 && v < 0.5)) throw new InputException($"--settle-band: expected a band between 0 and 50 % of the swing, got '{text}'");
+        if (!(v > 0 && v < 0.5)) throw new OptionValueException($"expected a band between 0 and 50 % of the swing, got '{text}'");
         return v;
     }
 }

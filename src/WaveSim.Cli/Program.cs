@@ -1,5 +1,6 @@
 using System.CommandLine;
 using WaveSim.Cli.Commands;
+using WaveSim.Cli.Parsing;
 
 namespace WaveSim.Cli;
 
@@ -7,21 +8,27 @@ namespace WaveSim.Cli;
 public static class Program
 {
     /// <summary>Builds the root command with every subcommand.</summary>
-    public static RootCommand BuildRoot() => new("wavesim - transmission-line wave simulator")
+    public static RootCommand BuildRoot()
     {
-        RunCommand.Create(),
-        CheckCommand.Create(),
-        SweepCommand.Create(),
-        TerminationsCommand.Create(),
-        CompareCommand.Create(),
-        FitCommand.Create(),
-        TdrCommand.Create(),
-        ReportCommand.Create(),
-        XSectionCommand.Create(),
-        BuffersCommand.Create(),
-        BenchCommand.Create(),
-        AboutCommand.Create(),
-    };
+        var root = new RootCommand("wavesim - transmission-line wave simulator")
+        {
+            RunCommand.Create(),
+            CheckCommand.Create(),
+            SweepCommand.Create(),
+            TerminationsCommand.Create(),
+            CompareCommand.Create(),
+            FitCommand.Create(),
+            TdrCommand.Create(),
+            ReportCommand.Create(),
+            XSectionCommand.Create(),
+            BuffersCommand.Create(),
+            BenchCommand.Create(),
+            AboutCommand.Create(),
+        };
+        // Parse errors become the tool's one error line (exit 2 for a bad value, 1 for a malformed line), not the usage screen.
+        GuardedAction.Apply(root);
+        return root;
+    }
 
     /// <summary>
     /// How long a command may take, after Ctrl+C or SIGTERM cancels it, to stop and remove its staging folder before the

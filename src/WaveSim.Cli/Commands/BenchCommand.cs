@@ -1,6 +1,6 @@
 using System.CommandLine;
-using System.CommandLine.Parsing;
 using System.Globalization;
+using WaveSim.Cli.Parsing;
 using WaveSim.Core.Solver;
 
 namespace WaveSim.Cli.Commands;
@@ -11,21 +11,9 @@ public static class BenchCommand
     /// <summary>Creates the command.</summary>
     public static Command Create()
     {
-        var cells = new Option<int>("--cells")
-        {
-            Description = "Cells in the test line (at least 2)", DefaultValueFactory = _ => 10_000,
-            CustomParser = r => PositiveInt(r, "--cells", 2),
-        };
-        var steps = new Option<int?>("--steps")
-        {
-            Description = "Timed steps per repetition (default: about 2.5e9 cell updates, about 1 s)",
-            CustomParser = r => PositiveInt(r, "--steps", 1),
-        };
-        var repeat = new Option<int>("--repeat")
-        {
-            Description = "Timed repetitions; the fastest is reported, since other work only slows a run", DefaultValueFactory = _ => KernelBench.DefaultRepeats,
-            CustomParser = r => PositiveInt(r, "--repeat", 1),
-        };
+        var cells = IntegerOption.Create("--cells", "Cells in the test line (at least 2)", 2, int.MaxValue, 10_000, "N");
+        var steps = IntegerOption.Optional("--steps", "Timed steps per repetition (default: about 2.5e9 cell updates, about 1 s)", 1, int.MaxValue, "N");
+        var repeat = IntegerOption.Create("--repeat", "Timed repetitions; the fastest is reported, since other work only slows a run", 1, int.MaxValue, KernelBench.DefaultRepeats, "N");
         var lossless = new Option<bool>("--lossless") { Description = "Time a lossless line instead of a lossy one" };
         var json = new Option<bool>("--json") { Description = "Print one JSON object instead of text" };
 
@@ -35,7 +23,7 @@ public static class BenchCommand
             int n = pr.GetValue(cells);
             int m = pr.GetValue(steps) ?? KernelBench.DefaultSteps(n);
             bool ll = pr.GetValue(lossless);
-            var all = KernelBench.Measure(n, m, ll, pr.GetValue(repeat));
+            var all = LibraryErrors.Naming(() => KernelBench.Measure(n, m, ll, pr.GetValue(repeat)), ("cells", "--cells"), ("steps", "--steps"), ("repeats", "--repeat"));
             var r = all.MaxBy(x => x.CellUpdatesPerSecond)!;
             var o = pr.InvocationConfiguration.Output;
             var inv = CultureInfo.InvariantCulture;
@@ -47,7 +35,7 @@ public static class BenchCommand
                 o.WriteLine(string.Format(inv, "{0} line, {1} cells x {2} steps in {3:F3} s on one thread ({4}): {5:E3} cell updates/s",
                     ll ? "lossless" : "lossy", n, m, r.Seconds, KernelBench.VectorDescription, r.CellUpdatesPerSecond));
                 o.WriteLine(string.Format(inv, "CPU time {0:F3} s ({1:P0} of a core): {2:E3} cell updates per CPU second",
-                    r.CpuSeconds, r.CoreShare, r.CellUpdatesPerCpuSecond));
+                    r.CpuTimeS, r.CoreShare, r.CellUpdatesPerCpuSecond));
                 if (all.Count > 1)
                     o.WriteLine(string.Format(inv, "fastest of {0} repetitions; all: {1}", all.Count,
                         string.Join(", ", all.Select(x => x.CellUpdatesPerSecond.ToString("E3", inv)))));
@@ -55,13 +43,5 @@ public static class BenchCommand
             return 0;
         }));
         return cmd;
-    }
-
-    static int PositiveInt(ArgumentResult r, string name, int min)
-    {
-        string text = r.Tokens.Count > 0 ? r.Tokens[0].Value : "";
-        if (int.TryParse(text, NumberStyles.Integer, CultureInfo.InvariantCulture, out int x) && x >= min) return x;
-        r.AddError($"{name}: expected a whole number of at least {min} (got '{text}').");
-        return min;
     }
 }

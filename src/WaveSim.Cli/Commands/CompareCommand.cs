@@ -1,5 +1,6 @@
 using System.CommandLine;
 using System.Globalization;
+using WaveSim.Cli.Parsing;
 using WaveSim.Core;
 using WaveSim.Core.Measurements;
 using WaveSim.Core.Output;
@@ -19,7 +20,7 @@ public static class CompareCommand
         var scenario = CommonOptions.Scenario();
         var capture = new CaptureArguments(required: true);
         var probe = CaptureArguments.ProbeOption();
-        var align = AlignOption("xcorr", "xcorr", "edge", "none");
+        var align = AlignOption();
         var outDir = new Option<string?>("--out", "-o") { Description = "Output folder (default: out/<scenario>-compare)" };
         var json = CommonOptions.Json();
         var force = CommonOptions.Force();
@@ -31,14 +32,14 @@ public static class CompareCommand
             string path = pr.GetValue(scenario)!;
             var (s, plan) = CommonOptions.LoadPlanned(path, pr.InvocationConfiguration.Error);
             string probeName = pr.GetValue(probe)!;
-            CaptureComparison.RequireProbe(s, probeName);
+            LibraryErrors.Naming(() => CaptureComparison.RequireProbe(s, probeName), ("probe", "--probe"));
             Capture cap = capture.Read(pr)!;
             CaptureArguments.Warn(cap, s.Simulation.Duration, pr.InvocationConfiguration.Error);
             string dir = CommonOptions.OutputDir(pr.GetValue(outDir), path, "-compare");
             using var output = new OutputFolder(dir, "compare"); // held from before the work starts, so a second run into it is refused at once
             CaptureComparisonResult result;
             using (var bar = new ProgressBar(pr.InvocationConfiguration.Error, "simulating"))
-                result = CaptureComparison.Run(s, cap, probeName, ParseAlign(pr.GetValue(align)!),
+                result = CaptureComparison.Run(s, cap, probeName, pr.GetValue(align),
                     new RunOptions { Force = pr.GetValue(force), Plan = plan, Progress = bar }, ct);
 
             var summary = CompareOutputs.Json(result);
@@ -55,30 +56,15 @@ public static class CompareCommand
         return cmd;
     }
 
-    /// <summary>--align with the given choices and default.</summary>
-    internal static Option<string> AlignOption(string defaultValue, params string[] choices)
-    {
-        var o = new Option<string>("--align")
-        {
-            Description = "Time alignment of the capture: xcorr (cross-correlation), edge (first 50 % crossings) or none",
-            DefaultValueFactory = _ => defaultValue,
-        };
-        o.AcceptOnlyFromAmong(choices);
-        return o;
-    }
-
-    /// <summary>Maps an --align choice to the library's mode.</summary>
-    internal static AlignMode ParseAlign(string text) => text switch
-    {
-        "none" => AlignMode.None,
-        "edge" => AlignMode.Edge50,
-        _ => AlignMode.CrossCorrelation,
-    };
+    /// <summary>--align: xcorr (the default), edge or none, read into the library's mode.</summary>
+    internal static Option<AlignMode> AlignOption() => ChoiceOption.Create("--align",
+        "Time alignment of the capture: xcorr (cross-correlation), edge (first 50 % crossings) or none",
+        [("xcorr", AlignMode.CrossCorrelation), ("edge", AlignMode.Edge50), ("none", AlignMode.None)], "xcorr");
 
     static void Print(TextWriter o, CaptureComparisonResult r, string dir)
     {
         var c = r.Comparison;
-        o.WriteLine($"{r.Probe}: capture shifted by {Quantity.Format(c.OffsetSeconds, "s")}, {c.Time.Length} points compared");
+        o.WriteLine($"{r.Probe}: capture shifted by {Quantity.Format(c.OffsetS, "s")}, {c.Time.Length} points compared");
         o.WriteLine($"  RMS difference  {Quantity.Format(c.RmsV, "V", 3)} ({Pct(c.RmsPct)} of swing)");
         o.WriteLine($"  peak difference {Quantity.Format(c.PeakV, "V", 3)} ({Pct(c.PeakPct)} of swing)");
         o.WriteLine($"  {"figure",-20} {"simulated",12} {"captured",12} {"difference",12}");
@@ -89,12 +75,10 @@ public static class CompareCommand
 
     static string Pct(double p) => double.IsFinite(p) ? p.ToString("F2", CultureInfo.InvariantCulture) + " %" : "-";
 
-    static string Show(string name, double? x)
+    static string Show(string name, double? x) => x is not { } v ? "-" : Core.Sweeps.FigureSelector.Unit(name) switch
     {
-        if (x is not { } v) return "-";
-        if (name.EndsWith("_s", StringComparison.Ordinal)) return Quantity.Format(v, "s", 3);
-        if (name.EndsWith("_V", StringComparison.Ordinal)) return Quantity.Format(v, "V", 3);
-        if (name.EndsWith("_pct", StringComparison.Ordinal)) return v.ToString("F1", CultureInfo.InvariantCulture) + " %";
-        return v.ToString("G4", CultureInfo.InvariantCulture);
-    }
+        "%" => v.ToString("F1", CultureInfo.InvariantCulture) + " %",
+        "" => v.ToString("G4", CultureInfo.InvariantCulture),
+        var unit => Quantity.Format(v, unit, 3),
+    };
 }

@@ -1,5 +1,6 @@
 using System.CommandLine;
 using System.Globalization;
+using WaveSim.Cli.Parsing;
 using WaveSim.Core;
 using WaveSim.Core.Fitting;
 using WaveSim.Core.Measurements;
@@ -24,9 +25,9 @@ public static class FitCommand
             Description = "A key path to fit, with optional bounds: line[0].segment.z0, load.c=0.5pF..5pF (repeat for each)",
             Required = true, HelpName = "KEY[=MIN..MAX]", AllowMultipleArgumentsPerToken = false,
         };
-        var align = CompareCommand.AlignOption("xcorr", "xcorr", "edge", "none");
+        var align = CompareCommand.AlignOption();
         align.Description = "Capture time axis: xcorr or edge (aligned once with the start, searched over the window, then the offset is fitted too) or none (taken as it is)";
-        var maxSims = new Option<int>("--max-sims") { Description = "Budget of simulations", DefaultValueFactory = _ => ScenarioFitOptions.DefaultMaxSimulations, HelpName = "N" };
+        var maxSims = IntegerOption.Create("--max-sims", "Budget of simulations", 1, 1_000_000, ScenarioFitOptions.DefaultMaxSimulations, "N");
         var outDir = new Option<string?>("--out", "-o") { Description = "Output folder (default: out/<scenario>-fit)" };
         var json = CommonOptions.Json();
         var force = CommonOptions.Force();
@@ -39,21 +40,21 @@ public static class FitCommand
             var document = CommonOptions.LoadDocument(path, pr.InvocationConfiguration.Error);
             var s = document.Scenario;
             string probeName = pr.GetValue(probe)!;
-            CaptureComparison.RequireProbe(s, probeName);
-            var parameters = pr.GetValue(free)!.Select(f => FreeParameter.Parse(document, f)).ToList();
+            LibraryErrors.Naming(() => CaptureComparison.RequireProbe(s, probeName), ("probe", "--probe"));
+            var parameters = pr.GetValue(free)!.Select(f => LibraryErrors.Naming(() => FreeParameter.Parse(document, f), ("spec", "--free"))).ToList();
             Capture cap = capture.Read(pr)!;
             CaptureArguments.Warn(cap, s.Simulation.Duration, pr.InvocationConfiguration.Error);
             string dir = CommonOptions.OutputDir(pr.GetValue(outDir), path, "-fit");
             using var output = new OutputFolder(dir, "fit"); // held from before the work starts, so a second run into it is refused at once
             ScenarioFitResult result;
             using (var bar = new ProgressBar(pr.InvocationConfiguration.Error, "fitting"))
-                result = ScenarioFit.Run(s, cap, probeName, parameters, new ScenarioFitOptions
+                result = LibraryErrors.Naming(() => ScenarioFit.Run(s, cap, probeName, parameters, new ScenarioFitOptions
                 {
-                    Align = CompareCommand.ParseAlign(pr.GetValue(align)!),
+                    Align = pr.GetValue(align),
                     MaxSimulations = pr.GetValue(maxSims),
                     Progress = bar,
                     Force = pr.GetValue(force),
-                }, ct);
+                }, ct), ("parameters", "--free"), (nameof(ScenarioFitOptions.MaxSimulations), "--max-sims"));
 
             var summary = FitOutputs.Json(result);
             // The author's text with the fitted values spliced in, comments kept.
@@ -84,8 +85,8 @@ public static class FitCommand
         }
         if (r.OffsetFitted)
         {
-            string sigma = double.IsFinite(r.OffsetUncertaintySeconds) ? Quantity.Format(r.OffsetUncertaintySeconds, "s", 3) : "undetermined";
-            o.WriteLine($"  {"capture time offset".PadRight(width)} {Quantity.Format(r.OffsetSeconds, "s"),12} ± {sigma}");
+            string sigma = double.IsFinite(r.OffsetUncertaintyS) ? Quantity.Format(r.OffsetUncertaintyS, "s", 3) : "undetermined";
+            o.WriteLine($"  {"capture time offset".PadRight(width)} {Quantity.Format(r.OffsetS, "s"),12} ± {sigma}");
         }
         o.WriteLine($"RMS error {Quantity.Format(r.RmsV, "V", 3)} (start {Quantity.Format(r.StartRmsV, "V", 3)})");
         var b = r.Basis;

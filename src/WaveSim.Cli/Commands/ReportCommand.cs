@@ -28,7 +28,7 @@ public static class ReportCommand
         cmd.SetAction((pr, ct) => CommandGuard.RunAsync(pr.InvocationConfiguration.Error, () =>
         {
             string path = pr.GetValue(scenario)!;
-            double band = CommonOptions.ParseBand(pr.GetValue(settle)!);
+            double band = pr.GetValue(settle);
             // The file is read once: the scenario shown is the text the run was read from.
             var (document, plan) = CommonOptions.LoadDocumentPlanned(path, pr.InvocationConfiguration.Error);
             var s = document.Scenario;

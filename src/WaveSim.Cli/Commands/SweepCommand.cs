@@ -1,5 +1,6 @@
 using System.CommandLine;
 using System.Globalization;
+using WaveSim.Cli.Parsing;
 using WaveSim.Core;
 using WaveSim.Core.Output;
 using WaveSim.Core.Rendering;
@@ -18,10 +19,11 @@ public static class SweepCommand
     public static Command Create()
     {
         var scenario = CommonOptions.Scenario();
-        var vary = new Option<string[]>("--vary") { Description = "KEY=RANGE: start..stop:count, start..stop:count:log or a,b,c, each value with its unit or the unit once at the end (load.r=10..200 ohm:20); repeat for a grid", Required = true };
-        var figure = new Option<string>("--figure") { Description = "Figures to chart, comma-separated (e.g. overshoot,settling)", DefaultValueFactory = _ => "overshoot,settling" };
-        var goal = new Option<string?>("--goal") { Description = "Pick the best point: min:PROBE.FIGURE or max:PROBE.FIGURE (e.g. min:rx.settling)" };
-        var limit = new Option<string[]>("--limit") { Description = "A bound the best point must meet, e.g. rx.overshoot<10% (repeatable)" };
+        var vary = OptionValue.Repeated("--vary", "KEY=RANGE: start..stop:count, start..stop:count:log or a,b,c, each value with its unit or the unit once at the end (load.r=10..200 ohm:20); repeat for a grid", SweepAxis.Parse, "KEY=RANGE");
+        vary.Required = true;
+        var figure = OptionValue.Create("--figure", "Figures to chart, comma-separated (e.g. overshoot,settling)", Figures, "overshoot,settling", "FIGURES");
+        var goal = new Option<string?>("--goal") { Description = "Pick the best point: min:PROBE.FIGURE or max:PROBE.FIGURE (e.g. min:rx.settling)", HelpName = "min|max:PROBE.FIGURE" };
+        var limit = new Option<string[]>("--limit") { Description = "A bound the best point must meet, e.g. rx.overshoot<10% (repeatable)", HelpName = "PROBE.FIGURE<VALUE" };
         var serial = new Option<bool>("--serial") { Description = "Run the points one at a time on one core (same results)" };
         var settle = CommonOptions.SettleBand();
         var outDir = CommonOptions.Out();
@@ -33,17 +35,15 @@ public static class SweepCommand
         {
             string path = pr.GetValue(scenario)!;
             // Everything is read and checked before the first point runs.
-            var axes = (pr.GetValue(vary) ?? []).Select(SweepAxis.Parse).ToArray();
-            var figures = (pr.GetValue(figure) ?? "").Split(',', StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries)
-                .Select(f => Figure(f)).Distinct().ToArray();
-            if (figures.Length == 0) throw new InputException("--figure: give at least one figure, e.g. overshoot,settling");
-            double band = CommonOptions.ParseBand(pr.GetValue(settle)!);
+            var axes = pr.GetValue(vary) ?? [];
+            var figures = pr.GetValue(figure)!;
+            double band = pr.GetValue(settle);
             var s = CommonOptions.Load(path, pr.InvocationConfiguration.Error);
             var probes = s.Probes.Select(p => p.Name).ToArray();
-            var g = pr.GetValue(goal) is { } gt ? SweepGoal.Parse(gt, probes) : null;
-            var limits = (pr.GetValue(limit) ?? []).Select(l => SweepLimit.Parse(l, probes)).ToArray();
+            var g = pr.GetValue(goal) is { } gt ? LibraryErrors.Naming(() => SweepGoal.Parse(gt, probes), ("text", "--goal")) : null;
+            var limits = (pr.GetValue(limit) ?? []).Select(l => LibraryErrors.Naming(() => SweepLimit.Parse(l, probes), ("text", "--limit"))).ToArray();
             if (limits.Length > 0 && g is null) throw new InputException("--limit: give --goal too (the limits choose among points for the goal)");
-            var grid = SweepGrid.Build(s, axes, pr.GetValue(force));
+            var grid = LibraryErrors.Naming(() => SweepGrid.Build(s, axes, pr.GetValue(force)), ("axes", "--vary"));
             string dir = CommonOptions.OutputDir(pr.GetValue(outDir), path);
             using var output = new OutputFolder(dir, "sweep"); // held from before the work starts, so a second run into it is refused at once
 
@@ -79,10 +79,11 @@ public static class SweepCommand
         return cmd;
     }
 
-    static string Figure(string f)
+    /// <summary>Reads "overshoot,settling" into the figures' own names, each once.</summary>
+    static string[] Figures(string text)
     {
-        try { return FigureSelector.Resolve(f); }
-        catch (InputException ex) { throw new InputException("--figure: " + ex.Message); }
+        var figures = text.Split(',', StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries).Select(FigureSelector.Resolve).Distinct().ToArray();
+        return figures.Length > 0 ? figures : throw new OptionValueException("give at least one figure, e.g. overshoot,settling");
     }
 
     static void Print(TextWriter o, SweepResult r, string[] figures, SweepGoal? goal, IReadOnlyList<SweepLimit> limits, string dir,

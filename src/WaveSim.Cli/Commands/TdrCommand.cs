@@ -1,5 +1,6 @@
 using System.CommandLine;
 using System.Globalization;
+using WaveSim.Cli.Parsing;
 using WaveSim.Core;
 using WaveSim.Core.Measurements;
 using WaveSim.Core.Model;
@@ -13,19 +14,16 @@ namespace WaveSim.Cli.Commands;
 /// <summary>`wavesim tdr SCENARIO [--capture FILE]`: impedance profile from a simulated or captured step reflectometer trace.</summary>
 public static class TdrCommand
 {
-    /// <summary>Default rise time of the simulated instrument.</summary>
-    public const string DefaultRise = "35 ps";
-
     /// <summary>Creates the command.</summary>
     public static Command Create()
     {
         var scenario = CommonOptions.Scenario();
         var capture = new CaptureArguments(required: false);
-        var rise = new Option<string?>("--rise") { Description = $"10-90 % rise time of the step (default {DefaultRise}; with --capture, measured from the trace)", HelpName = "TIME" };
-        var rs = new Option<string>("--source-resistance") { Description = "Instrument resistance, also the reference impedance", DefaultValueFactory = _ => "50 ohm", HelpName = "OHMS" };
-        var velocity = new Option<string?>("--velocity") { Description = "Velocity for distances, e.g. 0.66c (default: the first segment's)", HelpName = "V" };
-        var epsEff = new Option<string?>("--eps-eff") { Description = "Effective permittivity for distances, e.g. 3.3 (instead of --velocity)", HelpName = "X" };
-        var incident = new Option<string?>("--incident") { Description = "With --capture: the incident step at the port (default: read after the edge)", HelpName = "VOLTS" };
+        var rise = QuantityOption.Optional("--rise", Dimension.Time, $"10-90 % rise time of the step (default {Quantity.Format(Reflectometer.DefaultRiseS, "s")}; with --capture, measured from the trace)", QuantityOption.Positive, "TIME");
+        var rs = QuantityOption.Create("--source-resistance", Dimension.Resistance, "Instrument resistance, also the reference impedance", "50 ohm", QuantityOption.Positive, "OHMS");
+        var velocity = QuantityOption.Optional("--velocity", Dimension.Velocity, "Velocity for distances, e.g. 0.66c (default: the first segment's)", helpName: "V");
+        var epsEff = QuantityOption.Optional("--eps-eff", Dimension.Number, "Effective permittivity for distances, e.g. 3.3 (instead of --velocity)", helpName: "X");
+        var incident = QuantityOption.Optional("--incident", Dimension.Voltage, "With --capture: the incident step at the port (default: read after the edge)", QuantityOption.Positive, "VOLTS");
         var toScenario = new Option<string?>("--to-scenario") { Description = "Write the line found as a scenario YAML file", HelpName = "FILE" };
         var outDir = new Option<string?>("--out", "-o") { Description = "Output folder (default: out/<scenario>-tdr)" };
         var json = CommonOptions.Json();
@@ -37,9 +35,10 @@ public static class TdrCommand
         {
             string path = pr.GetValue(scenario)!;
             var s = CommonOptions.Load(path);
-            double sourceOhms = Positive(pr.GetValue(rs)!, Dimension.Resistance, "--source-resistance");
-            double? riseS = pr.GetValue(rise) is { } r ? Positive(r, Dimension.Time, "--rise") : null;
-            double v = Velocity(s, pr.GetValue(velocity), pr.GetValue(epsEff));
+            double sourceOhms = pr.GetValue(rs);
+            double? riseS = pr.GetValue(rise);
+            double v = LibraryErrors.Naming(() => Reflectometer.DistanceVelocity(s, pr.GetValue(velocity), pr.GetValue(epsEff)),
+                ("velocity", "--velocity"), ("epsEff", "--eps-eff"));
             Capture? cap = capture.Read(pr);
             if (cap is null && pr.GetValue(incident) is not null)
                 throw new InputException("--incident: applies only with --capture (the simulated instrument's incident step is 1 V)");
@@ -52,15 +51,13 @@ public static class TdrCommand
             if (cap is null)
             {
                 using var bar = new ProgressBar(pr.InvocationConfiguration.Error, "simulating");
-                trace = Reflectometer.Simulate(s, riseS ?? Quantity.Parse(DefaultRise, Dimension.Time), sourceOhms,
+                trace = Reflectometer.Simulate(s, riseS ?? Reflectometer.DefaultRiseS, sourceOhms,
                     new SimulationOptions { Force = pr.GetValue(force), Progress = bar }, ct);
             }
             else
             {
                 CaptureArguments.Warn(cap, s.Simulation.Duration, pr.InvocationConfiguration.Error);
-                double? inc = pr.GetValue(incident) is { } i ? Positive(i, Dimension.Voltage, "--incident") : null;
-                trace = Reflectometer.FromCapture(cap, sourceOhms, inc, riseS ?? Quantity.Parse(DefaultRise, Dimension.Time));
-                if (riseS is { } given) trace = trace with { RampS = 1.25 * given };
+                trace = LibraryErrors.Naming(() => Reflectometer.FromCapture(cap, sourceOhms, pr.GetValue(incident), riseS), ("incidentV", "--incident"));
             }
             TdrResult result = TdrAnalysis.Analyse(trace, v);
 
@@ -82,37 +79,9 @@ public static class TdrCommand
         return cmd;
     }
 
-    static double Positive(string text, Dimension d, string option)
-    {
-        double x;
-        try { x = Quantity.Parse(text, d); }
-        catch (UnitException ex) { throw new InputException($"{option}: {ex.Message}"); }
-        if (!(x > 0) || !double.IsFinite(x)) throw new InputException($"{option}: expected a positive value, got '{text}'");
-        return x;
-    }
-
-    static double Velocity(Scenario s, string? velocity, string? epsEff)
-    {
-        if (velocity is not null && epsEff is not null)
-            throw new InputException("--velocity and --eps-eff: give one of them, not both");
-        if (velocity is not null)
-        {
-            double v = Positive(velocity, Dimension.Velocity, "--velocity");
-            if (v > Quantity.SpeedOfLight * (1 + 1e-9)) throw new InputException($"--velocity: '{velocity}' is faster than light");
-            return v;
-        }
-        if (epsEff is not null)
-        {
-            double e = Positive(epsEff, Dimension.Number, "--eps-eff");
-            if (e < 1) throw new InputException($"--eps-eff: must be at least 1, got '{epsEff}'");
-            return Quantity.SpeedOfLight / Math.Sqrt(e);
-        }
-        return s.Line.OfType<Segment>().First().Velocity;
-    }
-
     static void Print(TextWriter o, TdrResult r, string dir, string? scenarioFile)
     {
-        o.WriteLine($"reference {Quantity.Format(r.ReferenceOhms, "Ω")}, incident {Quantity.Format(r.IncidentVolts, "V", 3)}, rise {Quantity.Format(r.RiseS, "s", 3)}, " +
+        o.WriteLine($"reference {Quantity.Format(r.ReferenceOhm, "Ω")}, incident {Quantity.Format(r.IncidentV, "V", 3)}, rise {Quantity.Format(r.RiseS, "s", 3)}, " +
                     $"velocity {Quantity.Format(r.VelocityMps, "m/s", 3)}, layer step {Quantity.Format(r.LayerStepS, "s", 3)} ({Quantity.Format(r.VelocityMps * r.LayerStepS / 2, "m", 3)})");
         o.WriteLine($"  {"from",10} {"to",10} {"Z0",10}");
         foreach (var seg in r.Segments)

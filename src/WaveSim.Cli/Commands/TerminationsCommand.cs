@@ -1,5 +1,6 @@
 using System.CommandLine;
 using System.Globalization;
+using WaveSim.Cli.Parsing;
 using WaveSim.Core;
 using WaveSim.Core.Analysis;
 using WaveSim.Core.Output;
@@ -19,10 +20,10 @@ public static class TerminationsCommand
         var outDir = CommonOptions.Out();
         var json = CommonOptions.Json();
         var force = CommonOptions.Force();
-        var series = new Option<string>("--series") { Description = "Resistor series to simulate with: E24 or E96 (both are printed)", DefaultValueFactory = _ => "E96" };
-        var maxOvershoot = new Option<string>("--max-overshoot") { Description = "Largest acceptable overshoot at the receiver", DefaultValueFactory = _ => "10 %" };
-        var maxSettling = new Option<string>("--max-settling") { Description = "Largest acceptable settling time at the receiver", DefaultValueFactory = _ => "5 ns" };
-        var level = new Option<string?>("--thevenin-level") { Description = "Thevenin termination level (default: halfway between the source's low and high)" };
+        var series = ChoiceOption.Create("--series", "Resistor series to simulate with (both are printed)", [("E24", PreferredSeries.E24), ("E96", PreferredSeries.E96)], "E96");
+        var maxOvershoot = OptionValue.Create("--max-overshoot", "Largest acceptable overshoot at the receiver", ParseOvershoot, "10 %", "PERCENT");
+        var maxSettling = QuantityOption.Create("--max-settling", Dimension.Time, "Largest acceptable settling time at the receiver", "5 ns", t => t > 0 ? null : "expected a time greater than zero", "TIME");
+        var level = QuantityOption.Optional("--thevenin-level", Dimension.Voltage, "Thevenin termination level (default: halfway between the source's low and high)", helpName: "VOLTS");
         var settle = CommonOptions.SettleBand();
         var serial = new Option<bool>("--serial") { Description = "Run the strategies one at a time" };
         var cmd = new Command("terminations", "Compare termination strategies on the scenario's net and recommend part values")
@@ -32,11 +33,11 @@ public static class TerminationsCommand
             string path = pr.GetValue(scenario)!;
             var options = new TerminationOptions
             {
-                Series = ParseSeries(pr.GetValue(series)!),
-                MaxOvershootPct = ParseOvershoot(pr.GetValue(maxOvershoot)!),
-                MaxSettlingS = Parse("--max-settling", pr.GetValue(maxSettling)!, Dimension.Time),
-                TheveninLevelV = pr.GetValue(level) is { } lv ? Parse("--thevenin-level", lv, Dimension.Voltage) : null,
-                SettleBand = CommonOptions.ParseBand(pr.GetValue(settle)!),
+                Series = pr.GetValue(series),
+                MaxOvershootPct = pr.GetValue(maxOvershoot),
+                MaxSettlingS = pr.GetValue(maxSettling),
+                TheveninLevelV = pr.GetValue(level),
+                SettleBand = pr.GetValue(settle),
                 Serial = pr.GetValue(serial),
                 Force = pr.GetValue(force),
             };
@@ -45,7 +46,7 @@ public static class TerminationsCommand
             using var output = new OutputFolder(dir, "terminations"); // held from before the work starts, so a second run into it is refused at once
             TerminationStudyResult result;
             using (var bar = new ProgressBar(pr.InvocationConfiguration.Error, "terminations"))
-                result = TerminationStudy.Run(s, options, bar, ct);
+                result = LibraryErrors.Naming(() => TerminationStudy.Run(s, options, bar, ct), (nameof(TerminationOptions.TheveninLevelV), "--thevenin-level"));
             output.WriteText("terminations.csv", w => TerminationsCsv.Write(result, w));
             output.Write("terminations.png", XyChart.RenderPng(TerminationPictures.Receiver(result), PictureSizes.Terminations.Width, PictureSizes.Terminations.Height));
             output.Commit();
@@ -57,32 +58,13 @@ public static class TerminationsCommand
         return cmd;
     }
 
-    static PreferredSeries ParseSeries(string text) => text.Trim().ToUpperInvariant() switch
-    {
-        "E24" => PreferredSeries.E24,
-        "E96" => PreferredSeries.E96,
-        _ => throw new InputException($"--series: expected E24 or E96, got '{text}'"),
-    };
-
+    /// <summary>Reads "10 %" (or a bare 10) as a percentage of the swing.</summary>
     static double ParseOvershoot(string text)
     {
-        var (v, dim) = Wrap("--max-overshoot", () => Quantity.ParseAny(text, Dimension.Percent, Dimension.Number));
+        var (v, dim) = Quantity.ParseAny(text, Dimension.Percent, Dimension.Number);
         double pct = dim == Dimension.Percent ? v * 100 : v;
-        if (!(pct >= 0)) throw new InputException($"--max-overshoot: expected a percentage of the swing such as 10 %, got '{text}'");
+        if (!(pct >= 0)) throw new OptionValueException($"expected a percentage of the swing such as 10 %, got '{text}'");
         return pct;
-    }
-
-    static double Parse(string option, string text, Dimension d)
-    {
-        double v = Wrap(option, () => Quantity.Parse(text, d));
-        if (d == Dimension.Time && !(v > 0)) throw new InputException($"{option}: expected a time greater than zero, got '{text}'");
-        return v;
-    }
-
-    static T Wrap<T>(string option, Func<T> f)
-    {
-        try { return f(); }
-        catch (UnitException ex) { throw new InputException($"{option}: {ex.Message}"); }
     }
 
     static void Print(TextWriter o, TerminationStudyResult r, string dir)

@@ -1,6 +1,6 @@
 using System.CommandLine;
 using System.Globalization;
-using System.Text.Json.Nodes;
+using WaveSim.Cli.Parsing;
 using WaveSim.Core;
 using WaveSim.Core.Lines;
 using WaveSim.Core.Output;
@@ -18,10 +18,10 @@ public static class XSectionCommand
     /// <summary>Creates the command; its dimension options come from <see cref="CrossSectionCatalog"/>.</summary>
     public static Command Create()
     {
-        var kind = new Argument<string>("kind") { Description = "Line kind: " + string.Join(", ", CrossSectionCatalog.Kinds.Select(k => k.Name)) };
+        var kind = new Argument<string>("kind") { Description = "Line kind: " + string.Join(", ", CrossSectionCatalog.Kinds.Select(k => k.Name)), HelpName = "KIND" };
         kind.AcceptOnlyFromAmong(CrossSectionCatalog.Kinds.Select(k => k.Name).ToArray());
         var dims = CrossSectionCatalog.AllKeys.Select(d => new Option<string>("--" + d.Name) { Description = Describe(d.Name), HelpName = "value" }).ToList();
-        var z0 = new Option<string>("--z0") { Description = "Target impedance for synthesis, e.g. \"50 ohm\" (Zdiff for a coupled pair); leave one dimension out", HelpName = "ohm" };
+        var z0 = QuantityOption.Optional("--z0", Dimension.Resistance, "Target impedance for synthesis, e.g. \"50 ohm\" (Zdiff for a coupled pair); leave one dimension out", QuantityOption.Positive, "ohm");
         var solve = new Option<string>("--solve") { Description = "The dimension to solve for with --z0 (default: the one left out)", HelpName = "key" };
         var json = new Option<bool>("--json") { Description = "Print one JSON object (SI units) instead of a table" };
 
@@ -43,6 +43,9 @@ public static class XSectionCommand
 
     const string Context = "xsection";
 
+    /// <summary>Names a cross-section key (and the target "z0", the choice "solve") as this command's option.</summary>
+    static string Flag(string key) => "--" + key;
+
     static string Describe(string key)
     {
         var uses = CrossSectionCatalog.Kinds
@@ -52,83 +55,28 @@ public static class XSectionCommand
         return string.Join("; ", uses);
     }
 
-    static int Execute(string kind, Dictionary<string, string> raw, string? z0Text, string? solveKey, bool asJson, TextWriter output, TextWriter error)
+    static int Execute(string kind, Dictionary<string, string> raw, double? target, string? solveKey, bool asJson, TextWriter output, TextWriter error)
     {
         LineKindInfo info = CrossSectionCatalog.Find(kind, Context);
-        string? free = null;
-        double target = 0;
-        if (z0Text is null)
-        {
-            if (solveKey is not null) throw new InputException($"{Context}: --solve needs a target impedance --z0");
-        }
-        else
-        {
-            try { target = Quantity.Parse(z0Text, Dimension.Resistance); }
-            catch (UnitException ex) { throw new InputException($"{Context}: --z0: {ex.Message}"); }
-            var missing = info.Dimensions.Where(d => d.Required && !raw.ContainsKey(d.Name)).Select(d => d.Name).ToList();
-            if (solveKey is not null)
-            {
-                free = info.Solvable.FirstOrDefault(s => string.Equals(s, solveKey, StringComparison.OrdinalIgnoreCase))
-                    ?? throw new InputException($"{Context}: cannot solve {info.Name} for '--solve {solveKey}'; solvable: {string.Join(", ", info.Solvable)}");
-                raw.Remove(free); // the solved value replaces any given one
-            }
-            else if (missing.Count == 1) free = missing[0];
-            else if (missing.Count == 0)
-                throw new InputException($"{Context}: --z0 needs one dimension left out, or --solve KEY (solvable: {string.Join(", ", info.Solvable)})");
-            else
-                throw new InputException($"{Context}: --z0 solves for one dimension, but {string.Join(", ", missing.Select(m => "--" + m))} are missing");
-        }
+        if (target is null && solveKey is not null) throw new InputException($"{Context}: --solve needs a target impedance --z0");
+        string? free = target is null ? null : CrossSection.FreeDimension(info.Name, raw, solveKey, Context, Flag);
 
-        CrossSectionSpec spec = CrossSection.FromDictionary(info.Name, raw, Context, "--", free);
-        SynthesisResult? solved = free is null ? null : CrossSection.Solve(spec, free, target);
+        CrossSectionSpec spec = CrossSection.FromDictionary(info.Name, raw, Context, Flag, free);
+        SynthesisResult? solved = free is null ? null : CrossSection.Solve(spec, free, target!.Value);
         if (info.Pair)
         {
             CoupledLineParameters pair = CrossSection.ComputePair(solved is null ? spec : spec.With(solved.Dimension, solved.Value));
             foreach (string w in pair.Warnings) error.WriteLine("warning: " + w);
-            if (asJson) WritePairJson(pair, solved, output);
+            if (asJson) output.WriteLine(JsonText.Write(CrossSectionJson.Pair(pair, solved)));
             else WritePairTable(pair, solved, output);
             return ExitCodes.Ok;
         }
         LineParameters line = solved?.Line ?? CrossSection.Compute(spec);
 
         foreach (string w in line.Warnings) error.WriteLine("warning: " + w);
-        if (asJson) WriteJson(line, solved, output);
+        if (asJson) output.WriteLine(JsonText.Write(CrossSectionJson.Line(line, solved)));
         else WriteTable(line, solved, output);
         return ExitCodes.Ok;
-    }
-
-    static JsonObject LineJson(LineParameters p)
-    {
-        var o = new JsonObject
-        {
-            ["z0_ohm"] = p.Z0, ["eps_eff"] = p.EpsEff, ["delay_s_per_m"] = p.DelayPerLength,
-            ["l_h_per_m"] = p.L, ["c_f_per_m"] = p.C, ["r_dc_ohm_per_m"] = p.RDc,
-        };
-        if (p.FrequencyHz is double f)
-        {
-            o["frequency_hz"] = f;
-            o["r_ac_ohm_per_m"] = p.RAc;
-            o["g_s_per_m"] = p.G;
-        }
-        return o;
-    }
-
-    static void WritePairJson(CoupledLineParameters p, SynthesisResult? solved, TextWriter output)
-    {
-        var o = new JsonObject { ["kind"] = p.Kind };
-        if (solved is not null)
-            o[solved.Dimension == "er" ? "er" : solved.Dimension + "_m"] = solved.Value;
-        o["z0_even_ohm"] = p.Z0Even;
-        o["z0_odd_ohm"] = p.Z0Odd;
-        o["eps_eff_even"] = p.Even.EpsEff;
-        o["eps_eff_odd"] = p.Odd.EpsEff;
-        o["z_diff_ohm"] = p.Zdiff;
-        o["z_comm_ohm"] = p.Zcomm;
-        o["coupling"] = p.Coupling;
-        o["differential"] = LineJson(p.Differential);
-        o["common"] = LineJson(p.Common);
-        o["warnings"] = new JsonArray(p.Warnings.Select(w => (JsonNode?)JsonValue.Create(w)).ToArray());
-        output.WriteLine(JsonText.Write(o));
     }
 
     static void WritePairTable(CoupledLineParameters p, SynthesisResult? solved, TextWriter output)
@@ -179,17 +127,6 @@ public static class XSectionCommand
         int width = rows.Max(r => r.Name.Length) + 2;
         output.WriteLine(kind);
         foreach (var (name, value) in rows) output.WriteLine("  " + name.PadRight(width) + value);
-    }
-
-    static void WriteJson(LineParameters p, SynthesisResult? solved, TextWriter output)
-    {
-        var o = new JsonObject { ["kind"] = p.Kind };
-        if (solved is not null)
-            o[solved.Dimension == "er" ? "er" : solved.Dimension + "_m"] = solved.Value;
-        foreach (var (key, value) in LineJson(p).ToList())
-            o[key] = value?.DeepClone();
-        o["warnings"] = new JsonArray(p.Warnings.Select(w => (JsonNode?)JsonValue.Create(w)).ToArray());
-        output.WriteLine(JsonText.Write(o));
     }
 
     static void WriteTable(LineParameters p, SynthesisResult? solved, TextWriter output)

@@ -25,7 +25,7 @@ public sealed record FreeParameter(string KeyPath, double Start, double Lower, d
     /// not write needs bounds; it starts at their geometric mean (their midpoint when the lower bound is not positive).
     /// Messages start with the key path.</remarks>
     /// <param name="document">The scenario as read: the model, and the text that says which keys are written and how.</param>
-    /// <param name="spec">The parameter's text.</param>
+    /// <param name="spec">The text KEY or KEY=MIN..MAX; errors name this parameter (<see cref="InputException.Parameter"/>).</param>
     /// <returns>The parameter.</returns>
     /// <exception cref="InputException">Malformed text, a key the scenario cannot vary, a unit of the wrong kind, bounds out of
     /// order, or a start outside them.</exception>
@@ -38,27 +38,30 @@ public sealed record FreeParameter(string KeyPath, double Start, double Lower, d
         string key = (eq < 0 ? text : text[..eq]).Trim();
         string? range = eq < 0 ? null : text[(eq + 1)..].Trim();
         if (key.Length == 0)
-            throw new InputException($"'{spec}': expected KEY or KEY=MIN..MAX, e.g. line[0].segment.z0 or load.c=0.5pF..5pF");
+            throw new InputException($"'{spec}': expected KEY or KEY=MIN..MAX, e.g. line[0].segment.z0 or load.c=0.5pF..5pF") { Parameter = "spec" };
 
         Scenario scenario = document.Scenario;
-        ScenarioKey info = ScenarioValues.KeyAt(scenario, key);   // the key must name a value the scenario can vary
+        ScenarioKey info;
+        try { info = ScenarioValues.KeyAt(scenario, key); }   // the key must name a value the scenario can vary
+        catch (InputException ex) when (ex.Parameter is null) { throw new InputException(ex.Message) { Parameter = "spec" }; }
         Dimension[] dims = [.. info.Dimensions];
         double? start = null;
         Dimension? dim = null;
         if (document.Written(key) is { } written)
         {
             try { dim = Quantity.ParseAny(written, dims).Dimension; }
-            catch (UnitException ex) { throw new InputException($"{key}: the scenario's value cannot be fitted: {ex.Message}"); }
-            start = ScenarioValues.Read(scenario, key, dim);
+            catch (UnitException ex) { throw new InputException($"{key}: the scenario's value cannot be fitted: {ex.Message}") { Parameter = "spec" }; }
+            try { start = ScenarioValues.Read(scenario, key, dim); }
+            catch (InputException ex) when (ex.Parameter is null) { throw new InputException(ex.Message) { Parameter = "spec" }; }
         }
 
         double lower, upper;
         if (range is null)
         {
             if (start is not { } s0)
-                throw new InputException($"{key}: the scenario has no value there; give bounds, e.g. {key}=MIN..MAX");
+                throw new InputException($"{key}: the scenario has no value there; give bounds, e.g. {key}=MIN..MAX") { Parameter = "spec" };
             if (!(s0 > 0))
-                throw new InputException($"{key}: the start value {Show(s0)} is not positive, so default bounds [start/3, start*3] do not apply; give bounds, e.g. {key}=MIN..MAX");
+                throw new InputException($"{key}: the start value {Show(s0)} is not positive, so default bounds [start/3, start*3] do not apply; give bounds, e.g. {key}=MIN..MAX") { Parameter = "spec" };
             lower = s0 / DefaultBoundRatio;
             upper = s0 * DefaultBoundRatio;
         }
@@ -66,27 +69,27 @@ public sealed record FreeParameter(string KeyPath, double Start, double Lower, d
         {
             int dots = range.IndexOf("..", StringComparison.Ordinal);
             if (dots < 0)
-                throw new InputException($"{key}: bounds '{range}' are not MIN..MAX, e.g. {key}=0.5pF..5pF");
+                throw new InputException($"{key}: bounds '{range}' are not MIN..MAX, e.g. {key}=0.5pF..5pF") { Parameter = "spec" };
             Dimension[] boundDims = dim is { } fixedDim ? [fixedDim] : dims;
             (lower, Dimension d1) = Bound(range[..dots], key, boundDims);
             (upper, Dimension d2) = Bound(range[(dots + 2)..], key, boundDims);
             if (d1 != d2)
-                throw new InputException($"{key}: the bounds are of different kinds ({d1.Describe()} and {d2.Describe()})");
+                throw new InputException($"{key}: the bounds are of different kinds ({d1.Describe()} and {d2.Describe()})") { Parameter = "spec" };
             dim ??= d1;
             if (!(upper > lower))
-                throw new InputException($"{key}: the upper bound {Show(upper)} must be above the lower bound {Show(lower)}");
+                throw new InputException($"{key}: the upper bound {Show(upper)} must be above the lower bound {Show(lower)}") { Parameter = "spec" };
         }
 
         double startValue = start ?? (lower > 0 ? Math.Sqrt(lower * upper) : 0.5 * (lower + upper));
         if (startValue < lower || startValue > upper)
-            throw new InputException($"{key}: the scenario's value {Show(startValue)} lies outside the bounds {Show(lower)}..{Show(upper)}");
+            throw new InputException($"{key}: the scenario's value {Show(startValue)} lies outside the bounds {Show(lower)}..{Show(upper)}") { Parameter = "spec" };
         return new FreeParameter(key, startValue, lower, upper, dim!.Value);
     }
 
     static (double, Dimension) Bound(string text, string key, Dimension[] dims)
     {
         try { return Quantity.ParseAny(text.Trim(), dims); }
-        catch (UnitException ex) { throw new InputException($"{key}: bound {ex.Message}"); }
+        catch (UnitException ex) { throw new InputException($"{key}: bound {ex.Message}") { Parameter = "spec" }; }
     }
 
     static string Show(double x) => x.ToString("G6", CultureInfo.InvariantCulture);

@@ -52,15 +52,15 @@ public static class ScenarioFit
         options ??= new ScenarioFitOptions();
         CaptureComparison.RequireProbe(scenario, probe);
         if (parameters.Count == 0)
-            throw new InputException("--free: give at least one key path to fit, e.g. --free line[0].segment.z0");
+            throw new InputException("give at least one key path to fit, e.g. line[0].segment.z0") { Parameter = "parameters" };
         var dup = parameters.GroupBy(p => p.KeyPath).FirstOrDefault(g => g.Count() > 1);
         if (dup is not null)
-            throw new InputException($"--free: '{dup.Key}' is given more than once");
+            throw new InputException($"'{dup.Key}' is given more than once") { Parameter = "parameters" };
 
         bool fitOffset = options.Align != AlignMode.None;
         int n = parameters.Count + (fitOffset ? 1 : 0);
         if (options.MaxSimulations < 2 * n + 3)
-            throw new InputException($"--max-sims: {options.MaxSimulations} is too few for {n} fitted value(s); give at least {2 * n + 3}");
+            throw new InputException($"{options.MaxSimulations} is too few for {n} fitted value(s); give at least {2 * n + 3}") { Parameter = nameof(ScenarioFitOptions.MaxSimulations) };
 
         int simulations = 0;
         var cache = new Dictionary<string, (double[] T, double[] V)>();
@@ -89,7 +89,7 @@ public static class ScenarioFit
         double offset0 = 0.0;
         if (fitOffset)
         {
-            double aligned = WaveformComparison.Compare(t0, v0, capture.Time, capture.Volts, options.Align).OffsetSeconds;
+            double aligned = WaveformComparison.Compare(t0, v0, capture.Time, capture.Volts, options.Align).OffsetS;
             offset0 = OffsetSearch.Best(t0, v0, capture.Time, capture.Volts, aligned, window);
         }
         CaptureTimeSpan.RequireOverlap(capture, offset0, t0[0], t0[^1]);

@@ -4,8 +4,8 @@ namespace WaveSim.Core.Fitting;
 
 /// <summary>The outcome of <see cref="ScenarioFit.Run"/>.</summary>
 /// <param name="Parameters">The fitted values, in the order given.</param>
-/// <param name="OffsetSeconds">Shift added to the capture's time axis, s (fitted unless the alignment was None, then 0).</param>
-/// <param name="OffsetUncertaintySeconds">One standard deviation of the fitted offset, s, on the same basis as the parameters'
+/// <param name="OffsetS">Shift added to the capture's time axis, s (fitted unless the alignment was None, then 0).</param>
+/// <param name="OffsetUncertaintyS">One standard deviation of the fitted offset, s, on the same basis as the parameters'
 /// (see <see cref="FittedParameter.Uncertainty"/>); NaN when it was not fitted.</param>
 /// <param name="OffsetFitted">True when the offset was a fitted parameter (any alignment but None).</param>
 /// <param name="RmsV">RMS of captured minus simulated at the capture's samples, with the fitted values, V.</param>
@@ -22,8 +22,8 @@ namespace WaveSim.Core.Fitting;
 /// applied to every standard deviation.</param>
 public sealed record ScenarioFitResult(
     IReadOnlyList<FittedParameter> Parameters,
-    double OffsetSeconds,
-    double OffsetUncertaintySeconds,
+    double OffsetS,
+    double OffsetUncertaintyS,
     bool OffsetFitted,
     double RmsV,
     double StartRmsV,

@@ -31,30 +31,31 @@ public static partial class CrossSection
     /// <param name="rawTextValues">Key to value text: lengths with units ("8 mil"), er and tand plain, at a frequency,
     /// resistivity a plain number in ohm m (an "ohm m" suffix is accepted); a bare 0 needs no unit.</param>
     /// <param name="context">Leads every error message.</param>
-    /// <param name="keyPrefix">Put before keys in messages, "--" for command-line options. Default "".</param>
+    /// <param name="keyName">How keys are named in messages (<see cref="CrossSectionSpec.KeyName"/>); null for the keys as they are.</param>
     /// <param name="freeDimension">A required key that may be missing because it will be solved for; null for none.</param>
     /// <exception cref="InputException">Unknown or missing key, or unreadable value text.</exception>
     public static CrossSectionSpec FromDictionary(string kind, IDictionary<string, string> rawTextValues, string context,
-                                                  string keyPrefix = "", string? freeDimension = null)
+                                                  Func<string, string>? keyName = null, string? freeDimension = null)
     {
         LineKindInfo info = CrossSectionCatalog.Find(kind, context);
+        keyName ??= k => k;
         var byName = info.AllKeys.ToDictionary(k => k.Name, StringComparer.OrdinalIgnoreCase);
         var values = new Dictionary<string, double>(StringComparer.OrdinalIgnoreCase);
         var text = new Dictionary<string, string>(StringComparer.OrdinalIgnoreCase);
         foreach (var (key, raw) in rawTextValues)
         {
             if (!byName.TryGetValue(key.Trim(), out DimensionInfo? dim))
-                throw new InputException($"{context}: unknown key '{keyPrefix}{key}' for {info.Name}; accepted: {SpecReader.AcceptedList(info, keyPrefix)}");
-            values[dim.Name] = ParseValue(dim, raw, context, keyPrefix);
+                throw new InputException($"{context}: unknown key '{keyName(key)}' for {info.Name}; accepted: {SpecReader.AcceptedList(info, keyName)}");
+            values[dim.Name] = ParseValue(dim, raw, context, keyName);
             text[dim.Name] = raw;
         }
         foreach (DimensionInfo d in info.Dimensions.Where(d => d.Required))
             if (!values.ContainsKey(d.Name) && !string.Equals(d.Name, freeDimension, StringComparison.OrdinalIgnoreCase))
-                throw new InputException($"{context}: missing '{keyPrefix}{d.Name}' for {info.Name} (required: {string.Join(", ", info.Dimensions.Where(x => x.Required).Select(x => keyPrefix + x.Name))})");
-        return new CrossSectionSpec(info.Name, values) { Context = context, KeyPrefix = keyPrefix, SourceText = text };
+                throw new InputException($"{context}: missing '{keyName(d.Name)}' for {info.Name} (required: {string.Join(", ", info.Dimensions.Where(x => x.Required).Select(x => keyName(x.Name)))})");
+        return new CrossSectionSpec(info.Name, values) { Context = context, KeyName = keyName, SourceText = text };
     }
 
-    static double ParseValue(DimensionInfo dim, string raw, string context, string keyPrefix)
+    static double ParseValue(DimensionInfo dim, string raw, string context, Func<string, string> keyName)
     {
         string t = raw ?? "";
         if (dim.Name == "resistivity") t = OhmMetreSuffix().Replace(t, "");
@@ -67,7 +68,7 @@ public static partial class CrossSection
         catch (UnitException ex)
         {
             string hint = dim.Name == "resistivity" ? " (resistivity is a plain number in ohm m, e.g. 1.7241e-8)" : "";
-            throw new InputException($"{context}: {keyPrefix}{dim.Name}: {ex.Message}{hint}");
+            throw new InputException($"{context}: {keyName(dim.Name)}: {ex.Message}{hint}");
         }
     }
 

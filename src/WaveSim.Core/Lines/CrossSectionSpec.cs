@@ -11,8 +11,9 @@ public sealed record CrossSectionSpec(string Kind, IReadOnlyDictionary<string, d
     /// <summary>Where the values came from, leading every error message (default "geometry").</summary>
     public string Context { get; init; } = "geometry";
 
-    /// <summary>Put before a key in messages: "--" on the command line, "" in a scenario.</summary>
-    public string KeyPrefix { get; init; } = "";
+    /// <summary>How a key is named in messages: as it is in a scenario by default; a caller with its own names for the keys
+    /// (a command line's options) passes its mapping.</summary>
+    public Func<string, string> KeyName { get; init; } = k => k;
 
     /// <summary>The values as the user wrote them, to quote in error messages; optional.</summary>
     public IReadOnlyDictionary<string, string>? SourceText { get; init; }
@@ -26,7 +27,7 @@ public sealed record CrossSectionSpec(string Kind, IReadOnlyDictionary<string, d
         return this with { Dimensions = d };
     }
 
-    /// <summary>The key as shown to the user ("--width" or "width").</summary>
+    /// <summary>The key as shown to the user, through <see cref="KeyName"/>.</summary>
     /// <param name="key">The key name.</param>
-    public string Label(string key) => KeyPrefix + key;
+    public string Label(string key) => KeyName(key);
 }

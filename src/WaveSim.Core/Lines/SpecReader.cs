@@ -20,13 +20,13 @@ internal sealed class SpecReader
         foreach (var (key, value) in spec.Dimensions)
         {
             if (!known.TryGetValue(key, out DimensionInfo? info))
-                throw new InputException($"{spec.Context}: unknown key '{spec.Label(key)}' for {Kind.Name}; accepted: {AcceptedList(Kind, spec.KeyPrefix)}");
+                throw new InputException($"{spec.Context}: unknown key '{spec.Label(key)}' for {Kind.Name}; accepted: {AcceptedList(Kind, spec.KeyName)}");
             values[info.Name] = value;
             Check(info.Name, value);
         }
     }
 
-    public static string AcceptedList(LineKindInfo kind, string prefix) => string.Join(", ", kind.AllKeys.Select(k => prefix + k.Name));
+    public static string AcceptedList(LineKindInfo kind, Func<string, string> keyName) => string.Join(", ", kind.AllKeys.Select(k => keyName(k.Name)));
 
     public double Required(string key) => values.TryGetValue(key, out double v) ? v
         : throw new InputException($"{spec.Context}: missing '{spec.Label(key)}' for {Kind.Name} (required: {string.Join(", ", Kind.Dimensions.Where(d => d.Required).Select(d => spec.Label(d.Name)))})");

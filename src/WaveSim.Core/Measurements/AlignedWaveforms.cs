@@ -1,7 +1,7 @@
 namespace WaveSim.Core.Measurements;
 
 /// <summary>A simulated and a captured waveform on a common time grid, with the difference between them.</summary>
-/// <param name="OffsetSeconds">Shift added to the capture's time axis to align it with the simulation, s.</param>
+/// <param name="OffsetS">Shift added to the capture's time axis to align it with the simulation, s.</param>
 /// <param name="Time">The common grid: the overlap of both records after alignment, evenly spaced, s.</param>
 /// <param name="Simulated">The simulation linearly interpolated on <paramref name="Time"/>, V.</param>
 /// <param name="Captured">The shifted capture linearly interpolated on <paramref name="Time"/>, V.</param>
@@ -11,7 +11,7 @@ namespace WaveSim.Core.Measurements;
 /// <param name="RmsPct">RMS residual as a percentage of the simulated swing (max - min on the grid); NaN when the simulation is flat.</param>
 /// <param name="PeakPct">Peak residual as a percentage of the simulated swing; NaN when the simulation is flat.</param>
 public sealed record AlignedWaveforms(
-    double OffsetSeconds,
+    double OffsetS,
     double[] Time,
     double[] Simulated,
     double[] Captured,

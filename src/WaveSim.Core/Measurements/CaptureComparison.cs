@@ -42,7 +42,7 @@ public static class CaptureComparison
         ProbeTrace trace = sim.Probe(probe);
         CaptureTimeSpan.RequireFits(capture, sim.Time[^1] - sim.Time[0]);
         AlignedWaveforms c = WaveformComparison.Compare(sim.Time, trace.Volts, capture.Time, capture.Volts, mode);
-        CaptureTimeSpan.RequireOverlap(capture, c.OffsetSeconds, sim.Time[0], sim.Time[^1]);
+        CaptureTimeSpan.RequireOverlap(capture, c.OffsetS, sim.Time[0], sim.Time[^1]);
         // Both sets of figures on the same grid and with the same options, so that their difference is the capture's doing.
         // The simulation's edge heads for its DC level, as in `wavesim run` (a clock's record tail is no settled level).
         SignalQualityOptions simOptions = FigureOptions(sim.Scenario, probe) with { FinalLevelV = trace.SettledVolts };
@@ -94,10 +94,10 @@ public static class CaptureComparison
     /// <summary>Throws a one-line error naming the probes when <paramref name="probe"/> is not one of the scenario's.</summary>
     /// <param name="s">The scenario.</param>
     /// <param name="probe">Probe name.</param>
-    /// <exception cref="InputException">No such probe.</exception>
+    /// <exception cref="InputException">No such probe (naming the <c>probe</c> parameter).</exception>
     public static void RequireProbe(Scenario s, string probe)
     {
         if (!s.Probes.Any(p => p.Name == probe))
-            throw new InputException($"--probe: the scenario has no probe named '{probe}'; probes: {string.Join(", ", s.Probes.Select(p => p.Name))}");
+            throw new InputException($"the scenario has no probe named '{probe}'; probes: {string.Join(", ", s.Probes.Select(p => p.Name))}") { Parameter = "probe" };
     }
 }

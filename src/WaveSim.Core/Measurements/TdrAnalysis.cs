@@ -84,14 +84,14 @@ public static class TdrAnalysis
                 double x = centre - dt / 2 + (j + 0.5) * dt / sub;
                 double y = x <= t[0] ? v[0] : x >= t[^1] ? v[^1] : spline.Interpolate(x);
                 sumV += y;
-                sumR += (y - trace.BaselineVolts - trace.Incident(x)) / trace.IncidentVolts;
+                sumR += (y - trace.BaselineV - trace.Incident(x)) / trace.IncidentV;
             }
             time[k] = k * dt;
             port[k] = sumV / sub;
             rho[k] = sumR / sub;
         }
         double[] distance = time.Select(x => velocityMps * x / 2).ToArray();
-        double z0 = trace.ReferenceOhms;
+        double z0 = trace.ReferenceOhm;
         double[] naive = rho.Select(r => StepReflectometry.ImpedanceOf(r, z0)).ToArray();
 
         var (layers, end, stop) = PeelUntilEnd(rho, z0);
@@ -125,7 +125,7 @@ public static class TdrAnalysis
             warnings.Add($"the profile ends in an open (or far higher impedance) at {Quantity.Format(endM, "m")}");
         else if (end == TdrEnd.Short)
             warnings.Add($"the profile ends in a short (or far lower impedance) at {Quantity.Format(endM, "m")}");
-        return new TdrResult(z0, velocityMps, dt, trace.IncidentVolts, trace.RiseS, time, distance, port, rho, naive, layers,
+        return new TdrResult(z0, velocityMps, dt, trace.IncidentV, trace.RiseS, time, distance, port, rho, naive, layers,
             segments, lumped, end, endM, warnings, endValue);
     }
 
@@ -218,7 +218,7 @@ public static class TdrAnalysis
             return 0;
         double mean = head.Average();
         double sd = Math.Sqrt(head.Sum(x => (x - mean) * (x - mean)) / (head.Count - 1));
-        return sd / trace.IncidentVolts / Math.Sqrt(Math.Max(1, dt / sampleStep));
+        return sd / trace.IncidentV / Math.Sqrt(Math.Max(1, dt / sampleStep));
     }
 
     /// <summary>Transmission poles of the parts an excursion is read as: a pair's from its fit, a single part's from its τ.</summary>

@@ -1,10 +1,10 @@
 namespace WaveSim.Core.Measurements;
 
 /// <summary>The analysis of a reflectometer trace: per-layer reflection and impedance, segments and lumped elements.</summary>
-/// <param name="ReferenceOhms">Reference impedance Z0ref, Ω.</param>
+/// <param name="ReferenceOhm">Reference impedance Z0ref, Ω.</param>
 /// <param name="VelocityMps">Velocity used for distances, m/s.</param>
 /// <param name="LayerStepS">Round-trip time of one layer, s.</param>
-/// <param name="IncidentVolts">Incident step at the port, V.</param>
+/// <param name="IncidentV">Incident step at the port, V.</param>
 /// <param name="RiseS">10-90 % rise time of the incident edge, s.</param>
 /// <param name="TimeS">Round-trip time of each layer's top from the reference plane, s.</param>
 /// <param name="DistanceM">The same as a distance, v·t/2, m.</param>
@@ -20,10 +20,10 @@ namespace WaveSim.Core.Measurements;
 /// <param name="EndValue">For a <see cref="TdrEnd.Capacitive"/> end its capacitance, F; for an <see cref="TdrEnd.Inductive"/>
 /// one its inductance, H; otherwise null.</param>
 public sealed record TdrResult(
-    double ReferenceOhms,
+    double ReferenceOhm,
     double VelocityMps,
     double LayerStepS,
-    double IncidentVolts,
+    double IncidentV,
     double RiseS,
     double[] TimeS,
     double[] DistanceM,

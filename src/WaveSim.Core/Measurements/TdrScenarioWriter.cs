@@ -62,9 +62,9 @@ public static class TdrScenarioWriter
         sb.Append("# Line found by wavesim tdr (layer peeling): segments of one impedance and lumped elements.\n");
         sb.Append("# Distances assume a velocity of ").Append(Quantity.Format(v, "m/s")).Append("; the source is the reflectometer.\n");
         sb.Append("title: ").Append(Quote(title)).Append('\n');
-        sb.Append("source: { waveform: step, low: 0 V, high: ").Append(Num(Reflectometer.OpenCircuitVolts * result.IncidentVolts))
+        sb.Append("source: { waveform: step, low: 0 V, high: ").Append(Num(Reflectometer.OpenCircuitV * result.IncidentV))
           .Append(" V, rise: ").Append(Num(result.RiseS)).Append(" s, delay: ").Append(Num(delay))
-          .Append(" s, resistance: ").Append(Num(result.ReferenceOhms)).Append(" ohm }\n");
+          .Append(" s, resistance: ").Append(Num(result.ReferenceOhm)).Append(" ohm }\n");
         sb.Append("line:\n");
         foreach (string item in items)
             sb.Append("  - ").Append(item).Append('\n');

@@ -22,7 +22,7 @@ public static class CompareOutputs
         return new JsonObject
         {
             ["probe"] = r.Probe,
-            ["offset_s"] = c.OffsetSeconds,
+            ["offset_s"] = c.OffsetS,
             ["rms_V"] = c.RmsV,
             ["peak_V"] = c.PeakV,
             ["rms_pct"] = Finite(c.RmsPct),

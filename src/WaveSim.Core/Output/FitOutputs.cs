@@ -31,8 +31,8 @@ public static class FitOutputs
             ["parameters"] = parameters,
             ["capture_offset_s"] = new JsonObject
             {
-                ["value"] = r.OffsetSeconds,
-                ["uncertainty"] = CompareOutputs.Finite(r.OffsetUncertaintySeconds),
+                ["value"] = r.OffsetS,
+                ["uncertainty"] = CompareOutputs.Finite(r.OffsetUncertaintyS),
                 ["fitted"] = r.OffsetFitted,
             },
             ["rms_V"] = r.RmsV,

@@ -5,7 +5,7 @@ using System.Text.Json.Nodes;
 namespace WaveSim.Core.Output;
 
 /// <summary>
-/// The one place JSON text is written: files (summary.json, fit.json …) and every command's <c>--json</c>.
+/// The one place JSON text is written: files (summary.json, fit.json …) and every command's JSON on stdout.
 /// </summary>
 /// <remarks>
 /// The default encoder of System.Text.Json escapes every non-ASCII character and the HTML-sensitive ones, so "Ω" came out as
@@ -16,7 +16,7 @@ namespace WaveSim.Core.Output;
 /// </remarks>
 public static class JsonText
 {
-    /// <summary>Indented, readable text: what files and <c>--json</c> get.</summary>
+    /// <summary>Indented, readable text: what files and printed JSON get.</summary>
     public static JsonSerializerOptions Indented { get; } = Readable(indented: true);
 
     /// <summary>The same on one line.</summary>

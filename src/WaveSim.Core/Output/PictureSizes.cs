@@ -11,7 +11,7 @@ public static class PictureSizes
     /// <summary>waveforms.png and waveforms.svg.</summary>
     public static readonly PixelSize Waveforms = new(1200, 600);
 
-    /// <summary>waveforms.png with the extra panel of probe currents (run --currents).</summary>
+    /// <summary>waveforms.png with the extra panel of probe currents.</summary>
     public static readonly PixelSize WaveformsWithCurrents = new(1200, 900);
 
     /// <summary>spacetime.png.</summary>

@@ -67,6 +67,6 @@ public static class RunSummary
         return json;
     }
 
-    /// <summary>JSON text with indentation, as written to files and printed with --json (<see cref="JsonText"/>).</summary>
+    /// <summary>JSON text with indentation, as written to files and printed (<see cref="JsonText"/>).</summary>
     public static string Text(JsonNode node) => JsonText.Write(node);
 }

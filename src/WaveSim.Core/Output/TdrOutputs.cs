@@ -37,11 +37,11 @@ public static class TdrOutputs
             ["lumped"] = lumped,
             ["end"] = r.End.ToString().ToLowerInvariant(),
             ["end_m"] = r.EndM,
-            ["reference_ohm"] = r.ReferenceOhms,
+            ["reference_ohm"] = r.ReferenceOhm,
             ["velocity_m_per_s"] = r.VelocityMps,
             ["layer_step_s"] = r.LayerStepS,
             ["rise_s"] = r.RiseS,
-            ["incident_V"] = r.IncidentVolts,
+            ["incident_V"] = r.IncidentV,
             ["warnings"] = new JsonArray(r.Warnings.Select(w => (JsonNode)JsonValue.Create(w)!).ToArray()),
         };
         if (r.End == TdrEnd.Capacitive) json["end_c_F"] = r.EndValue;
@@ -78,7 +78,7 @@ public static class TdrOutputs
     public static ChartSpec Chart(TdrResult r, string title, Scenario? truth)
     {
         ArgumentNullException.ThrowIfNull(r);
-        double top = 4 * r.ReferenceOhms;
+        double top = 4 * r.ReferenceOhm;
         double[] Clip(double[] z) => z.Select(x => double.IsFinite(x) && x <= top ? x : double.NaN).ToArray();
         var refs = truth is null
             ? []

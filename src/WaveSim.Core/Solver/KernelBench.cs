@@ -44,9 +44,9 @@ public static class KernelBench
     /// <exception cref="NumericalException">The line's state is not finite at the end.</exception>
     public static IReadOnlyList<KernelBenchResult> Measure(int cells, int steps, bool lossless, int repeats)
     {
-        if (cells < 2) throw new InputException($"--cells must be at least 2 (got {cells})");
-        if (steps < 1) throw new InputException($"--steps must be at least 1 (got {steps})");
-        if (repeats < 1) throw new InputException($"--repeat must be at least 1 (got {repeats})");
+        if (cells < 2) throw new InputException($"must be at least 2 (got {cells})") { Parameter = nameof(cells) };
+        if (steps < 1) throw new InputException($"must be at least 1 (got {steps})") { Parameter = nameof(steps) };
+        if (repeats < 1) throw new InputException($"must be at least 1 (got {repeats})") { Parameter = nameof(repeats) };
         var kernel = TestLine(cells, lossless, out double[] v, out double[] i);
 
         // Warm-up: about 1e8 cell updates, enough for the JIT and the caches.

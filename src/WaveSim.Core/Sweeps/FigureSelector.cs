@@ -39,17 +39,17 @@ public static class FigureSelector
         : figure.EndsWith("_pct", StringComparison.Ordinal) ? "%" : "";
 
     /// <summary>Reads <c>PROBE.FIGURE</c> (e.g. <c>rx.settling</c>) against the probes of a sweep.</summary>
-    /// <exception cref="InputException">No '.', an unknown probe or an unknown figure.</exception>
-    public static ProbeFigure ProbeAndFigure(string text, IReadOnlyList<string> probes, string option)
+    /// <exception cref="InputException">No '.', an unknown probe or an unknown figure (naming the <c>text</c> parameter).</exception>
+    public static ProbeFigure ProbeAndFigure(string text, IReadOnlyList<string> probes)
     {
         int dot = text.IndexOf('.');
         if (dot <= 0 || dot == text.Length - 1)
-            throw new InputException($"{option} '{text}': expected PROBE.FIGURE, e.g. {probes.FirstOrDefault() ?? "rx"}.settling");
+            throw new InputException($"'{text}': expected PROBE.FIGURE, e.g. {probes.FirstOrDefault() ?? "rx"}.settling") { Parameter = "text" };
         string probe = text[..dot].Trim();
         if (!probes.Contains(probe))
-            throw new InputException($"{option} '{text}': no probe named '{probe}'; probes: {string.Join(", ", probes)}");
+            throw new InputException($"'{text}': no probe named '{probe}'; probes: {string.Join(", ", probes)}") { Parameter = "text" };
         try { return new ProbeFigure(probe, Resolve(text[(dot + 1)..])); }
-        catch (InputException ex) { throw new InputException($"{option} '{text}': {ex.Message}"); }
+        catch (InputException ex) { throw new InputException($"'{text}': {ex.Message}") { Parameter = "text" }; }
     }
 }
 

@@ -56,7 +56,7 @@ public sealed partial record SweepAxis(string KeyPath, Dimension Dimension, IRea
     /// <summary>Value <paramref name="index"/> written as scenario text, round-trip exact (e.g. "4.7e-12 F").</summary>
     public string Text(int index) => Scenarios.ScenarioKeys.Format(Values[index], Dimension);
 
-    /// <summary>Reads <c>KEY=RANGE</c>.</summary>
+    /// <summary>Reads <c>KEY=RANGE</c>; an error names the <c>text</c> parameter (<see cref="InputException.Parameter"/>).</summary>
     /// <exception cref="InputException">The text is not KEY=RANGE, the range is malformed, or its values mix dimensions.</exception>
     public static SweepAxis Parse(string text)
     {
@@ -128,5 +128,5 @@ public sealed partial record SweepAxis(string KeyPath, Dimension Dimension, IRea
     }
 
     // The message names the text as given (KEY=RANGE); the command line adds its option.
-    static InputException Bad(string text, string why) => new($"'{text}': {why}");
+    static InputException Bad(string text, string why) => new($"'{text}': {why}") { Parameter = "text" };
 }

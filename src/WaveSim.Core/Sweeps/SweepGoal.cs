@@ -6,14 +6,14 @@ namespace WaveSim.Core.Sweeps;
 public sealed record SweepGoal(ProbeFigure Target, bool Maximise)
 {
     /// <summary>Reads <c>min:PROBE.FIGURE</c> or <c>max:PROBE.FIGURE</c>.</summary>
-    /// <exception cref="InputException">Malformed text, unknown probe or figure.</exception>
+    /// <exception cref="InputException">Malformed text, unknown probe or figure (naming the <c>text</c> parameter).</exception>
     public static SweepGoal Parse(string text, IReadOnlyList<string> probes)
     {
         int colon = text.IndexOf(':');
         string how = colon > 0 ? text[..colon].Trim() : "";
         if (how is not ("min" or "max"))
-            throw new InputException($"--goal '{text}': expected min:PROBE.FIGURE or max:PROBE.FIGURE, e.g. min:rx.settling");
-        return new SweepGoal(FigureSelector.ProbeAndFigure(text[(colon + 1)..], probes, "--goal"), how == "max");
+            throw new InputException($"'{text}': expected min:PROBE.FIGURE or max:PROBE.FIGURE, e.g. min:rx.settling") { Parameter = "text" };
+        return new SweepGoal(FigureSelector.ProbeAndFigure(text[(colon + 1)..], probes), how == "max");
     }
 
     /// <summary>The goal as written, e.g. "min:rx.settling_s".</summary>

@@ -45,14 +45,18 @@ public sealed class SweepGrid
     {
         ArgumentNullException.ThrowIfNull(scenario);
         ArgumentNullException.ThrowIfNull(axes);
-        if (axes.Count == 0) throw new InputException("a sweep needs at least one varied key (KEY=RANGE)");
+        if (axes.Count == 0) throw new InputException("a sweep needs at least one varied key (KEY=RANGE)") { Parameter = "axes" };
         var dup = axes.GroupBy(a => a.KeyPath).FirstOrDefault(g => g.Count() > 1);
-        if (dup is not null) throw new InputException($"{dup.Key}: the key is varied twice");
+        if (dup is not null) throw new InputException($"{dup.Key}: the key is varied twice") { Parameter = "axes" };
         long total = axes.Aggregate(1L, (n, a) => n * a.Values.Count);
-        if (total > MaxPoints) throw new InputException($"the grid has {total} points (limit {MaxPoints}); use fewer values");
+        if (total > MaxPoints) throw new InputException($"the grid has {total} points (limit {MaxPoints}); use fewer values") { Parameter = "axes" };
 
         // Each key alone at its first value: a missing key or a wrong unit is reported against the key that caused it.
-        foreach (var a in axes) ScenarioValues.With(scenario, a.KeyPath, a.Values[0], a.Dimension);
+        foreach (var a in axes)
+        {
+            try { ScenarioValues.With(scenario, a.KeyPath, a.Values[0], a.Dimension); }
+            catch (InputException ex) when (ex.Parameter is null) { throw new InputException(ex.Message) { Parameter = "axes" }; }
+        }
         var points = new SweepPoint[total];
         for (int i = 0; i < total; i++)
         {

@@ -18,12 +18,12 @@ public sealed partial record SweepLimit(ProbeFigure Target, string Operator, dou
     private static partial Regex Shape();
 
     /// <summary>Reads PROBE.FIGURE OP VALUE.</summary>
-    /// <exception cref="InputException">Malformed text, unknown probe or figure, or a value in the wrong unit.</exception>
+    /// <exception cref="InputException">Malformed text, unknown probe or figure, or a value in the wrong unit (naming the <c>text</c> parameter).</exception>
     public static SweepLimit Parse(string text, IReadOnlyList<string> probes)
     {
         var m = Shape().Match(text);
-        if (!m.Success) throw new InputException($"--limit '{text}': expected PROBE.FIGURE<VALUE (or <=, >, >=), e.g. rx.overshoot<10%");
-        var target = FigureSelector.ProbeAndFigure(m.Groups[1].Value, probes, "--limit");
+        if (!m.Success) throw new InputException($"'{text}': expected PROBE.FIGURE<VALUE (or <=, >, >=), e.g. rx.overshoot<10%") { Parameter = "text" };
+        var target = FigureSelector.ProbeAndFigure(m.Groups[1].Value, probes);
         string value = m.Groups[3].Value;
         double bound;
         try
@@ -36,7 +36,7 @@ public sealed partial record SweepLimit(ProbeFigure Target, string Operator, dou
                 _ => Quantity.Parse(value, Dimension.Number),
             };
         }
-        catch (UnitException ex) { throw new InputException($"--limit '{text}': {ex.Message}"); }
+        catch (UnitException ex) { throw new InputException($"'{text}': {ex.Message}") { Parameter = "text" }; }
         return new SweepLimit(target, m.Groups[2].Value, bound);
     }
 

@@ -3,7 +3,7 @@ using WaveSim.Core.Analysis;
 
 namespace WaveSim.Core.Sweeps;
 
-/// <summary>The JSON form of a sweep's outcome, as printed with --json.</summary>
+/// <summary>The JSON form of a sweep's outcome, as a command prints it.</summary>
 public static class SweepReport
 {
     /// <summary>The axes, the point count and the best point by <paramref name="goal"/> within <paramref name="limits"/> (SI values).</summary>

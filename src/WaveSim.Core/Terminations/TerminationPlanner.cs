@@ -64,7 +64,7 @@ public static class TerminationPlanner
         if (!(vcc > 0) || !(vt > 0 && vt < vcc))
         {
             if (o.TheveninLevelV is not null)
-                throw new InputException($"--thevenin-level: {Quantity.Format(vt, "V", 3)} must lie between 0 V and the source high {Quantity.Format(vcc, "V", 3)}");
+                throw new InputException($"{Quantity.Format(vt, "V", 3)} must lie between 0 V and the source high {Quantity.Format(vcc, "V", 3)}") { Parameter = nameof(TerminationOptions.TheveninLevelV) };
             return new(TerminationKind.Thevenin, [], null, $"the Thevenin level {Quantity.Format(vt, "V", 3)} is not between ground and the supply {Quantity.Format(vcc, "V", 3)}");
         }
         var r1 = Resistor("thevenin_r1_ohm", "R1 to supply", z0 * vcc / vt, o.Series);

@@ -3,7 +3,7 @@ using WaveSim.Core.Analysis;
 
 namespace WaveSim.Core.Terminations;
 
-/// <summary>The JSON form of a termination study, as printed with --json (SI units).</summary>
+/// <summary>The JSON form of a termination study, as a command prints it (SI units).</summary>
 public static class TerminationReport
 {
     /// <summary>The whole study: the line, the limits, and per strategy its parts, figures, power and verdict.</summary>

@@ -50,8 +50,12 @@ public class BenchCommandTests
     [InlineData("bench --repeat 0", "--repeat")]
     public void Bad_sizes_give_a_one_line_error_naming_the_option(string args, string option)
     {
-        var (code, _, err) = Invoke(args);
-        Assert.Equal(1, code);
+        // A value the option cannot read is bad input (exit 2, one "error:" line), as the README's exit-code table says.
+        var (code, output, err) = Invoke(args);
+        Assert.Equal(ExitCodes.BadInput, code);
+        Assert.Equal("", output);
+        Assert.StartsWith("error: " + option + ": ", err);
+        Assert.Single(err.TrimEnd().Split('\n'));
         Assert.Contains(option, err);
         Assert.DoesNotContain("   at ", err);
     }

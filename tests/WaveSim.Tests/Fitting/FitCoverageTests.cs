@@ -70,8 +70,8 @@ public class FitCoverageTests(ITestOutputHelper output)
         foreach (ScenarioFitResult r in results)
         {
             Assert.True(r.Converged);
-            double[] value = [r.Parameters[0].Value, r.Parameters[1].Value, r.OffsetSeconds];
-            double[] sigma = [r.Parameters[0].Uncertainty, r.Parameters[1].Uncertainty, r.OffsetUncertaintySeconds];
+            double[] value = [r.Parameters[0].Value, r.Parameters[1].Value, r.OffsetS];
+            double[] sigma = [r.Parameters[0].Uncertainty, r.Parameters[1].Uncertainty, r.OffsetUncertaintyS];
             for (int j = 0; j < 3; j++)
             {
                 Assert.True(sigma[j] > 0, $"parameter {j}: sigma {sigma[j]}");

@@ -24,7 +24,7 @@ public class ScenarioFitAlignmentTests
 
         ScenarioFitResult r = ScenarioFit.Run(start, capture, "rx", free, new ScenarioFitOptions { Align = align });
 
-        Assert.Equal(1.3e-9, r.OffsetSeconds, 1e-12);
+        Assert.Equal(1.3e-9, r.OffsetS, 1e-12);
         Assert.Equal(50.0, r.Parameters[0].Value, 0.1);
         Assert.Equal(1e-9, r.Parameters[1].Value, 5e-12);
         Assert.True(r.RmsV < 1e-3, $"RMS {r.RmsV} V");

@@ -75,7 +75,7 @@ public class CoupledPairTests
     public void Missing_gap_and_single_line_kinds_are_clear_errors()
     {
         var missing = Assert.Throws<InputException>(() => CrossSection.FromDictionary("coupled-microstrip",
-            Geometry(("width", "0.1mm"), ("height", "0.1mm"), ("er", "4")), "xsection", "--"));
+            Geometry(("width", "0.1mm"), ("height", "0.1mm"), ("er", "4")), "xsection", k => "--" + k));
         Assert.Equal("xsection: missing '--gap' for coupled-microstrip (required: --width, --gap, --height, --er)", missing.Message);
         var single = Assert.Throws<InputException>(() => CrossSection.ComputePair(
             CrossSection.FromDictionary("microstrip", Geometry(("width", "0.1mm"), ("height", "0.1mm"), ("er", "4")), "g")));
@@ -88,7 +88,7 @@ public class CoupledPairTests
     public void Range_warnings_name_the_keys()
     {
         var ms = CrossSection.ComputePair(CrossSection.FromDictionary("coupled-microstrip",
-            Geometry(("width", "0.1mm"), ("gap", "2mm"), ("height", "0.1mm"), ("thickness", "35um"), ("er", "4")), "g", "--"));
+            Geometry(("width", "0.1mm"), ("gap", "2mm"), ("height", "0.1mm"), ("thickness", "35um"), ("er", "4")), "g", k => "--" + k));
         Assert.Contains(ms.Warnings, w => w.StartsWith("--gap/--height = 20 is outside 0.1..10"));
         Assert.Contains(ms.Warnings, w => w.Contains("zero-thickness strips") && w.Contains("--thickness"));
         var sl = CrossSection.ComputePair(Stripline(("width", "0.05mm"), ("thickness", "35um")));

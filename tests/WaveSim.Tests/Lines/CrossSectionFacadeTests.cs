@@ -46,7 +46,7 @@ public class CrossSectionFacadeTests
     {
         var raw = Geometry(("width", "8mil"), ("height", "5mil"), ("er", "4.2"));
         raw[key] = value;
-        var spec = CrossSection.FromDictionary("microstrip", raw, "xsection", "--");
+        var spec = CrossSection.FromDictionary("microstrip", raw, "xsection", k => "--" + k);
         var ex = Assert.Throws<InputException>(() => CrossSection.Compute(spec));
         Assert.Equal(message, ex.Message);
     }
@@ -72,7 +72,7 @@ public class CrossSectionFacadeTests
         var unknown = Assert.Throws<InputException>(() =>
             CrossSection.FromDictionary(Geometry(("kind", "coax"), ("inner", "1mm"), ("outer", "3mm"), ("er", "2"), ("height", "1mm")), "s.yaml line 3"));
         Assert.Equal("s.yaml line 3: unknown key 'height' for coax; accepted: inner, outer, er, tand, at, resistivity", unknown.Message);
-        var missing = Assert.Throws<InputException>(() => CrossSection.FromDictionary("coax", Geometry(("inner", "1mm"), ("er", "2")), "xsection", "--"));
+        var missing = Assert.Throws<InputException>(() => CrossSection.FromDictionary("coax", Geometry(("inner", "1mm"), ("er", "2")), "xsection", k => "--" + k));
         Assert.Equal("xsection: missing '--outer' for coax (required: --inner, --outer, --er)", missing.Message);
         var kind = Assert.Throws<InputException>(() => CrossSection.FromDictionary(Geometry(("kind", "waveguide")), "g"));
         Assert.Equal("g: unknown line kind 'waveguide'; expected one of microstrip, stripline, coax, wires, twisted, coupled-microstrip, coupled-stripline", kind.Message);
@@ -122,7 +122,7 @@ public class CrossSectionFacadeTests
     public void Synthesis_without_a_solution_says_so()
     {
         // Hammerstad and Jensen: a 1 kohm microstrip is beyond any width from h/1e4 to 1e4 h.
-        var spec = CrossSection.FromDictionary("microstrip", Geometry(("height", "0.2mm"), ("er", "4.3")), "xsection", "--", "width");
+        var spec = CrossSection.FromDictionary("microstrip", Geometry(("height", "0.2mm"), ("er", "4.3")), "xsection", k => "--" + k, "width");
         var ex = Assert.Throws<InputException>(() => CrossSection.Solve(spec, "width", 1000));
         Assert.StartsWith("xsection: no --width between", ex.Message);
         Assert.Contains("gives Z0 = 1 kohm", ex.Message);

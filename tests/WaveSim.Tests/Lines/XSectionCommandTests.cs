@@ -16,9 +16,9 @@ public class XSectionCommandTests
         var root = doc.RootElement;
         // Pozar Table 2.1: Z0 = 59.958/sqrt(er) ln(D/d), C = 2 pi eps0 er/ln(D/d).
         Close.Rel(59.958 / 1.5 * Math.Log(2.95 / 0.81), root.GetProperty("z0_ohm").GetDouble(), 1e-5, "Z0");
-        Close.Rel(2 * Math.PI * 8.8542e-12 * 2.25 / Math.Log(2.95 / 0.81), root.GetProperty("c_f_per_m").GetDouble(), 1e-4, "C");
+        Close.Rel(2 * Math.PI * 8.8542e-12 * 2.25 / Math.Log(2.95 / 0.81), root.GetProperty("c_F_per_m").GetDouble(), 1e-4, "C");
         Close.Rel(1.5 / 299_792_458.0, root.GetProperty("delay_s_per_m").GetDouble(), 1e-12, "delay");
-        foreach (string key in new[] { "eps_eff", "l_h_per_m", "r_dc_ohm_per_m" })
+        foreach (string key in new[] { "eps_eff", "l_H_per_m", "r_dc_ohm_per_m" })
             Assert.True(root.GetProperty(key).GetDouble() > 0, key);
         Assert.Equal(0, root.GetProperty("warnings").GetArrayLength());
         Assert.False(root.TryGetProperty("r_ac_ohm_per_m", out _));
@@ -34,7 +34,7 @@ public class XSectionCommandTests
         var root = JsonDocument.Parse(output).RootElement;
         Close.Rel(51.48, root.GetProperty("z0_ohm").GetDouble(), 1e-3);
         Assert.True(root.GetProperty("r_ac_ohm_per_m").GetDouble() > root.GetProperty("r_dc_ohm_per_m").GetDouble());
-        Assert.Equal(0, root.GetProperty("g_s_per_m").GetDouble());
+        Assert.Equal(0, root.GetProperty("g_S_per_m").GetDouble());
     }
 
     [Fact]

@@ -99,7 +99,7 @@ public class CaptureRoundTripTests
         AlignedWaveforms r = WaveformComparison.Compare(simT, simV, c.Time, c.Volts, mode);
 
         // Within one capture sample of the applied shift.
-        Assert.InRange(r.OffsetSeconds, Shift - CaptureStep, Shift + CaptureStep);
+        Assert.InRange(r.OffsetS, Shift - CaptureStep, Shift + CaptureStep);
         // The grid (10 ps, the finer interval) starts on the first shifted capture sample, so every grid point
         // is a capture sample and the residual is the drawn noise; RMS within 10 % of the drawn noise's RMS.
         double noiseRms = SyntheticCapture.Rms(g.Noise);
@@ -119,7 +119,7 @@ public class CaptureRoundTripTests
 
         AlignedWaveforms r = WaveformComparison.Compare(simT, simV, c.Time, c.Volts, AlignMode.None);
 
-        Assert.Equal(0.0, r.OffsetSeconds);
+        Assert.Equal(0.0, r.OffsetS);
         Assert.True(r.PeakV > 0.9, $"peak {r.PeakV}");   // a 3.5 ns misalignment of a 1 V step leaves ~1 V residual
     }
 }

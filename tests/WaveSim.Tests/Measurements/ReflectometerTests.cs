@@ -28,7 +28,7 @@ simulation: { duration: 5 ns, resolution: 10 }
         var r = TdrAnalysis.Analyse(trace, ((Segment)s.Line[0]).Velocity);
 
         // Incident 1 V into 50 ohm from 2 V behind 50 ohm: v_inc = V Z0/(Z0 + Rs) (voltage divider).
-        Assert.Equal(1.0, r.IncidentVolts, 1e-12);
+        Assert.Equal(1.0, r.IncidentV, 1e-12);
         double[] truth = [50, 75, 35, 50];
         for (int i = 0; i < truth.Length; i++)
             Assert.InRange(At(r, r.LayerOhms, 0.1 * i + 0.05), truth[i] - 1, truth[i] + 1);
