@@ -19,8 +19,12 @@ internal sealed class SparseLu<T> where T : struct, INumberBase<T>
     /// <summary>The pivot threshold: a pivot at least this fraction of its column's largest candidate.</summary>
     const double Threshold = 0.1;
 
-    /// <summary>A pivot below this fraction of its column's largest entry in the equilibrated matrix counts as zero.</summary>
-    const double Singular = 1e-14;
+    /// <summary>
+    /// A pivot below this fraction of its column's largest entry in the equilibrated matrix counts as zero: only an exact or
+    /// underflowed zero, since a tiny leak (1e-15 S against 1 S) is a legitimate pivot; callers judge conditioning by
+    /// <see cref="PivotRatio"/> or a residual.
+    /// </summary>
+    const double Singular = 1e-300;
 
     readonly int _n;
     readonly T[] _rowScale;
