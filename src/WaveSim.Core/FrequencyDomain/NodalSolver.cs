@@ -21,6 +21,7 @@ internal sealed class NodalSolver(Circuit c)
 
     readonly List<(int, int, Complex)> _a = new(4 * c.Size);
     readonly Complex[] _b = new Complex[c.Size], _x = new Complex[c.Size];
+    Solver.SparseLu<Complex>? _lu;
 
     /// <summary>
     /// The unknown vector for the driver's open-circuit voltage <paramref name="drive"/>. With <paramref name="dc"/> the solve is the
@@ -91,9 +92,10 @@ internal sealed class NodalSolver(Circuit c)
                 a.Add((row, i1, 1)); a.Add((row, seg.Start, -yCsch)); a.Add((row, seg.End, yCoth)); row++;
             }
         }
-        var lu = Solver.SparseLu<Complex>.Factor(c.Size, a, Norm1);
-        if (lu is null) return null;
-        lu.Solve(b, _x);
+        // The pattern is the same at every s ≠ 0: replay the first factorisation's pivots, and choose afresh only if one fails.
+        if (_lu is null || !_lu.Refactor(a)) _lu = Solver.SparseLu<Complex>.Factor(c.Size, a, Norm1);
+        if (_lu is null) return null;
+        _lu.Solve(b, _x);
         foreach (var v in _x)
             if (!double.IsFinite(v.Real) || !double.IsFinite(v.Imaginary)) return null;
         return _x;
