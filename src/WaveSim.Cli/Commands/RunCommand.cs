@@ -40,6 +40,7 @@ public static class RunCommand
             var s = CommonOptions.Load(path, pr.InvocationConfiguration.Error);
             var pictureOptions = PictureOptions(s, pr.GetValue(window), pr.GetValue(plot), pr.GetValue(currents));
             var options = new SimulationOptions { Force = pr.GetValue(force), SnapshotTimes = RunPictures.SnapshotTimes(s, nFrames) };
+            if (pr.GetValue(fdCheck) && !options.Force) FrequencyDomainCheck.CheckLimits(s, Simulate.Plan(s));
             SimulationResult result;
             using (var bar = new ProgressBar(pr.InvocationConfiguration.Error, "simulating"))
                 result = Simulate.Run(s, options with { Progress = bar }, ct);

@@ -22,6 +22,13 @@ internal sealed class SparseLu<T> where T : struct, INumberBase<T>
     const double Threshold = 0.1;
 
     /// <summary>
+    /// The threshold a refactor accepts an old pivot at: looser than the first choice's, so that one frequency after another
+    /// keeps the order (the growth of an entry per elimination stays bounded by 1/RefactorThreshold, and a tree row is eliminated
+    /// into at most a few others).
+    /// </summary>
+    const double RefactorThreshold = 1e-3;
+
+    /// <summary>
     /// A pivot below this fraction of its column's largest entry in the equilibrated matrix counts as zero: only an exact or
     /// underflowed zero, since a tiny leak (1e-15 S against 1 S) is a legitimate pivot; callers judge conditioning by
     /// <see cref="PivotRatio"/> or a residual.
@@ -40,6 +47,9 @@ internal sealed class SparseLu<T> where T : struct, INumberBase<T>
 
     /// <summary>Smallest over largest pivot magnitude of the equilibrated matrix: a cheap sign of a nearly singular system.</summary>
     public double PivotRatio { get; private set; }
+
+    /// <summary>Whether the last <see cref="Refactor"/> kept the old pivots (for the tests of the fast path).</summary>
+    public bool Refactored { get; private set; }
 
     /// <summary>Number of stored factor entries (multipliers, pivots and U entries): the work of one solve.</summary>
     public long FactorEntries => _opFactor.Length + _pivVal.Length + _uVal.Length;
@@ -106,7 +116,7 @@ internal sealed class SparseLu<T> where T : struct, INumberBase<T>
             T piv = val[_stepPivotSlot[i]];
             double pn = _norm(piv), best = pn;
             for (int o = _stepOpStart[i]; o < _stepOpStart[i + 1]; o++) best = Math.Max(best, _norm(val[_opSlot[o]]));
-            if (!(pn >= Threshold * best) || !(pn > 0)) return false;
+            if (!(pn >= RefactorThreshold * best) || !(pn > 0)) { Refactored = false; return false; }
             minPivot = Math.Min(minPivot, pn); maxPivot = Math.Max(maxPivot, pn);
             _pivVal[i] = piv;
             for (int o = _stepOpStart[i]; o < _stepOpStart[i + 1]; o++)
@@ -117,6 +127,7 @@ internal sealed class SparseLu<T> where T : struct, INumberBase<T>
         }
         for (int e = 0; e < _uSlot.Length; e++) _uVal[e] = val[_uSlot[e]];
         PivotRatio = minPivot / maxPivot;
+        Refactored = true;
         return true;
     }
 
