@@ -34,7 +34,7 @@ public static class ScenarioLoader
     /// <summary>
     /// The most line items a scenario may hold, branches' items included: 100,000. The junction solve and the DC operating point
     /// are sparse and linear in the number of items (a net is a tree), so the bound is memory and time, not the solves: a
-    /// 100,000-item net plans in seconds, its network and factors take about 1 kB per item, and the plan's limits still bound
+    /// 100,000-item net plans in seconds and runs in about 1 GB, and the plan's limits (which count the junction solve) still bound
     /// the run (docs/PERFORMANCE.md). A real board net has tens of items; a finely cut taper a few thousand.
     /// </summary>
     public const int MaxLineItems = 100_000;

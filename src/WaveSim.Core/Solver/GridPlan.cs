@@ -83,7 +83,10 @@ public sealed record GridPlan
 
     /// <summary>Unknowns of the per-step junction solve (junctions and lumped branches), as the network will have them.</summary>
     public long StepUnknowns { get; init; }
-    /// <summary>The memory estimate in floating point, bytes (<see cref="MemoryBytes"/> is held at long.MaxValue beyond it).</summary>
+    /// <summary>
+    /// The memory estimate the limits use, in floating point, bytes: <see cref="MemoryBytes"/> (which is held at long.MaxValue)
+    /// plus <see cref="UnknownBytes"/> per unknown of the junction solve.
+    /// </summary>
     public double EstimatedBytes { get; init; }
     /// <summary>
     /// The estimated run time on one core, s: cell updates at <see cref="CellSeconds"/>, steps at <see cref="StepSeconds"/> plus
@@ -100,6 +103,12 @@ public sealed record GridPlan
     public const double UnknownSeconds = 2e-7;
     /// <summary>Time to record and write one output or figure value, s (measured).</summary>
     public const double OutputValueSeconds = 1e-7;
+    /// <summary>
+    /// Memory per unknown of the junction solve beyond the grid, bytes: the network's objects, the step's sparse factors and the
+    /// DC solve's while it factors. A rough share: a run of 100,000 segments (3.25 million cells) peaked at 0.96 GB, about
+    /// 10 kB per segment with every array of the grid and its kernel included (docs/PERFORMANCE.md).
+    /// </summary>
+    public const double UnknownBytes = 2048;
     /// <summary>Runs whose <see cref="EstimatedSeconds"/> is above this are refused unless forced: 10 minutes.</summary>
     public const double RunTimeLimitSeconds = 600;
 
@@ -146,7 +155,7 @@ public sealed record GridPlan
         {
             Dt = dt, DtLimit = limit, Steps = Saturate(stepCount), Segments = plans, OutputRows = Saturate(rowCount),
             MemoryBytes = Saturate(memory), FigureStep = figure, FigureRows = Saturate(figureCount),
-            StepUnknowns = unknowns, EstimatedBytes = memory, EstimatedSeconds = seconds,
+            StepUnknowns = unknowns, EstimatedBytes = memory + unknowns * UnknownBytes, EstimatedSeconds = seconds,
         };
     }
 
