@@ -22,6 +22,9 @@ public static class Simulate
     public static RunOutcome Run(Scenario scenario, RunOptions? options = null, CancellationToken ct = default)
     {
         options ??= new RunOptions();
+        // The frequency-domain check can cost more than the run; it is refused before the run starts, not after.
+        if (options.Analysis.FrequencyCheck && !options.Force)
+            FrequencyDomain.FrequencyDomainCheck.CheckLimits(scenario, options.Plan ?? Plan(scenario));
         var sim = new SimulationOptions
         {
             Force = options.Force,

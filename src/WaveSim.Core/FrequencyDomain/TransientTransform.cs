@@ -38,9 +38,12 @@ internal sealed class TransientTransform
     public required int Points { get; init; }
     public required double Damping { get; init; }
 
-    public static TransientTransform For(Scenario scenario, double[] times)
+    public static TransientTransform For(Scenario scenario, double[] times) =>
+        For(scenario, times.DefaultIfEmpty(0).Max(), UniformStep(times));
+
+    /// <summary>The transform for instants up to <paramref name="lastTime"/>, evenly spaced by <paramref name="uniformStep"/> from 0 if given.</summary>
+    public static TransientTransform For(Scenario scenario, double lastTime, double? uniformStep)
     {
-        double lastTime = times.DefaultIfEmpty(0).Max();
         double feature = scenario.Source.ShortestFeature;
         if (!double.IsFinite(feature) || feature <= 0)
             feature = AllSegments(scenario.Line).Min(s => s.Delay);
@@ -48,7 +51,7 @@ internal sealed class TransientTransform
         double wanted = Math.Min(feature / SamplesPerFeature, span / 256);
         // Instants on a uniform grid from 0 (the leapfrog's outputs) are made transform samples, so no interpolation
         // error enters at the corners of the driver's edges; other instants are interpolated linearly.
-        if (UniformStep(times) is { } h) wanted = h / Math.Ceiling(h / wanted * (1 - 1e-9));
+        if (uniformStep is { } h) wanted = h / Math.Ceiling(h / wanted * (1 - 1e-9));
         double dt = Math.Max(wanted, WindowFactor * span / MaxPoints);
         int n = MinPoints;
         while (n * dt < WindowFactor * span * (1 - 1e-12) && n < MaxPoints) n <<= 1;

@@ -33,12 +33,12 @@ public static class ScenarioLoader
     public static readonly string[] SimulationKeys = ["duration", "output_step", "resolution"];
 
     /// <summary>
-    /// The most line items a scenario may hold, branches' items included. The DC operating point and the junction solve are
-    /// dense in the number of junctions, so their memory grows with the square and their time with the cube of it; 2,000 items
-    /// keeps both within the run's memory limit and minutes (common practice, no source). Beyond about 46,000 the matrix index
-    /// overflowed.
+    /// The most line items a scenario may hold, branches' items included: 100,000. The junction solve and the DC operating point
+    /// are sparse and linear in the number of items (a net is a tree), so the bound is memory and time, not the solves: a
+    /// 100,000-item net plans in seconds and runs in about 1 GB, and the plan's limits (which count the junction solve) still bound
+    /// the run (docs/PERFORMANCE.md). A real board net has tens of items; a finely cut taper a few thousand.
     /// </summary>
-    public const int MaxLineItems = 2000;
+    public const int MaxLineItems = 100_000;
 
     static int CountItems(IReadOnlyList<LineElement> line) => line.Sum(e => e is Branch b ? 1 + CountItems(b.Line) : 1);
 

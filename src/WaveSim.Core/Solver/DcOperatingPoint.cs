@@ -1,5 +1,3 @@
-using MathNet.Numerics.LinearAlgebra;
-
 namespace WaveSim.Core.Solver;
 
 /// <summary>
@@ -24,8 +22,11 @@ internal static class DcOperatingPoint
         var x = Solve(net, sourceLevel, 0);
         if (x is null)
         {
-            x = Solve(net, sourceLevel, Rmin);
-            if (x is null || x.Any(v => Math.Abs(v) > 1e6))
+            // Singular with every DC path as given: a loop of ideal parts (a 0 ohm driver into a shorted lossless line) has no
+            // defined current, and with Rmin in each such path the current comes out absurd; anything else singular says so.
+            x = Solve(net, sourceLevel, Rmin)
+                ?? throw new InputException("the network has no defined DC operating point (its equations are singular): check the parts for a node held at two voltages");
+            if (x.Any(v => Math.Abs(v) > 1e6))
                 throw new InputException("the driver's initial level drives an unlimited DC current through a loop with no resistance (0 ohm driver, lossless line, shorted load?): give the driver or the load a resistance");
         }
         Store(net, sourceLevel, x);
@@ -41,26 +42,26 @@ internal static class DcOperatingPoint
         var x = Solve(net, sourceLevel, 0) ?? Solve(net, sourceLevel, Rmin)
             ?? throw new InputException("the network has no defined DC solution (a loop with no resistance?): give the driver or the load a resistance");
         int nj = net.Junctions.Count, nb = net.Branches.Count;
-        return (x.SubVector(0, nj).ToArray(), x.SubVector(nj, nb).ToArray());
+        return (x[..nj], x[nj..(nj + nb)]);
     }
 
-    static Vector<double>? Solve(Network net, double sourceLevel, double rmin)
+    static double[]? Solve(Network net, double sourceLevel, double rmin)
     {
         int nj = net.Junctions.Count, nb = net.Branches.Count, ns = net.Segments.Count;
         int n = nj + nb + 2 * ns;
-        var a = Matrix<double>.Build.Dense(n, n);
-        var rhs = Vector<double>.Build.Dense(n);
-        for (int j = 0; j < nj; j++) a[j, j] = net.Junctions[j].G + Gmin;
+        var a = new List<(int Row, int Col, double Value)>(nj + 5 * nb + 8 * ns);
+        var rhs = new double[n];
+        for (int j = 0; j < nj; j++) a.Add((j, j, net.Junctions[j].G + Gmin));
         for (int b = 0; b < nb; b++)
         {
             var br = net.Branches[b];
             int row = nj + b;
-            if (br.A >= 0) a[br.A, row] += 1;
-            if (br.B >= 0) a[br.B, row] -= 1;
-            if (br.C is not null) { a[row, row] = 1; continue; } // no DC current through a capacitor
-            if (br.A >= 0) a[row, br.A] = 1;
-            if (br.B >= 0) a[row, br.B] = -1;
-            a[row, row] = -Math.Max(br.R, rmin);
+            if (br.A >= 0) a.Add((br.A, row, 1));
+            if (br.B >= 0) a.Add((br.B, row, -1));
+            if (br.C is not null) { a.Add((row, row, 1)); continue; } // no DC current through a capacitor
+            if (br.A >= 0) a.Add((row, br.A, 1));
+            if (br.B >= 0) a.Add((row, br.B, -1));
+            a.Add((row, row, -Math.Max(br.R, rmin)));
             if (br.DrivenA) rhs[row] -= sourceLevel;
             if (br.B < 0) rhs[row] += br.FixedB;
         }
@@ -68,27 +69,72 @@ internal static class DcOperatingPoint
         {
             var seg = net.Segments[s];
             int i0 = nj + nb + 2 * s, iEnd = i0 + 1;
-            a[seg.Start, i0] += 1;
-            a[seg.End, iEnd] -= 1;
+            a.Add((seg.Start, i0, 1));
+            a.Add((seg.End, iEnd, -1));
+            if (IsLong(seg))
+            {
+                // I_0 = Y11 V_start + Y12 V_end; I_end = −(Y12 V_start + Y11 V_end): bounded however long and lossy the ladder.
+                var (y11, y12) = Admittance(seg);
+                a.Add((i0, i0, 1)); a.Add((i0, seg.Start, -y11)); a.Add((i0, seg.End, -y12));
+                a.Add((iEnd, iEnd, 1)); a.Add((iEnd, seg.Start, y12)); a.Add((iEnd, seg.End, y11));
+                continue;
+            }
             var (va, ia) = Propagate(seg, 1, 0);
             var (vb, ib) = Propagate(seg, 0, 1);
             vb = Math.Min(vb, -rmin);
             // [V_end; I_end] = [[va, vb], [ia, ib]] [V_start; I_0]
-            a[i0, seg.End] = 1; a[i0, seg.Start] = -va; a[i0, i0] = -vb;
-            a[iEnd, iEnd] = 1; a[iEnd, seg.Start] = -ia; a[iEnd, i0] = -ib;
+            a.Add((i0, seg.End, 1)); a.Add((i0, seg.Start, -va)); a.Add((i0, i0, -vb));
+            a.Add((iEnd, iEnd, 1)); a.Add((iEnd, seg.Start, -ia)); a.Add((iEnd, i0, -ib));
         }
-        Vector<double> x;
-        try { x = a.Solve(rhs); }
-        catch (Exception ex) when (ex is not OutOfMemoryException) { return null; }
-        if (x.Any(v => !double.IsFinite(v)) || (a * x - rhs).AbsoluteMaximum() > 1e-9 * (1 + rhs.AbsoluteMaximum()))
-            return null;
+        var lu = SparseLu<double>.Factor(n, a, Math.Abs);
+        if (lu is null) return null;
+        var x = new double[n];
+        lu.Solve(rhs, x);
+        if (x.Any(v => !double.IsFinite(v))) return null;
+        // The residual, row by row against the row's own scale, so that a tiny current next to a large voltage still counts.
+        var res = (double[])rhs.Clone();
+        var scale = new double[n];
+        foreach (var (r, c, v) in a) { res[r] -= v * x[c]; scale[r] = Math.Max(scale[r], Math.Abs(v * x[c])); }
+        for (int r = 0; r < n; r++)
+            if (Math.Abs(res[r]) > 1e-9 * (scale[r] + Math.Abs(rhs[r])) && Math.Abs(res[r]) > 1e-9 * (1 + Math.Abs(rhs[r])))
+                return null;
         return x;
     }
 
-    static void Store(Network net, double sourceLevel, Vector<double> x)
+    /// <summary>
+    /// Whether walking the segment's ladder from one end would amplify rounding by more than cosh(5) ≈ 74: its total discrete
+    /// attenuation n·2·asinh(√(r·g)·dz/2) above 5 (the image attenuation of a symmetric ladder section; Guillemin,
+    /// Communication Networks vol. II, 1935). Such a segment enters the DC solve by its admittance parameters instead.
+    /// </summary>
+    static bool IsLong(GridSegment seg)
+    {
+        var s = seg.Plan.Segment;
+        double x = Math.Sqrt(s.R * seg.Dz * s.G * seg.Dz);
+        return seg.Cells * 2 * Math.Asinh(x / 2) > 5;
+    }
+
+    /// <summary>
+    /// Y11 (= Y22, the ladder is symmetric) and Y12 of the segment's discrete ladder (n series r·dz, n − 1 interior shunts g·dz),
+    /// built cell by cell by joining two-ports at a node: every term is a sum of positive conductances, so nothing overflows
+    /// and Y12 decays to 0 on a very lossy line instead of the chain form's e^(αl) growing past the range of a double.
+    /// </summary>
+    static (double Y11, double Y12) Admittance(GridSegment seg)
+    {
+        var s = seg.Plan.Segment;
+        double y = 1 / (s.R * seg.Dz), g = s.G * seg.Dz;
+        double y22 = y, y12 = -y;
+        for (int k = 1; k < seg.Cells; k++)
+        {
+            double d = y22 + g + y;
+            y12 = y12 * (y / d);
+            y22 = y * ((y22 + g) / d);
+        }
+        return (y22, y12);
+    }
+
+    static void Store(Network net, double sourceLevel, double[] x)
     {
         int nj = net.Junctions.Count, nb = net.Branches.Count, ns = net.Segments.Count;
-
         for (int b = 0; b < nb; b++)
         {
             var br = net.Branches[b];
@@ -100,7 +146,8 @@ internal static class DcOperatingPoint
         for (int s = 0; s < ns; s++)
         {
             var seg = net.Segments[s];
-            Fill(seg, x[seg.Start], x[nj + nb + 2 * s]);
+            if (IsLong(seg)) FillBetween(seg, x[seg.Start], x[seg.End]);
+            else Fill(seg, x[seg.Start], x[nj + nb + 2 * s]);
         }
     }
 
@@ -129,5 +176,30 @@ internal static class DcOperatingPoint
             seg.V[k + 1] = v;
             if (k < seg.Cells - 1) i -= gdz * v;
         }
+    }
+
+    /// <summary>
+    /// The ladder's node voltages between fixed end voltages, by the tridiagonal solve of each interior node's KCL
+    /// (−V[k−1] + (2 + r·g·dz²) V[k] − V[k+1] = 0; Thomas algorithm, stable for a diagonally dominant system), and its
+    /// half-cell currents from Ohm's law: walking from one end would grow rounding like e^(αl).
+    /// </summary>
+    static void FillBetween(GridSegment seg, double va, double vb)
+    {
+        var s = seg.Plan.Segment;
+        double rdz = s.R * seg.Dz, diag = 2 + rdz * s.G * seg.Dz;
+        int n = seg.Cells;
+        var v = seg.V;
+        var c = seg.I;   // scratch for the forward sweep's multipliers, overwritten by the currents below
+        v[0] = va; v[n] = vb;
+        double prev = va;
+        for (int k = 1; k < n; k++)
+        {
+            double m = diag + (k > 1 ? c[k - 1] : 0);
+            c[k] = -1 / m;
+            prev = (prev + (k == n - 1 ? vb : 0)) / m;
+            v[k] = prev;
+        }
+        for (int k = n - 2; k >= 1; k--) v[k] -= c[k] * v[k + 1];
+        for (int k = 0; k < n; k++) seg.I[k] = (v[k] - v[k + 1]) / rdz;
     }
 }

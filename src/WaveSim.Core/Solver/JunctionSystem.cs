@@ -1,5 +1,3 @@
-using MathNet.Numerics.LinearAlgebra;
-
 namespace WaveSim.Core.Solver;
 
 /// <summary>
@@ -8,7 +6,7 @@ namespace WaveSim.Core.Solver;
 /// <remarks>
 /// Kirchhoff's current law at each junction is written over one step with the half-step line currents as known injections
 /// (the leapfrog form), and each lumped R-L-C branch with the trapezoidal rule (A-stable, so a 1 fF or 1 µF part, a 0 ohm or
-/// 1 Mohm resistor all stay stable; Dahlquist 1963). The matrix depends only on dt, so its inverse is formed once.
+/// 1 Mohm resistor all stay stable; Dahlquist 1963). The matrix depends only on dt, so it is factored once (<see cref="SparseLu{T}"/>).
 /// At the driver with a resistance Rs this reduces to the end-node update of Paul, Analysis of Multiconductor
 /// Transmission Lines, 2nd ed. 2008, FDTD chapter.
 /// </remarks>
@@ -17,41 +15,43 @@ internal sealed class JunctionSystem
     readonly Network _net;
     readonly double _dt;
     readonly int _nj, _n;
-    readonly double[] _inverse, _rhs, _x, _keep, _zeq;
+    readonly double[] _rhs, _x, _keep, _zeq;
+    readonly SparseLu<double> _lu;
 
     public JunctionSystem(Network net, double dt)
     {
         _net = net; _dt = dt;
         _nj = net.Junctions.Count;
         _n = _nj + net.Branches.Count;
-        var a = Matrix<double>.Build.Dense(_n, _n);
+        var a = new List<(int, int, double)>(_nj + 5 * net.Branches.Count);
         _keep = new double[_nj];
         _zeq = new double[net.Branches.Count];
         for (int j = 0; j < _nj; j++)
         {
             var jn = net.Junctions[j];
-            a[j, j] = jn.C / dt + jn.G / 2;
+            a.Add((j, j, jn.C / dt + jn.G / 2));
             _keep[j] = jn.C / dt - jn.G / 2;
         }
         for (int b = 0; b < net.Branches.Count; b++)
         {
             var br = net.Branches[b];
             int row = _nj + b;
-            if (br.A >= 0) { a[br.A, row] += 1; a[row, br.A] = 0.5; }
-            if (br.B >= 0) { a[br.B, row] -= 1; a[row, br.B] = -0.5; }
+            if (br.A >= 0) { a.Add((br.A, row, 1)); a.Add((row, br.A, 0.5)); }
+            if (br.B >= 0) { a.Add((br.B, row, -1)); a.Add((row, br.B, -0.5)); }
             _zeq[b] = br.R + 2 * br.L / dt + (br.C is { } c ? dt / (2 * c) : 0);
-            a[row, row] = -_zeq[b];
+            a.Add((row, row, -_zeq[b]));
         }
-        Matrix<double> inv;
-        try { inv = a.Inverse(); }
-        catch (Exception ex) when (ex is not OutOfMemoryException)
-        { throw new InputException("the network's lumped parts leave a node without a defined voltage: " + ex.Message); }
-        if (inv.Enumerate().Any(v => !double.IsFinite(v)) || a.ConditionNumber() > 1e15)
+        // The matrix depends only on dt: factored once, each step is one sparse solve, linear in the junctions and branches.
+        var lu = SparseLu<double>.Factor(_n, a, Math.Abs);
+        if (lu is null || lu.PivotRatio < 1e-15)
             throw new InputException("the network's lumped parts leave a node without a defined voltage (the step's equations are singular)");
-        _inverse = inv.ToRowMajorArray();
+        _lu = lu;
         _rhs = new double[_n];
         _x = new double[_n];
     }
+
+    /// <summary>Entries of the factors, the work of one step's solve (for the plan's estimate).</summary>
+    public long FactorEntries => _lu.FactorEntries;
 
     /// <summary>Junction voltages at the new step, after <see cref="Solve"/>.</summary>
     public ReadOnlySpan<double> Voltages => _x.AsSpan(0, _nj);
@@ -80,14 +80,7 @@ internal sealed class JunctionSystem
             if (br.B < 0) r += br.FixedB;
             rhs[_nj + b] = r;
         }
-        var inv = _inverse.AsSpan();
-        for (int i = 0; i < _n; i++)
-        {
-            var row = inv.Slice(i * _n, _n);
-            double sum = 0;
-            for (int k = 0; k < _n; k++) sum += row[k] * rhs[k];
-            _x[i] = sum;
-        }
+        _lu.Solve(rhs, _x);
         for (int b = 0; b < net.Branches.Count; b++)
         {
             var br = net.Branches[b];
