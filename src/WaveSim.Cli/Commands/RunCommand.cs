@@ -48,11 +48,8 @@ public static class RunCommand
             RunOutcome run;
             using (var bar = new ProgressBar(pr.InvocationConfiguration.Error, "simulating"))
                 run = Simulate.Run(s, new RunOptions { Analysis = analysis, Force = pr.GetValue(force), Plan = plan, Progress = bar }, ct);
-            RunFilesWritten written;
-            {
-                written = RunFiles.Write(run, output, files, ct);
-                output.Commit();
-            }
+            var written = RunFiles.Write(run, output, files, ct);
+            output.Commit();
             RunPrinter.Print(pr.InvocationConfiguration.Output, run, written, dir, pr.GetValue(json));
             return ExitCodes.Ok;
         }));

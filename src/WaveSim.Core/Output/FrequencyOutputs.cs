@@ -1,9 +1,9 @@
 using System.Globalization;
 using CsvHelper;
-using WaveSim.Core.Output;
+using WaveSim.Core.FrequencyDomain;
 using WaveSim.Core.Rendering;
 
-namespace WaveSim.Core.FrequencyDomain;
+namespace WaveSim.Core.Output;
 
 /// <summary>Writes a <see cref="FrequencyResponse"/> as frequency.csv and frequency.png into an <see cref="OutputFolder"/>.</summary>
 public static class FrequencyOutputs

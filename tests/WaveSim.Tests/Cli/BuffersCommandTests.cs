@@ -1,7 +1,8 @@
 using System.Text.Json.Nodes;
 using WaveSim.Core.Output;
+using WaveSim.Tests.Buffers;
 
-namespace WaveSim.Tests.Buffers;
+namespace WaveSim.Tests.Cli;
 
 /// <summary><c>wavesim buffers</c>: what it lists and writes, and one-line errors with nothing written for bad input.</summary>
 public class BuffersCommandTests

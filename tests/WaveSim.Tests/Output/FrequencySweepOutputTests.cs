@@ -2,11 +2,12 @@ using System.Globalization;
 using System.Numerics;
 using WaveSim.Core;
 using WaveSim.Core.FrequencyDomain;
+using WaveSim.Core.Output;
 
-namespace WaveSim.Tests.FrequencyDomain;
+namespace WaveSim.Tests.Output;
 
 /// <summary>The sweep's spacing and the frequency.csv / frequency.png outputs.</summary>
-public class SweepOutputTests
+public class FrequencySweepOutputTests
 {
     const string Yaml = @"
 title: sweep
@@ -84,7 +85,7 @@ simulation: { duration: 5 ns }
         string dir = Path.Combine(Path.GetTempPath(), "wavesim-freq-" + Guid.NewGuid().ToString("N"));
         try
         {
-            using (var output = new Core.Output.OutputFolder(dir))
+            using (var output = new OutputFolder(dir))
             {
                 FrequencyOutputs.Write(output, r, "sweep");
                 output.Commit();

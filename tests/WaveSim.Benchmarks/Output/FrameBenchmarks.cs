@@ -7,7 +7,7 @@ using WaveSim.Core.Rendering;
 using WaveSim.Core.Scenarios;
 using WaveSim.Core.Solver;
 
-namespace WaveSim.Benchmarks.Pictures;
+namespace WaveSim.Benchmarks.Output;
 
 /// <summary>
 /// A run with 200 frames of a 1000-cell line: the simulation with its snapshots, then the frames rendered in parallel at

@@ -1,8 +1,9 @@
 using System.Globalization;
 using CsvHelper;
 using WaveSim.Core.Analysis;
+using WaveSim.Core.Sweeps;
 
-namespace WaveSim.Core.Sweeps;
+namespace WaveSim.Core.Output;
 
 /// <summary>
 /// Writes sweep.csv: one row per point in sweep order; the varied keys first (column = key path, SI value), then
@@ -33,5 +34,5 @@ public static class SweepCsv
         }
     }
 
-    static string Cell(double v) => Output.CsvNumber.Format(v);
+    static string Cell(double v) => CsvNumber.Format(v);
 }

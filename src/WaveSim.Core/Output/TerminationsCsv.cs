@@ -1,8 +1,9 @@
 using System.Globalization;
 using CsvHelper;
 using WaveSim.Core.Analysis;
+using WaveSim.Core.Terminations;
 
-namespace WaveSim.Core.Terminations;
+namespace WaveSim.Core.Output;
 
 /// <summary>
 /// Writes terminations.csv: one row per strategy; <c>strategy</c>, the simulated part values in SI (series_r_ohm,
@@ -49,5 +50,5 @@ public static class TerminationsCsv
         }
     }
 
-    static string Cell(double? v) => v is { } x ? Output.CsvNumber.Format(x) : "";
+    static string Cell(double? v) => v is { } x ? CsvNumber.Format(x) : "";
 }

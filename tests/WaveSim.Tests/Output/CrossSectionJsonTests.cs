@@ -3,7 +3,7 @@ using System.Text.RegularExpressions;
 using WaveSim.Core.Lines;
 using WaveSim.Core.Output;
 
-namespace WaveSim.Tests.Lines;
+namespace WaveSim.Tests.Output;
 
 /// <summary>
 /// The cross-section's JSON (it used to be built inside the xsection command): SI values under keys that end in their
