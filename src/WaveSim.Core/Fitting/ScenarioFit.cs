@@ -12,7 +12,7 @@ namespace WaveSim.Core.Fitting;
 /// </summary>
 /// <remarks>
 /// <para>Residual: the captured value minus the simulated probe, linearly interpolated at each capture sample time t_i + offset
-/// (observed − model, the sign of compare's residual and of <see cref="Output.CaptureResidual"/>; the fit itself does not
+/// (observed − model, the sign of compare's residual and of CaptureResidual in Output; the fit itself does not
 /// depend on the sign). Before 0 the simulation holds its first value (nothing has happened yet), after its end its last. The capture
 /// samples used are fixed at the start: those that fall inside the simulated record with the starting offset.</para>
 /// <para>Alignment: the capture is aligned once, with the starting scenario: by cross-correlation (the default) or the 50 %

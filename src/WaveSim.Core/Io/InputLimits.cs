@@ -20,12 +20,12 @@ public static class InputLimits
     public const long CaptureBytes = 1L << 30;
 
     /// <summary>
-    /// Data rows kept from a capture: 8,000,000, twice the comparison grid's limit
-    /// (<see cref="Measurements.WaveformComparison.MaxGridPoints"/>). At least half of a capture must overlap the simulation and the
+    /// Data rows kept from a capture: 8,000,000, twice the comparison grid's limit (WaveformComparison.MaxGridPoints, in
+    /// Measurements, which Io does not use; a test keeps the two in step). At least half of a capture must overlap the simulation and the
     /// comparison grid is never coarser than the capture's step, so an evenly sampled capture with more rows could not be compared
     /// anyway. Beyond it the file is refused, not decimated (docs/measurements.md says why).
     /// </summary>
-    public const int CaptureRows = 2 * Measurements.WaveformComparison.MaxGridPoints;
+    public const int CaptureRows = 8_000_000;
 
     /// <summary>The longest line of a table or capture file: 1 Mi characters (a data row is some tens).</summary>
     public const int LineChars = 1 << 20;

@@ -4,7 +4,7 @@ namespace WaveSim.Core.Model;
 
 /// <summary>
 /// One net to simulate: a driver, a tree of line elements, a far-end load, probes and run settings. All values SI. Immutable: the
-/// lists are copied into immutable arrays when set, so a variant (<c>with</c>, or <see cref="Scenarios.ScenarioValues"/>) never
+/// lists are copied into immutable arrays when set, so a variant (<c>with</c>, or ScenarioValues) never
 /// changes the scenario it was made from.
 /// </summary>
 public sealed record Scenario

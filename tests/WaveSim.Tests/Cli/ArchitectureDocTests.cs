@@ -67,4 +67,11 @@ public partial class ArchitectureDocTests
             .Select(f => Path.GetRelativePath(Repository.Root, f)).ToList();
         Assert.True(offenders.Count == 0, string.Join("\n", offenders));
     }
+
+    [Fact]
+    public void The_capture_row_limit_is_twice_the_comparison_grid()
+    {
+        // Io names the number itself so that it need not use Measurements; the reason it gives must stay true.
+        Assert.Equal(2 * WaveSim.Core.Measurements.WaveformComparison.MaxGridPoints, WaveSim.Core.Io.InputLimits.CaptureRows);
+    }
 }

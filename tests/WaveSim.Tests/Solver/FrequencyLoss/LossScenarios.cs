@@ -1,7 +1,7 @@
 using System.Globalization;
 using WaveSim.Core.Lines;
 
-namespace WaveSim.Tests.FrequencyLoss;
+namespace WaveSim.Tests.Solver.FrequencyLoss;
 
 /// <summary>The lines the frequency-loss tests run: an FR-4 microstrip and a polyethylene coax, both matched at both ends.</summary>
 internal static class LossScenarios

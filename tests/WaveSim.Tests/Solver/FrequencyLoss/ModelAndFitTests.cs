@@ -4,7 +4,7 @@ using WaveSim.Core.Model;
 using WaveSim.Tests.Lines;
 using LossModel = WaveSim.Core.Model.FrequencyLoss;
 
-namespace WaveSim.Tests.FrequencyLoss;
+namespace WaveSim.Tests.Solver.FrequencyLoss;
 
 /// <summary>The exact loss functions against published values, and their pole-residue fit against the exact functions.</summary>
 public class ModelAndFitTests

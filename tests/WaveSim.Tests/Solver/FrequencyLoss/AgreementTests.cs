@@ -1,7 +1,7 @@
 using WaveSim.Core.FrequencyDomain;
 using WaveSim.Core.Solver;
 
-namespace WaveSim.Tests.FrequencyLoss;
+namespace WaveSim.Tests.Solver.FrequencyLoss;
 
 /// <summary>The leapfrog with frequency-dependent loss against the frequency-domain solution of the exact model.</summary>
 public class AgreementTests

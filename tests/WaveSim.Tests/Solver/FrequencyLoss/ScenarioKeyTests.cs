@@ -2,7 +2,7 @@ using System.Numerics;
 using WaveSim.Core.Model;
 using WaveSim.Core.Scenarios;
 
-namespace WaveSim.Tests.FrequencyLoss;
+namespace WaveSim.Tests.Solver.FrequencyLoss;
 
 /// <summary>The <c>loss</c> keys of a segment: what they build and how bad input is reported.</summary>
 public class ScenarioKeyTests

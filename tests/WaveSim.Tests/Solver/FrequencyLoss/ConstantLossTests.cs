@@ -1,7 +1,7 @@
 using WaveSim.Core.FrequencyDomain;
 using WaveSim.Core.Model;
 
-namespace WaveSim.Tests.FrequencyLoss;
+namespace WaveSim.Tests.Solver.FrequencyLoss;
 
 /// <summary>Segments without frequency-dependent loss keys keep constant R and G, and the grid solves them correctly: checked
 /// against an independent frequency-domain solution and against the closed form of a distortionless line.</summary>

@@ -1,7 +1,7 @@
 using MathNet.Numerics.LinearAlgebra;
 using WaveSim.Core.Lines;
 
-namespace WaveSim.Tests.FrequencyLoss;
+namespace WaveSim.Tests.Solver.FrequencyLoss;
 
 /// <summary>The non-negative least-squares solver used for the residues.</summary>
 public class NonNegativeLeastSquaresTests

@@ -3,7 +3,7 @@ using WaveSim.Core;
 using WaveSim.Core.Model;
 using WaveSim.Core.Terminations;
 
-namespace WaveSim.Tests.FrequencyLoss;
+namespace WaveSim.Tests.Solver.FrequencyLoss;
 
 /// <summary>
 /// A geometry segment with a tand carries a dielectric loss that conducts nothing at DC: the Djordjevic-Sarkar wideband model

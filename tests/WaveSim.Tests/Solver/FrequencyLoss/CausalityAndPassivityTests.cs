@@ -1,7 +1,7 @@
 using WaveSim.Core.FrequencyDomain;
 using WaveSim.Core.Model;
 
-namespace WaveSim.Tests.FrequencyLoss;
+namespace WaveSim.Tests.Solver.FrequencyLoss;
 
 /// <summary>Causality and passivity of the frequency-dependent line in both solvers.</summary>
 public class CausalityAndPassivityTests
