@@ -48,7 +48,9 @@ public static class RunCommand
             RunOutcome run;
             using (var bar = new ProgressBar(pr.InvocationConfiguration.Error, "simulating"))
                 run = Simulate.Run(s, new RunOptions { Analysis = analysis, Force = pr.GetValue(force), Plan = plan, Progress = bar }, ct);
-            var written = RunFiles.Write(run, output, files, ct);
+            RunFilesWritten written;
+            using (var bar = new ProgressBar(pr.InvocationConfiguration.Error, "frames"))
+                written = RunFiles.Write(run, output, files with { FrameProgress = nFrames > 0 ? bar : null }, ct);
             output.Commit();
             RunPrinter.Print(pr.InvocationConfiguration.Output, run, written, dir, pr.GetValue(json));
             return ExitCodes.Ok;

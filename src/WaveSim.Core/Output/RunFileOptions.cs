@@ -13,4 +13,7 @@ public sealed record RunFileOptions
 
     /// <summary>The size of each frame (the other pictures' sizes are fixed in <see cref="PictureSizes"/>).</summary>
     public PixelSize FrameSize { get; init; } = PictureSizes.Frame;
+
+    /// <summary>Told the share of the frames written so far (0 to 1); rendering many frames takes a while.</summary>
+    public IProgress<double>? FrameProgress { get; init; }
 }

@@ -47,9 +47,13 @@ public static class RunFiles
         if (outcome.FrameTimes.Count > 0)
         {
             var (lo, hi) = RunPictures.VoltageRange(r);
+            int done = 0;
             foreach (var (name, png) in FrameSequence.Render(RunPictures.Layout(r), RunPictures.Frames(r, outcome.FrameTimes), lo, hi,
                          options.FrameSize.Width, options.FrameSize.Height, ct))
+            {
                 output.Write("frames/" + name, png); // one at a time: a thousand frames are never held together
+                options.FrameProgress?.Report(++done / (double)outcome.FrameTimes.Count);
+            }
             Add("frames/");
         }
         if (outcome.FrequencyResponse is { } response)

@@ -59,4 +59,25 @@ simulation: { duration: 6 ns, resolution: 10 }
         Assert.Null(RunSummary.Json(outcome)["frequency_domain_check"]);
         Assert.Empty(outcome.FrameTimes);
     }
+
+    [Fact]
+    public void Frame_progress_counts_each_frame_and_ends_at_one()
+    {
+        // No outside source: the progress contract (share of frames written, 1 after the last).
+        var outcome = Simulate.Run(TestScenarios.Parse(Matched), new RunOptions { Analysis = new AnalysisOptions { Frames = 4 } });
+        var seen = new List<double>();
+        string dir = Path.Combine(Path.GetTempPath(), "wavesim-runfiles-" + Guid.NewGuid().ToString("N"));
+        try
+        {
+            using var output = new OutputFolder(dir);
+            RunFiles.Write(outcome, output, new RunFileOptions { FrameProgress = new Recorder(seen) });
+        }
+        finally { if (Directory.Exists(dir)) Directory.Delete(dir, recursive: true); }
+        Assert.Equal([0.25, 0.5, 0.75, 1.0], seen);
+    }
+
+    sealed class Recorder(List<double> seen) : IProgress<double>
+    {
+        public void Report(double value) => seen.Add(value);
+    }
 }
