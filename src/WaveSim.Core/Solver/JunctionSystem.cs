@@ -87,7 +87,12 @@ internal sealed class JunctionSystem
     /// <summary>Sets the parts' voltages (the Newton guess for the first step) from the junction voltages of the DC start.</summary>
     public void StartParts()
     {
-        for (int p = 0; p < _k; p++) _vPart[p] = Across(_junctionV!, _net.Nonlinear[p]) - _net.Nonlinear[p].Offset;
+        for (int p = 0; p < _k; p++)
+        {
+            var part = _net.Nonlinear[p];
+            _vPart[p] = Across(_junctionV!, part) - part.Offset;
+            _iNow[p] = part.Curve.Current(_vPart[p]);
+        }
     }
 
     /// <summary>Entries of the factors, the work of one step's solve (for the plan's estimate).</summary>
@@ -133,26 +138,24 @@ internal sealed class JunctionSystem
     }
 
     /// <summary>
-    /// The step with nonlinear parts: their start-of-step currents (half of the trapezoidal mean) are known injections; the
+    /// The step with nonlinear parts: their start-of-step currents (half of the trapezoidal mean; the last step's end currents,
+    /// or the DC start's) are known injections; the
     /// linear solve gives the part voltages without the unknown half; the k part equations find it; the response columns add it.
     /// </summary>
     void SolveParts(double[] rhs)
     {
         var parts = _net.Nonlinear;
-        for (int p = 0; p < _k; p++)
-        {
-            var part = parts[p];
-            _iNow[p] = part.Curve.Current(Across(_junctionV!, part) - part.Offset);
-            Inject(rhs, part, 0.5 * _iNow[p]);
-        }
+        for (int p = 0; p < _k; p++) Inject(rhs, parts[p], 0.5 * _iNow[p]);
         _lu.Solve(rhs, _x);
         for (int p = 0; p < _k; p++) _v0[p] = Across(_x, parts[p]) - parts[p].Offset;
         if (!_parts!.Solve(_v0, _vPart))
             throw new NumericalException($"the nonlinear parts' equations have no solution the step can find (at '{parts[0].Label}'{(_k > 1 ? $" and {_k - 1} more" : "")})");
+        var found = _parts.Currents;
         for (int q = 0; q < _k; q++)
         {
-            double iNext = parts[q].Curve.Current(_vPart[q]);
+            double iNext = found[q];
             parts[q].Average = 0.5 * (_iNow[q] + iNext);
+            _iNow[q] = iNext;
             double s = 0.5 * iNext;
             var w = _w[q];
             for (int r = 0; r < _n; r++) _x[r] += s * w[r];

@@ -21,12 +21,27 @@ internal sealed class PartEquations
     readonly double _c;
     readonly int _k;
     readonly double[] _g, _step, _trial, _jac;
+    readonly PartLaw[] _laws;
 
     public PartEquations(IReadOnlyList<NonlinearPart> parts, double[,] m, double c)
     {
         _parts = parts; _m = m; _c = c; _k = parts.Count;
         _g = new double[_k]; _step = new double[_k]; _trial = new double[_k]; _jac = new double[_k * _k];
+        // Parts the step's network does not couple (at the two ends of a line, which only the line's cells join) have M_pq = 0
+        // exactly: their equations are independent, one scalar root each.
+        _currents = new double[_k];
+        _laws = parts.Select(p => new PartLaw(p.Curve)).ToArray();
+        _uncoupled = true;
+        for (int p = 0; p < _k; p++)
+            for (int q = 0; q < _k; q++)
+                if (p != q && m[p, q] != 0) _uncoupled = false;
     }
+
+    readonly bool _uncoupled;
+    readonly double[] _currents = [];
+
+    /// <summary>The parts' currents f(v) at the solution of the last <see cref="Solve"/> (the laws' own values, before c).</summary>
+    public ReadOnlySpan<double> Currents => _currents;
 
     double F(int p, double v) => _c * _parts[p].Curve.Current(v);
 
@@ -34,19 +49,30 @@ internal sealed class PartEquations
     /// <returns>False when no solution was found to the tolerance.</returns>
     public bool Solve(ReadOnlySpan<double> v0, double[] v)
     {
-        if (_k == 1) return SolveOne(0, v0[0], _m[0, 0], v[0], out v[0]);
-        if (Newton(v0, v)) return true;
+        if (_uncoupled)
+        {
+            for (int p = 0; p < _k; p++)
+                if (!SolveOne(p, v0[p], _m[p, p], v[p], out v[p], out _currents[p])) return false;
+            return true;
+        }
+        if (Newton(v0, v)) return Done(v);
         for (int sweep = 0; sweep < 2000; sweep++)
         {
             for (int p = 0; p < _k; p++)
             {
                 double rest = v0[p];
                 for (int q = 0; q < _k; q++) if (q != p) rest += _m[p, q] * F(q, v[q]);
-                if (!SolveOne(p, rest, _m[p, p], v[p], out v[p])) return false;
+                if (!SolveOne(p, rest, _m[p, p], v[p], out v[p], out _)) return false;
             }
-            if (Residual(v0, v, _g) <= Tolerance(v)) return true;
+            if (Residual(v0, v, _g) <= Tolerance(v)) return Done(v);
         }
         return false;
+    }
+
+    bool Done(double[] v)
+    {
+        for (int p = 0; p < _k; p++) _currents[p] = _parts[p].Curve.Current(v[p]);
+        return true;
     }
 
     static double Tolerance(ReadOnlySpan<double> v)
@@ -96,19 +122,23 @@ internal sealed class PartEquations
     }
 
     /// <summary>Solves x − rest − m·c·f_p(x) = 0 for one part by safeguarded Newton on a bracket.</summary>
-    bool SolveOne(int p, double rest, double m, double guess, out double x)
+    bool SolveOne(int p, double rest, double m, double guess, out double x, out double current)
     {
-        double G(double y) => y - rest - m * F(p, y);
+        var law = _laws[p];
+        double last = 0, slope = 0;   // f and f′ at the latest point G was evaluated at: the root's current when G ends there
+        double G(double y) { last = law.Current(y, out slope); return y - rest - m * _c * last; }
+        bool Found(double y, out double at, out double i) { at = y; G(y); i = last; return true; }
         x = double.IsFinite(guess) ? guess : rest;
         double gx = G(x);
+        current = last;
         double tol = 1e-13 * Math.Max(1, Math.Abs(rest));
         if (Math.Abs(gx) <= tol) return true;
         // One Newton step first: on the law's segment holding the root it lands on the root (to rounding).
-        double d = 1 - m * _c * _parts[p].Curve.Slope(x);
+        double d = 1 - m * _c * slope;
         if (d > 0)
         {
             double y = x - gx / d, gy = G(y);
-            if (Math.Abs(gy) <= tol) { x = y; return true; }
+            if (Math.Abs(gy) <= tol) { x = y; current = last; return true; }
         }
         // A bracket: with slope ≥ 1 the root is within |g(x)| of x; wider if the law falls somewhere.
         double lo = x, glo = gx, width = Math.Max(Math.Abs(gx), 1e-12);
@@ -120,21 +150,23 @@ internal sealed class PartEquations
             width *= 2;
             if (!double.IsFinite(width)) break;
         }
-        if (Math.Sign(glo) == Math.Sign(ghi)) return false;
+        if (Math.Sign(glo) == Math.Sign(ghi)) { current = double.NaN; return false; }
         if (glo > 0) { (lo, hi) = (hi, lo); } // keep g(lo) < 0 < g(hi), lo and hi in either order
         x = 0.5 * (lo + hi);
         for (int it = 0; it < 200; it++)
         {
             double g = G(x);
-            if (Math.Abs(g) <= tol) return true;
+            if (Math.Abs(g) <= tol) { current = last; return true; }
             if (g < 0) lo = x; else hi = x;
-            double slope = 1 - m * _c * _parts[p].Curve.Slope(x);
-            double next = slope != 0 ? x - g / slope : double.NaN;
+            double dg = 1 - m * _c * slope;
+            double next = dg != 0 ? x - g / dg : double.NaN;
             if (!(next > Math.Min(lo, hi) && next < Math.Max(lo, hi))) next = 0.5 * (lo + hi);
-            if (Math.Abs(hi - lo) <= 1e-15 * Math.Max(1, Math.Abs(x))) { x = next; return true; }
+            if (Math.Abs(hi - lo) <= 1e-15 * Math.Max(1, Math.Abs(x))) return Found(next, out x, out current);
             x = next;
         }
-        return Math.Abs(G(x)) <= 1e-9 * Math.Max(1, Math.Abs(rest));
+        bool ok = Math.Abs(G(x)) <= 1e-9 * Math.Max(1, Math.Abs(rest));
+        current = last;
+        return ok;
     }
 }
 
