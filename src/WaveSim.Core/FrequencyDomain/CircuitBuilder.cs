@@ -26,6 +26,8 @@ internal sealed class CircuitBuilder
 
     public static Circuit Build(Scenario scenario, IReadOnlyList<ProbeSpec> probes)
     {
+        if (HasIvPart(scenario.Line, scenario.Load))
+            throw new InputException("the frequency-domain solve needs a linear network, and this one has I-V table ('iv') parts: leave the check out for it");
         var b = new CircuitBuilder();
         foreach (var p in probes.Where(p => p.Anchor == ProbeAnchor.Distance))
         {
@@ -42,6 +44,15 @@ internal sealed class CircuitBuilder
             Probes = taps, LoadJunction = b._ends[""], LoadCurrents = b._loads[""],
         };
     }
+
+    static bool HasIvPart(IReadOnlyList<LineElement> line, LoadSpec load) =>
+        load.Iv is not null || line.Any(e => e switch
+        {
+            Shunt sh => sh.Parts.Iv is not null,
+            Model.Series se => se.Parts.Iv is not null,
+            Branch br => HasIvPart(br.Line, br.Load),
+            _ => false,
+        });
 
     void BuildLine(IReadOnlyList<LineElement> line, LoadSpec load, int start, string path, CurrentRef[] up)
     {

@@ -1,4 +1,5 @@
 using System.Collections.Immutable;
+using WaveSim.Core.Buffers;
 
 namespace WaveSim.Core.Model;
 
@@ -50,9 +51,16 @@ public sealed record Segment(double Length, double R, double L, double G, double
 /// <param name="C">Capacitance, F.</param>
 public sealed record LumpedParts(double? R = null, double? L = null, double? C = null)
 {
+    /// <summary>
+    /// A nonlinear part instead of R, L and C: a piecewise-linear current-voltage law (the voltage across it is the node's
+    /// minus ground for a shunt, minus the far side for a series part); null for none. The loader gives it alone.
+    /// </summary>
+    public IvCurve? Iv { get; init; }
+
     /// <summary>A short text such as "R 22 Ω + C 1 nF".</summary>
     public string Describe() => string.Join(" + ", new[]
     {
+        Iv is { } iv ? $"I-V table ({iv.Voltages.Count} points)" : null,
         R is { } r ? "R " + Units.Quantity.Format(r, "Ω") : null,
         L is { } l ? "L " + Units.Quantity.Format(l, "H") : null,
         C is { } c ? "C " + Units.Quantity.Format(c, "F") : null,

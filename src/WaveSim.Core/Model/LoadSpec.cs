@@ -1,3 +1,5 @@
+using WaveSim.Core.Buffers;
+
 namespace WaveSim.Core.Model;
 
 /// <summary>A far-end termination: parallel parts, any combination; none is an open end.</summary>
@@ -10,6 +12,12 @@ namespace WaveSim.Core.Model;
 public sealed record LoadSpec(double? R = null, double To = 0, double? C = null, double? L = null, bool Short = false,
     ReceiverThresholds? Receiver = null)
 {
+    /// <summary>
+    /// A nonlinear part in parallel with the others: a piecewise-linear current-voltage law, the voltage across it being the
+    /// node's minus <see cref="To"/>; null for none.
+    /// </summary>
+    public IvCurve? Iv { get; init; }
+
     /// <summary>An open end.</summary>
     public static readonly LoadSpec Open = new();
 
@@ -21,6 +29,7 @@ public sealed record LoadSpec(double? R = null, double To = 0, double? C = null,
         if (R is { } r) parts.Add("R " + Units.Quantity.Format(r, "Ω") + (To != 0 ? " to " + Units.Quantity.Format(To, "V") : ""));
         if (C is { } c) parts.Add("C " + Units.Quantity.Format(c, "F"));
         if (L is { } l) parts.Add("L " + Units.Quantity.Format(l, "H"));
+        if (Iv is { } iv) parts.Add($"I-V table ({iv.Voltages.Count} points)" + (To != 0 && R is null ? " to " + Units.Quantity.Format(To, "V") : ""));
         return parts.Count == 0 ? "open" : string.Join(" ∥ ", parts);
     }
 }

@@ -20,11 +20,11 @@ public static class ScenarioLoader
     /// <summary>The keys accepted under <c>segment</c>.</summary>
     public static readonly string[] SegmentKeys = ["length", "z0", "delay", "velocity", "eps_eff", "r", "l", "g", "c", "geometry", "loss", "mode"];
     /// <summary>The keys accepted under <c>shunt</c> and <c>series</c>.</summary>
-    public static readonly string[] LumpedKeys = ["r", "l", "c"];
+    public static readonly string[] LumpedKeys = ["r", "l", "c", "iv"];
     /// <summary>The keys accepted under <c>branch</c>.</summary>
     public static readonly string[] BranchKeys = ["name", "line", "load"];
     /// <summary>The keys accepted under <c>load</c>.</summary>
-    public static readonly string[] LoadKeys = ["r", "to", "c", "l", "receiver"];
+    public static readonly string[] LoadKeys = ["r", "to", "c", "l", "iv", "receiver"];
     /// <summary>The keys accepted under <c>load.receiver</c>.</summary>
     public static readonly string[] ReceiverKeys = ["vih", "vil"];
     /// <summary>The keys accepted in each probe.</summary>
@@ -300,9 +300,15 @@ public static class ScenarioLoader
 
     static LumpedParts ReadParts(YamlMap m)
     {
+        if (IvTable.Read(m) is { } iv)
+        {
+            if (m.Has("r") || m.Has("l") || m.Has("c"))
+                throw m.Error(m.Node("iv")!, m.Join("iv"), "an I-V table is a part of its own here: give it alone, without r, l or c (put those in an item of their own)");
+            return new LumpedParts { Iv = iv };
+        }
         var parts = new LumpedParts(m.NonNegative("r"), m.Positive("l"), m.Positive("c"));
         if (parts.R is null && parts.L is null && parts.C is null)
-            throw m.Error("give at least one of r, l, c");
+            throw m.Error("give at least one of r, l, c (or an I-V table, iv)");
         return parts;
     }
 
@@ -325,13 +331,14 @@ public static class ScenarioLoader
             {
                 "open" or "" or null => LoadSpec.Open,
                 "short" => new LoadSpec(Short: true),
-                _ => throw parent.Error(node, parent.Join(key), $"'{s.Value}' is not a load; expected 'open', 'short' or a mapping of r, to, c, l, receiver"),
+                _ => throw parent.Error(node, parent.Join(key), $"'{s.Value}' is not a load; expected 'open', 'short' or a mapping of r, to, c, l, iv, receiver"),
             };
         }
         var m = parent.Map(key, LoadKeys)!;
         double? r = m.NonNegative("r");
         double to = m.Quantity("to") ?? 0;
-        if (m.Has("to") && r is null) throw m.Error(m.Node("to")!, m.Join("to"), "'to' is the voltage the load resistor returns to: give 'r' too");
+        var iv = IvTable.Read(m);
+        if (m.Has("to") && r is null && iv is null) throw m.Error(m.Node("to")!, m.Join("to"), "'to' is the voltage the load resistor (or I-V table) returns to: give 'r' or 'iv' too");
         ReceiverThresholds? rx = null;
         if (m.Map("receiver", ReceiverKeys) is { } rm)
         {
@@ -340,7 +347,7 @@ public static class ScenarioLoader
             if (ScenarioRules.ThresholdOrder(vih, vil) is { } order) throw rm.Error(rm.Node("vil")!, rm.Join("vil"), order);
             rx = new ReceiverThresholds(vih, vil);
         }
-        return new LoadSpec(r, to, m.Positive("c"), m.Positive("l"), false, rx);
+        return new LoadSpec(r, to, m.Positive("c"), m.Positive("l"), false, rx) { Iv = iv };
     }
 
     static SimulationSpec ReadSimulation(YamlMap top)

@@ -17,6 +17,12 @@ internal sealed class JunctionSystem
     readonly int _nj, _n;
     readonly double[] _rhs, _x, _keep, _zeq;
     readonly SparseLu<double> _lu;
+    // The nonlinear parts (none in a linear network): each part's response column w_q = A⁻¹·e_q, the k × k matrix M of part
+    // voltages per unit part current, and the parts' voltages and start-of-step currents.
+    readonly int _k;
+    readonly double[][] _w = [];
+    readonly PartEquations? _parts;
+    readonly double[] _v0 = [], _vPart = [], _iNow = [];
 
     public JunctionSystem(Network net, double dt)
     {
@@ -48,6 +54,45 @@ internal sealed class JunctionSystem
         _lu = lu;
         _rhs = new double[_n];
         _x = new double[_n];
+        _k = net.Nonlinear.Count;
+        if (_k > 0)
+        {
+            // The linear network seen from the parts, once per run: k solves with a unit current through each part.
+            _w = new double[_k][];
+            var m = new double[_k, _k];
+            for (int q = 0; q < _k; q++)
+            {
+                Array.Clear(_rhs);
+                Inject(_rhs, net.Nonlinear[q], 1);
+                _w[q] = new double[_n];
+                _lu.Solve(_rhs, _w[q]);
+                for (int p = 0; p < _k; p++) m[p, q] = Across(_w[q], net.Nonlinear[p]);
+            }
+            // The step carries the trapezoidal mean of the part's current: ½ of it is the unknown end-of-step current.
+            _parts = new PartEquations(net.Nonlinear, m, 0.5);
+            _v0 = new double[_k]; _vPart = new double[_k]; _iNow = new double[_k];
+        }
+    }
+
+    /// <summary>Adds a current <paramref name="i"/> through part <paramref name="p"/> (out of its A node, into its B node) to a right-hand side.</summary>
+    static void Inject(double[] rhs, NonlinearPart p, double i)
+    {
+        if (p.A >= 0) rhs[p.A] -= i;
+        if (p.B >= 0) rhs[p.B] += i;
+    }
+
+    /// <summary>The voltage across part <paramref name="p"/> in the junction voltages <paramref name="x"/> (without its offset).</summary>
+    static double Across(double[] x, NonlinearPart p) => (p.A >= 0 ? x[p.A] : 0) - (p.B >= 0 ? x[p.B] : 0);
+
+    /// <summary>Sets the parts' voltages (the Newton guess for the first step) from the junction voltages of the DC start.</summary>
+    public void StartParts()
+    {
+        for (int p = 0; p < _k; p++)
+        {
+            var part = _net.Nonlinear[p];
+            _vPart[p] = Across(_junctionV!, part) - part.Offset;
+            _iNow[p] = part.Curve.Current(_vPart[p]);
+        }
     }
 
     /// <summary>Entries of the factors, the work of one step's solve (for the plan's estimate).</summary>
@@ -80,7 +125,8 @@ internal sealed class JunctionSystem
             if (br.B < 0) r += br.FixedB;
             rhs[_nj + b] = r;
         }
-        _lu.Solve(rhs, _x);
+        if (_k > 0) SolveParts(rhs);
+        else _lu.Solve(rhs, _x);
         for (int b = 0; b < net.Branches.Count; b++)
         {
             var br = net.Branches[b];
@@ -88,6 +134,31 @@ internal sealed class JunctionSystem
             br.Average = avg;
             br.Current = 2 * avg - br.Current;
             if (br.C is { } c) br.CapVoltage += _dt * avg / c;
+        }
+    }
+
+    /// <summary>
+    /// The step with nonlinear parts: their start-of-step currents (half of the trapezoidal mean; the last step's end currents,
+    /// or the DC start's) are known injections; the
+    /// linear solve gives the part voltages without the unknown half; the k part equations find it; the response columns add it.
+    /// </summary>
+    void SolveParts(double[] rhs)
+    {
+        var parts = _net.Nonlinear;
+        for (int p = 0; p < _k; p++) Inject(rhs, parts[p], 0.5 * _iNow[p]);
+        _lu.Solve(rhs, _x);
+        for (int p = 0; p < _k; p++) _v0[p] = Across(_x, parts[p]) - parts[p].Offset;
+        if (!_parts!.Solve(_v0, _vPart))
+            throw new NumericalException($"the nonlinear parts' equations have no solution the step can find (at '{parts[0].Label}'{(_k > 1 ? $" and {_k - 1} more" : "")})");
+        var found = _parts.Currents;
+        for (int q = 0; q < _k; q++)
+        {
+            double iNext = found[q];
+            parts[q].Average = 0.5 * (_iNow[q] + iNext);
+            _iNow[q] = iNext;
+            double s = 0.5 * iNext;
+            var w = _w[q];
+            for (int r = 0; r < _n; r++) _x[r] += s * w[r];
         }
     }
 

@@ -31,6 +31,7 @@ internal sealed class LeapfrogSolver
         _dispersive = _net.Segments.Select(s => s.Dispersion is null ? null : new DispersiveKernel(s, plan.Dt)).ToArray();
         _junctions = new JunctionSystem(_net, plan.Dt);
         _junctions.Bind(_jv);
+        _junctions.StartParts();
     }
 
     public SimulationResult Run(SimulationOptions options, CancellationToken ct)

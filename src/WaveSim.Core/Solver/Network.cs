@@ -56,14 +56,35 @@ internal sealed class LumpedBranch
     public double Current, CapVoltage, Average;
 }
 
+/// <summary>
+/// A nonlinear part from node A to node B (−1 = ground): a piecewise-linear law I(V) with V = V_A − V_B − Offset and I the
+/// current from A through the part into B. It holds no state of its own; each step it is solved with the junctions.
+/// </summary>
+internal sealed class NonlinearPart
+{
+    public required BranchRole Role { get; init; }
+    public required string Label { get; init; }
+    public required int A { get; init; }
+    public required int B { get; init; }
+    public required Buffers.IvCurve Curve { get; init; }
+    /// <summary>The fixed voltage subtracted from V_A − V_B (a load's <c>to</c>), V.</summary>
+    public double Offset;
+    /// <summary>The step-average current (the trapezoidal mean of the step's two ends), A, for probes.</summary>
+    public double Average;
+}
+
 /// <summary>A node of the grid as seen by a probe: which voltage to read and which currents to average.</summary>
 internal readonly record struct NodeRef(int Segment, int Index, int Junction)
 {
     public static NodeRef OnJunction(int j) => new(-1, -1, j);
 }
 
-/// <summary>An edge current: a segment's half-cell or a lumped branch.</summary>
-internal readonly record struct EdgeRef(int Segment, int Index, int Branch);
+/// <summary>An edge current: a segment's half-cell, a lumped branch, or (Branch ≤ −2) nonlinear part −2 − Branch.</summary>
+internal readonly record struct EdgeRef(int Segment, int Index, int Branch)
+{
+    /// <summary>The current of nonlinear part <paramref name="p"/>.</summary>
+    public static EdgeRef OnPart(int p) => new(-1, -1, -2 - p);
+}
 
 /// <summary>The whole discretised network: junctions, segments, lumped branches, and where every line's nodes lie.</summary>
 internal sealed class Network
@@ -71,6 +92,8 @@ internal sealed class Network
     public List<Junction> Junctions { get; } = [];
     public List<GridSegment> Segments { get; } = [];
     public List<LumpedBranch> Branches { get; } = [];
+    /// <summary>The nonlinear parts (I-V tables); empty for a linear network, which then runs exactly as without them.</summary>
+    public List<NonlinearPart> Nonlinear { get; } = [];
     /// <summary>For each line path ("" for the main line, "stub", "stub/sub"), its nodes in order with position and edges.</summary>
     public Dictionary<string, LineNodes> Lines { get; } = [];
     public int SourceBranch { get; set; }
@@ -83,5 +106,7 @@ internal sealed class LineNodes
     public int StartJunction;
     public int EndJunction;
     public List<int> LoadBranches { get; } = [];
+    /// <summary>The load's nonlinear parts (indices into <see cref="Network.Nonlinear"/>).</summary>
+    public List<int> LoadParts { get; } = [];
     public double Length;
 }

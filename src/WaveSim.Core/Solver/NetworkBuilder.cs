@@ -82,15 +82,20 @@ internal static class NetworkBuilder
                     pos += s.Length;
                     break;
                 }
+                case Shunt { Parts.Iv: { } iv }:
+                    AddPart(net, BranchRole.Shunt, at + " shunt I-V", node, -1, iv, 0);
+                    break;
                 case Shunt sh:
                     AddLumped(net, BranchRole.Shunt, at + " shunt", node, -1, sh.Parts);
                     break;
                 case Model.Series se:
                 {
                     int next = AddJunction(net, at + " after series", pos);
-                    int b = AddLumped(net, BranchRole.Series, at + " series", node, next, se.Parts);
-                    nodes.Nodes.Add((pos, NodeRef.OnJunction(node), pendingUp.ToArray(), [new EdgeRef(-1, -1, b)]));
-                    pendingUp = [new EdgeRef(-1, -1, b)];
+                    var edge = se.Parts.Iv is { } iv
+                        ? EdgeRef.OnPart(AddPart(net, BranchRole.Series, at + " series I-V", node, next, iv, 0))
+                        : new EdgeRef(-1, -1, AddLumped(net, BranchRole.Series, at + " series", node, next, se.Parts));
+                    nodes.Nodes.Add((pos, NodeRef.OnJunction(node), pendingUp.ToArray(), [edge]));
+                    pendingUp = [edge];
                     node = next;
                     break;
                 }
@@ -105,12 +110,18 @@ internal static class NetworkBuilder
         nodes.EndJunction = node;
         nodes.Length = pos;
         AddLoad(net, nodes, load, node, prefix);
-        var loadEdges = nodes.LoadBranches.Select(b => new EdgeRef(-1, -1, b)).ToArray();
+        var loadEdges = nodes.LoadBranches.Select(b => new EdgeRef(-1, -1, b)).Concat(nodes.LoadParts.Select(EdgeRef.OnPart)).ToArray();
         nodes.Nodes.Add((pos, NodeRef.OnJunction(node), pendingUp.ToArray(), loadEdges));
     }
 
     static int AddLumped(Network net, BranchRole role, string label, int a, int b, LumpedParts p) =>
         AddBranch(net, new LumpedBranch { Role = role, Label = label, A = a, B = b, R = p.R ?? 0, L = p.L ?? 0, C = p.C });
+
+    static int AddPart(Network net, BranchRole role, string label, int a, int b, Buffers.IvCurve curve, double offset)
+    {
+        net.Nonlinear.Add(new NonlinearPart { Role = role, Label = label, A = a, B = b, Curve = curve, Offset = offset });
+        return net.Nonlinear.Count - 1;
+    }
 
     static void AddLoad(Network net, LineNodes nodes, LoadSpec load, int node, string prefix)
     {
@@ -120,5 +131,6 @@ internal static class NetworkBuilder
         if (load.R is { } r) Add(new LumpedBranch { Role = BranchRole.Load, Label = label + " R", A = node, B = -1, R = r, FixedB = load.To });
         if (load.C is { } c) Add(new LumpedBranch { Role = BranchRole.Load, Label = label + " C", A = node, B = -1, C = c });
         if (load.L is { } l) Add(new LumpedBranch { Role = BranchRole.Load, Label = label + " L", A = node, B = -1, L = l });
+        if (load.Iv is { } iv) nodes.LoadParts.Add(AddPart(net, BranchRole.Load, label + " I-V", node, -1, iv, load.To));
     }
 }

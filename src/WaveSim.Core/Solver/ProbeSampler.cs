@@ -118,7 +118,9 @@ internal sealed class ProbeSampler
         var (_, edges, w) = _refs[p];
         double sum = 0;
         foreach (var e in edges)
-            sum += e.Branch >= 0 ? _net.Branches[e.Branch].Average : _net.Segments[e.Segment].I[e.Index];
+            sum += e.Branch >= 0 ? _net.Branches[e.Branch].Average
+                : e.Branch <= -2 ? _net.Nonlinear[-2 - e.Branch].Average
+                : _net.Segments[e.Segment].I[e.Index];
         return sum * w;
     }
 
