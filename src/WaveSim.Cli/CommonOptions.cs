@@ -19,15 +19,14 @@ public static class CommonOptions
     /// <summary>--json: print the summary as one JSON object instead of text.</summary>
     public static Option<bool> Json() => new("--json") { Description = "Print the summary as JSON on stdout" };
 
-    /// <summary>--force: run beyond the memory and cell-update limits.</summary>
-    public static Option<bool> Force() => new("--force") { Description = "Run even when the plan exceeds 2 GB or 1e11 cell updates" };
+    /// <summary>--force: run beyond the memory, cell-update and run-time limits.</summary>
+    public static Option<bool> Force() => new("--force") { Description = "Run even when the plan exceeds 2 GB, 1e11 cell updates or an estimated 10 minutes" };
 
     /// <summary>Loads a scenario, turning a missing file into a one-line error.</summary>
-    public static Scenario Load(string path)
-    {
-        if (!File.Exists(path)) throw new InputException($"{path}: no such scenario file");
-        return ScenarioLoader.Load(path);
-    }
+    public static Scenario Load(string path) => Read(path).Scenario;
+
+    static ScenarioDocument Read(string path) =>
+        File.Exists(path) ? ScenarioLoader.Read(path) : throw new InputException($"{path}: no such scenario file");
 
     /// <summary>Loads a scenario and prints its warnings (<see cref="ScenarioWarnings"/>, for its grid plan) on <paramref name="warnings"/>.</summary>
     public static Scenario Load(string path, TextWriter warnings) => LoadPlanned(path, warnings).Scenario;
@@ -45,8 +44,7 @@ public static class CommonOptions
     /// <summary>Loads a scenario with its text, plans its grid once and prints its warnings for that plan.</summary>
     public static (ScenarioDocument Document, Core.Solver.GridPlan Plan) LoadDocumentPlanned(string path, TextWriter warnings)
     {
-        if (!File.Exists(path)) throw new InputException($"{path}: no such scenario file");
-        var document = ScenarioLoader.Read(path);
+        var document = Read(path);
         var plan = Simulate.Plan(document.Scenario);
         WarningOutput.Write(warnings, ScenarioWarnings.For(document.Scenario, plan));
         return (document, plan);

@@ -22,9 +22,10 @@ public static class Simulate
     public static RunOutcome Run(Scenario scenario, RunOptions? options = null, CancellationToken ct = default)
     {
         options ??= new RunOptions();
+        GridPlan? plan = options.Plan;
         // The frequency-domain check can cost more than the run; it is refused before the run starts, not after.
         if (options.Analysis.FrequencyCheck && !options.Force)
-            FrequencyDomain.FrequencyDomainCheck.CheckLimits(scenario, options.Plan ?? Plan(scenario));
+            FrequencyDomain.FrequencyDomainCheck.CheckLimits(scenario, plan ??= Plan(scenario));
         var sim = new SimulationOptions
         {
             Force = options.Force,
@@ -32,7 +33,7 @@ public static class Simulate
             SnapshotTimes = RunAnalysis.SnapshotTimes(scenario, options.Analysis),
             TrackBranchAverages = options.TrackBranchAverages,
         };
-        var result = Solve(scenario, sim, ct, options.Plan);
+        var result = Solve(scenario, sim, ct, plan);
         return RunAnalysis.Analyse(result, options.Analysis);
     }
 
