@@ -24,7 +24,9 @@ public static class ScenarioLoader
     /// <summary>The keys accepted under <c>branch</c>.</summary>
     public static readonly string[] BranchKeys = ["name", "line", "load"];
     /// <summary>The keys accepted under <c>load</c>.</summary>
-    public static readonly string[] LoadKeys = ["r", "to", "c", "l", "iv", "receiver"];
+    public static readonly string[] LoadKeys = ["r", "to", "c", "l", "iv", "receiver", "buffer"];
+    /// <summary>The keys accepted under <c>load.buffer</c> (and <c>source.buffer</c>).</summary>
+    public static readonly string[] BufferKeys = BufferReference.Keys;
     /// <summary>The keys accepted under <c>load.receiver</c>.</summary>
     public static readonly string[] ReceiverKeys = ["vih", "vil"];
     /// <summary>The keys accepted in each probe.</summary>
@@ -331,7 +333,7 @@ public static class ScenarioLoader
             {
                 "open" or "" or null => LoadSpec.Open,
                 "short" => new LoadSpec(Short: true),
-                _ => throw parent.Error(node, parent.Join(key), $"'{s.Value}' is not a load; expected 'open', 'short' or a mapping of r, to, c, l, iv, receiver"),
+                _ => throw parent.Error(node, parent.Join(key), $"'{s.Value}' is not a load; expected 'open', 'short' or a mapping of r, to, c, l, iv, receiver, buffer"),
             };
         }
         var m = parent.Map(key, LoadKeys)!;
@@ -347,7 +349,11 @@ public static class ScenarioLoader
             if (ScenarioRules.ThresholdOrder(vih, vil) is { } order) throw rm.Error(rm.Node("vil")!, rm.Join("vil"), order);
             rx = new ReceiverThresholds(vih, vil);
         }
-        return new LoadSpec(r, to, m.Positive("c"), m.Positive("l"), false, rx) { Iv = iv };
+        var buffer = BufferReference.Read(m, "buffer", receiving: true);
+        if (buffer is not null && rx is not null)
+            throw m.Error(m.Node("receiver")!, m.Join("receiver"), "a buffer receiver takes its thresholds from the model's Vinh and Vinl: give 'buffer' or 'receiver', not both");
+        if (buffer is { Model: { Vinh: { } vinh, Vinl: { } vinl } }) rx = new ReceiverThresholds(vinh, vinl);
+        return new LoadSpec(r, to, m.Positive("c"), m.Positive("l"), false, rx) { Iv = iv, Buffer = buffer };
     }
 
     static SimulationSpec ReadSimulation(YamlMap top)

@@ -144,6 +144,12 @@ internal sealed class LeapfrogSolver
     {
         double e = 0;
         for (int j = 0; j < _jv.Length; j++) e += 0.5 * _net.Junctions[j].C * _jv[j] * _jv[j];
+        // The lumped parts' stored energy too (a receiver's C_comp and package), so the balance covers the whole net.
+        foreach (var br in _net.Branches)
+        {
+            e += 0.5 * br.L * br.Current * br.Current;
+            if (br.C is { } c) e += 0.5 * c * br.CapVoltage * br.CapVoltage;
+        }
         foreach (var seg in _net.Segments)
         {
             double cdz = seg.Plan.Segment.C * seg.Dz;

@@ -132,5 +132,38 @@ internal static class NetworkBuilder
         if (load.C is { } c) Add(new LumpedBranch { Role = BranchRole.Load, Label = label + " C", A = node, B = -1, C = c });
         if (load.L is { } l) Add(new LumpedBranch { Role = BranchRole.Load, Label = label + " L", A = node, B = -1, L = l });
         if (load.Iv is { } iv) nodes.LoadParts.Add(AddPart(net, BranchRole.Load, label + " I-V", node, -1, iv, load.To));
+        if (load.Buffer is { } buffer) AddReceiver(net, nodes, buffer, node, label + " buffer");
+    }
+
+    /// <summary>
+    /// A buffer receiver at the line's end (the pin): C_pkg from the pin to ground and R_pkg + L_pkg in series from the pin to
+    /// the die pad, where C_comp goes to ground and the clamps' summed law conducts. The load probe reads the pin's current:
+    /// the package's branches, or, without a package, the pad's own parts.
+    /// </summary>
+    static void AddReceiver(Network net, LineNodes nodes, Model.BufferSpec buffer, int pin, string label)
+    {
+        int pad = pin;
+        if (buffer.PackageC > 0)
+            nodes.LoadBranches.Add(AddBranch(net, new LumpedBranch { Role = BranchRole.Load, Label = label + " C_pkg", A = pin, B = -1, C = buffer.PackageC }));
+        bool series = buffer.PackageR > 0 || buffer.PackageL > 0;
+        if (series)
+        {
+            pad = AddJunction(net, label + " pad", nodes.Length);
+            nodes.LoadBranches.Add(AddBranch(net, new LumpedBranch
+            {
+                Role = BranchRole.Load, Label = label + " package", A = pin, B = pad, R = buffer.PackageR, L = buffer.PackageL,
+            }));
+        }
+        double ccomp = buffer.Curves.CComp;
+        if (ccomp > 0)
+        {
+            int b = AddBranch(net, new LumpedBranch { Role = BranchRole.Load, Label = label + " C_comp", A = pad, B = -1, C = ccomp });
+            if (!series) nodes.LoadBranches.Add(b);
+        }
+        if (buffer.ClampLaw() is { } clamps)
+        {
+            int p = AddPart(net, BranchRole.Load, label + " clamps", pad, -1, clamps, 0);
+            if (!series) nodes.LoadParts.Add(p);
+        }
     }
 }
