@@ -26,7 +26,7 @@ internal sealed class CircuitBuilder
 
     public static Circuit Build(Scenario scenario, IReadOnlyList<ProbeSpec> probes)
     {
-        if (HasIvPart(scenario.Line, scenario.Load))
+        if (HasIvPart(scenario.Line, scenario.Load) || scenario.Source.Buffer is not null)
             throw new InputException("the frequency-domain solve needs a linear network, and this one has I-V table ('iv') or buffer model parts: leave the check out for it");
         var b = new CircuitBuilder();
         foreach (var p in probes.Where(p => p.Anchor == ProbeAnchor.Distance))

@@ -16,7 +16,7 @@ public static class ScenarioLoader
     /// <summary>The top-level keys accepted.</summary>
     public static readonly string[] TopKeys = ["title", "source", "line", "load", "probes", "simulation"];
     /// <summary>The keys accepted under <c>source</c>.</summary>
-    public static readonly string[] SourceKeys = ["waveform", "low", "high", "rise", "fall", "delay", "width", "period", "frequency", "bit_time", "pattern", "prbs", "file", "resistance"];
+    public static readonly string[] SourceKeys = ["waveform", "low", "high", "rise", "fall", "delay", "width", "period", "frequency", "bit_time", "pattern", "prbs", "file", "resistance", "buffer"];
     /// <summary>The keys accepted under <c>segment</c>.</summary>
     public static readonly string[] SegmentKeys = ["length", "z0", "delay", "velocity", "eps_eff", "r", "l", "g", "c", "geometry", "loss", "mode"];
     /// <summary>The keys accepted under <c>shunt</c> and <c>series</c>.</summary>
@@ -125,9 +125,11 @@ public static class ScenarioLoader
         string wf = s.Text("waveform") ?? throw s.Error("missing required key 'source.waveform'");
         if (!Enum.TryParse<WaveformKind>(wf, ignoreCase: true, out var kind) || int.TryParse(wf, out _))
             throw s.Error(s.Node("waveform")!, "source.waveform", $"'{wf}' is not a waveform; expected one of: step, pulse, trapezoid, gaussian, sine, bits, table");
-        double high = s.Quantity("high") ?? throw s.Error("missing required key 'source.high'");
-        double low = s.Quantity("low") ?? 0;
-        double rise = s.NonNegative("rise") ?? 0;
+        var buffer = BufferReference.Read(s, "buffer", receiving: false);
+        if (buffer is not null && BufferDriver.Conflict(s) is { } conflict) throw conflict;
+        double high = buffer is not null ? BufferDriver.High(buffer) : s.Quantity("high") ?? throw s.Error("missing required key 'source.high'");
+        double low = buffer is not null ? BufferDriver.Low(buffer) : s.Quantity("low") ?? 0;
+        double rise = buffer is not null ? BufferDriver.EdgeTime(buffer) : s.NonNegative("rise") ?? 0;
         double? fallGiven = s.NonNegative("fall");
         double fall = fallGiven ?? rise;
         double delay = s.NonNegative("delay") ?? 0;
@@ -168,6 +170,7 @@ public static class ScenarioLoader
             Waveform = kind, Low = low, High = high, Rise = rise, Delay = delay, Width = width,
             Period = period, BitTime = bitTime, Bits = bits, TableTime = [.. tt], TableVolts = [.. tv], Resistance = resistance,
         };
+        if (buffer is not null) return BufferDriver.Check(s, spec with { Buffer = buffer });
         return fallGiven is { } f ? spec with { Fall = f } : spec;   // a fall never written follows the rise, in variants too
     }
 

@@ -133,7 +133,7 @@ internal static class DcOperatingPoint
             throw new NumericalException($"the DC operating point with the I-V parts was not found (Newton's method and source stepping both failed at '{parts[0].Label}')");
         for (int q = 0; q < k; q++)
         {
-            double i = parts[q].Curve.Current(v[q]);
+            double i = parts[q].Law.Current(v[q], out _);
             parts[q].Average = i;
             for (int r = 0; r < n; r++) x[r] += i * w[q][r];
         }

@@ -10,12 +10,41 @@ internal static class NetworkBuilder
         var net = new Network();
         int planIndex = 0;
         int source = AddJunction(net, "source", 0);
-        net.SourceBranch = AddBranch(net, new LumpedBranch
-        {
-            Role = BranchRole.Source, Label = "driver", A = -1, B = source, R = scenario.Source.Resistance, DrivenA = true,
-        });
+        if (scenario.Source.Buffer is { } buffer) AddDriver(net, scenario, buffer, source);
+        else
+            net.SourceBranch = AddBranch(net, new LumpedBranch
+            {
+                Role = BranchRole.Source, Label = "driver", A = -1, B = source, R = scenario.Source.Resistance, DrivenA = true,
+            });
         BuildLine(net, scenario, plan, ref planIndex, scenario.Line, scenario.Load, source, "", "");
         return net;
+    }
+
+    /// <summary>
+    /// A buffer driver at the line's start (the pin): at the die pad its switching law (<see cref="DriverLaw"/>) and C_comp to
+    /// ground; R_pkg + L_pkg from the pad to the pin (the source branch, whose current the source probe reads) and C_pkg from
+    /// the pin to ground, written as a branch from ground into the pin so the probe subtracts it: the pin's current into the line.
+    /// </summary>
+    static void AddDriver(Network net, Scenario scenario, Model.BufferSpec buffer, int pin)
+    {
+        int pad = AddJunction(net, "driver pad", 0);
+        net.SourceBranch = AddBranch(net, new LumpedBranch
+        {
+            Role = BranchRole.Source, Label = "driver package", A = pad, B = pin, R = buffer.PackageR, L = buffer.PackageL,
+        });
+        if (buffer.PackageC > 0)
+            net.SourceShunt = AddBranch(net, new LumpedBranch { Role = BranchRole.Source, Label = "driver C_pkg", A = -1, B = pin, C = buffer.PackageC });
+        var curves = buffer.Curves;
+        if (curves.CComp > 0)
+            AddBranch(net, new LumpedBranch { Role = BranchRole.Source, Label = "driver C_comp", A = pad, B = -1, C = curves.CComp });
+        var law = new DriverLaw(curves);
+        net.Junctions[pad].G += law.Shunt;
+        net.Nonlinear.Add(new NonlinearPart
+        {
+            Role = BranchRole.Source, Label = "driver", A = pad, B = -1, Driver = law,
+            Curve = Buffers.IvCurve.Create([(-1, 0), (1, 0)], "driver"),   // unused: the driver's law stands in its place
+        });
+        net.Driver = new DriverSchedule(scenario.Source, buffer, scenario.Simulation.Duration, law);
     }
 
     static int AddJunction(Network net, string label, double position)
