@@ -44,6 +44,46 @@ public sealed record BufferSpec(string File, BufferModel Model, Corner Corner, P
         return IvCurve.Create(v.Select(x => (x, c.ClampCurrent(x))).ToArray(), $"{Model.Source}: [Model] {Model.Name}: clamps");
     }
 
+    /// <summary>
+    /// The driver's effective output resistance (Ω) for termination design: the mean of its small-signal resistances near the
+    /// high and the low level (1/slope of the I-V curves there, <see cref="BufferCurves.OutputResistanceHigh"/> and
+    /// <see cref="BufferCurves.OutputResistanceLow"/>), the one it has where only one is defined; null when neither is.
+    /// </summary>
+    public double? OutputResistance
+    {
+        get
+        {
+            var c = Curves;
+            double?[] r = [c.OutputResistanceHigh, c.OutputResistanceLow];
+            var known = r.OfType<double>().ToArray();
+            return known.Length == 0 ? null : known.Average();
+        }
+    }
+
+    /// <summary>What a plan listing shows of the buffer: model, type and corner, then its levels and edges (a driver) or its
+    /// thresholds (a receiver), C_comp and the package.</summary>
+    public IReadOnlyList<string> Summary(bool driver)
+    {
+        static string V(double v) => Units.Quantity.Format(v, "V", 3);
+        var c = Curves;
+        var lines = new List<string> { $"{Describe()}: Model_type {Model.TypeName}, corner {CornerName}" };
+        if (driver)
+        {
+            string high = c.Pullup is not null ? V(c.HighReference) : "open drain";
+            lines.Add($"levels {V(c.LowReference)} / {high}; output resistance {R(c.OutputResistanceHigh)} near the high level, {R(c.OutputResistanceLow)} near the low");
+            if (Model.Ramp is { } ramp)
+                lines.Add($"[Ramp] 20-80 %: rise {V(ramp.Rising.DeltaV.At(Corner))} in {Units.Quantity.Format(ramp.Rising.DeltaT.At(Corner), "s", 3)}, " +
+                          $"fall {V(ramp.Falling.DeltaV.At(Corner))} in {Units.Quantity.Format(ramp.Falling.DeltaT.At(Corner), "s", 3)}");
+        }
+        else if (Model.Vinh is { } vinh && Model.Vinl is { } vinl)
+            lines.Add($"thresholds Vinh {V(vinh)}, Vinl {V(vinl)}");
+        lines.Add($"C_comp {Units.Quantity.Format(c.CComp, "F", 3)}" + (Package is null ? ", no package"
+            : $", package R {Units.Quantity.Format(PackageR, "Ω", 3)}, L {Units.Quantity.Format(PackageL, "H", 3)}, C {Units.Quantity.Format(PackageC, "F", 3)}"));
+        return lines;
+    }
+
+    static string R(double? r) => r is { } x ? Units.Quantity.Format(x, "Ω", 3) : "none";
+
     /// <summary>A short text such as "buffer demo33_in (typ) from demo33.ibs".</summary>
     public string Describe() => $"buffer {Model.Name} ({CornerName}) from {File}";
 }

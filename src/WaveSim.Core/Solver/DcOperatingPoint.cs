@@ -39,6 +39,7 @@ internal static class DcOperatingPoint
     /// </summary>
     public static (double[] JunctionVolts, double[] BranchCurrents) Solution(Network net, double sourceLevel)
     {
+        net.Driver?.HoldLevel(sourceLevel);   // a buffer driver: settled in the state of that level
         var x = Solve(net, sourceLevel, 0) ?? Solve(net, sourceLevel, Rmin)
             ?? throw new InputException("the network has no defined DC solution (a loop with no resistance?): give the driver or the load a resistance");
         int nj = net.Junctions.Count, nb = net.Branches.Count;

@@ -18,11 +18,13 @@ internal sealed class DriverSchedule
     readonly bool[] _rising;
     readonly (double Ku, double Kd)[] _from;
     readonly bool _firstHigh;
+    readonly double _mid;
     int _hint;
 
     public DriverSchedule(SourceSpec source, BufferSpec buffer, double duration, DriverLaw law)
     {
         _law = law;
+        _mid = 0.5 * (source.Low + source.High);
         _rise = SwitchingCoefficients.For(buffer.Model, buffer.Corner, rising: true);
         _fall = SwitchingCoefficients.For(buffer.Model, buffer.Corner, rising: false);
         var edges = Edges(source, duration, out _firstHigh);
@@ -42,6 +44,9 @@ internal sealed class DriverSchedule
 
     /// <summary>Holds the driver in a settled state (for a DC solve): the first state, or the one the first edge goes to.</summary>
     public void Hold(bool afterFirstEdge) => (_law.Ku, _law.Kd) = State(afterFirstEdge && _start.Length > 0 ? _rising[0] : _firstHigh);
+
+    /// <summary>Holds the driver settled at the level nearer <paramref name="level"/> (V): high above the mid level, else low.</summary>
+    public void HoldLevel(double level) => (_law.Ku, _law.Kd) = State(level > _mid);
 
     /// <summary>True when the driver has an edge (a settled level after it exists).</summary>
     public bool HasEdge => _start.Length > 0;
