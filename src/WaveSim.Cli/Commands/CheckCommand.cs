@@ -59,19 +59,8 @@ public static class CheckCommand
     }
 
     /// <summary>The scenario's buffers with where they sit (source, load, a branch's load) and their summaries.</summary>
-    static IEnumerable<(string At, IReadOnlyList<string> Lines)> Buffers(Core.Model.Scenario s)
-    {
-        if (s.Source.Buffer is { } d) yield return ("source", d.Summary(driver: true));
-        foreach (var (at, load) in Loads(s.Line, s.Load, ""))
-            if (load.Buffer is { } b) yield return (at, b.Summary(driver: false));
-    }
-
-    static IEnumerable<(string At, Core.Model.LoadSpec Load)> Loads(IReadOnlyList<Core.Model.LineElement> line, Core.Model.LoadSpec load, string prefix)
-    {
-        yield return (prefix + "load", load);
-        foreach (var br in line.OfType<Core.Model.Branch>())
-            foreach (var x in Loads(br.Line, br.Load, prefix + br.Name + "/")) yield return x;
-    }
+    static IEnumerable<(string At, IReadOnlyList<string> Lines)> Buffers(Core.Model.Scenario s) =>
+        Core.Model.BufferSpec.Of(s).Select(b => (b.At, b.Buffer.Summary(b.Driver)));
 
     /// <summary>Prints the plan as an aligned table.</summary>
     public static void PrintPlan(TextWriter o, GridPlan plan, Core.Model.Scenario scenario)

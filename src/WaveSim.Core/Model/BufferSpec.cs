@@ -84,6 +84,21 @@ public sealed record BufferSpec(string File, BufferModel Model, Corner Corner, P
 
     static string R(double? r) => r is { } x ? Units.Quantity.Format(x, "Ω", 3) : "none";
 
+    /// <summary>Every buffer of <paramref name="s"/> with where it sits (source, load, BRANCH/load) and whether it drives.</summary>
+    public static IEnumerable<(string At, BufferSpec Buffer, bool Driver)> Of(Scenario s)
+    {
+        ArgumentNullException.ThrowIfNull(s);
+        if (s.Source.Buffer is { } d) yield return ("source", d, true);
+        foreach (var x in Loads(s.Line, s.Load, "")) yield return x;
+    }
+
+    static IEnumerable<(string, BufferSpec, bool)> Loads(IReadOnlyList<LineElement> line, LoadSpec load, string prefix)
+    {
+        if (load.Buffer is { } b) yield return (prefix + "load", b, false);
+        foreach (var br in line.OfType<Branch>())
+            foreach (var x in Loads(br.Line, br.Load, prefix + br.Name + "/")) yield return x;
+    }
+
     /// <summary>A short text such as "buffer demo33_in (typ) from demo33.ibs".</summary>
     public string Describe() => $"buffer {Model.Name} ({CornerName}) from {File}";
 }
