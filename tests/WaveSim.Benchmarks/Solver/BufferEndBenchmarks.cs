@@ -30,17 +30,17 @@ source: {source}
 line: [ {{ segment: {{ length: 4.5 m, z0: 50 ohm, delay: 30 ns }} }} ]
 load: {load}
 probes: [ {{ name: src, at: source }}, {{ name: rx, at: load }} ]
-simulation: {{ duration: 100 ns, resolution: 10 }}
+simulation: {{ duration: 1000 ns, resolution: 10 }}
 ", "ends.yaml");
 
     /// <summary>Builds both scenarios outside the timing and checks that both run on the same 1,000-cell grid.</summary>
     [GlobalSetup]
     public void Setup()
     {
-        _buffers = Net($"{{ buffer: {{ file: '{Demo33}', model: demo33_io }}, waveform: pulse, delay: 5 ns, width: 40 ns }}",
+        _buffers = Net($"{{ buffer: {{ file: '{Demo33}', model: demo33_io }}, waveform: pulse, delay: 5 ns, width: 400 ns }}",
             $"{{ buffer: {{ file: '{Demo33}', model: demo33_in }} }}");
         string rise = _buffers.Source.Rise.ToString("R", System.Globalization.CultureInfo.InvariantCulture);
-        _resistors = Net($"{{ waveform: pulse, low: 0 V, high: 3.3 V, rise: {rise} s, delay: 5 ns, width: 40 ns, resistance: 20 ohm }}", "{ r: 50 ohm }");
+        _resistors = Net($"{{ waveform: pulse, low: 0 V, high: 3.3 V, rise: {rise} s, delay: 5 ns, width: 400 ns, resistance: 20 ohm }}", "{ r: 50 ohm }");
         var (a, b) = (Simulate.Plan(_resistors), Simulate.Plan(_buffers));
         if (a.TotalCells < 900 || a.TotalCells > 1100 || a.TotalCells != b.TotalCells || a.Steps != b.Steps)
             throw new InvalidOperationException($"the grids differ or are not about 1,000 cells: {a.TotalCells}/{a.Steps} and {b.TotalCells}/{b.Steps}");
