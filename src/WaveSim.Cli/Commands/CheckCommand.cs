@@ -25,6 +25,11 @@ public static class CheckCommand
             {
                 var j = RunSummary.PlanJson(plan);
                 j["problems"] = new System.Text.Json.Nodes.JsonArray(problems.Select(p => (System.Text.Json.Nodes.JsonNode)p).ToArray());
+                j["buffers"] = new System.Text.Json.Nodes.JsonArray(Buffers(s)
+                    .Select(b => (System.Text.Json.Nodes.JsonNode)new System.Text.Json.Nodes.JsonObject
+                    {
+                        ["at"] = b.At, ["lines"] = new System.Text.Json.Nodes.JsonArray(b.Lines.Select(l => (System.Text.Json.Nodes.JsonNode)l!).ToArray()),
+                    }).ToArray());
                 j["warnings"] = new System.Text.Json.Nodes.JsonArray(ScenarioWarnings.For(s, plan)
                     .Select(w => (System.Text.Json.Nodes.JsonNode)new System.Text.Json.Nodes.JsonObject { ["key"] = w.Key, ["message"] = w.Message }).ToArray());
                 o.WriteLine(RunSummary.Text(j));
@@ -37,6 +42,11 @@ public static class CheckCommand
                     o.WriteLine("  source edges: run as given (every segment at Courant number 1, where the grid carries any edge exactly)");
                 else if (EdgeLimit.HasRampedEdges(s.Source))
                     o.WriteLine($"  source edges: the grid carries 10-90 % edges down to {Quantity.Format(plan.MinimumEdge, "s")} ({GridPlan.MinimumEdgeSteps.ToString(System.Globalization.CultureInfo.InvariantCulture)} time steps); shorter ones are run as Gaussian-filtered steps of that time");
+                foreach (var (at, lines) in Buffers(s))
+                {
+                    o.WriteLine($"  {at}: {lines[0]}");
+                    foreach (string l in lines.Skip(1)) o.WriteLine($"    {l}");
+                }
                 foreach (var (where, fit) in Simulate.LossFits(s, plan))
                     o.WriteLine($"  {where}: frequency-dependent loss fitted with {fit.SeriesPoles.Length} series and {fit.ShuntPoles.Length} shunt poles; largest error over the band: internal impedance {100 * fit.InternalMaxError:F3} %, permittivity {100 * fit.PermittivityMaxError:F3} %");
                 var limits = PlanLimits.Exceeded(s, plan).Select(x => x.Message).ToHashSet();
@@ -47,6 +57,10 @@ public static class CheckCommand
         }));
         return cmd;
     }
+
+    /// <summary>The scenario's buffers with where they sit (source, load, a branch's load) and their summaries.</summary>
+    static IEnumerable<(string At, IReadOnlyList<string> Lines)> Buffers(Core.Model.Scenario s) =>
+        Core.Model.BufferSpec.Of(s).Select(b => (b.At, b.Buffer.Summary(b.Driver)));
 
     /// <summary>Prints the plan as an aligned table.</summary>
     public static void PrintPlan(TextWriter o, GridPlan plan, Core.Model.Scenario scenario)

@@ -95,7 +95,7 @@ public static class SweepCommand
         {
             o.WriteLine("  " + string.Join(" ", r.Axes.Select(a => $"{a.KeyPath,14}").Concat(cols.Select(c => $"{Short(c),16}"))));
             foreach (var p in r.Points)
-                o.WriteLine("  " + string.Join(" ", p.Values.Select((v, k) => $"{Quantity.Format(v, r.Axes[k].DisplayUnit, 4),14}")
+                o.WriteLine("  " + string.Join(" ", p.Values.Select((v, k) => $"{r.Axes[k].Show(v),14}")
                     .Concat(cols.Select(c => $"{Show(r.Value(p, c), c.Figure),16}"))));
         }
         if (goal is not null)
@@ -103,7 +103,7 @@ public static class SweepCommand
             string within = limits.Count == 0 ? "" : " within " + string.Join(", ", limits.Select(l => l.ToString()));
             if (r.Best(goal, limits) is { } b)
             {
-                string at = string.Join(", ", r.Axes.Select((a, k) => $"{a.KeyPath} = {Quantity.Format(b.Values[k], a.DisplayUnit, 4)}"));
+                string at = string.Join(", ", r.Axes.Select((a, k) => $"{a.KeyPath} = {a.Show(b.Values[k])}"));
                 o.WriteLine($"best by {goal}{within}: point {b.Index}: {at}: {Short(goal.Target)} {Show(r.Value(b, goal.Target), goal.Target.Figure)}"
                     + string.Concat(limits.Select(l => $", {Short(l.Target)} {Show(r.Value(b, l.Target), l.Target.Figure)}")));
             }

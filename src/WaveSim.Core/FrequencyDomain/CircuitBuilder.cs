@@ -26,8 +26,8 @@ internal sealed class CircuitBuilder
 
     public static Circuit Build(Scenario scenario, IReadOnlyList<ProbeSpec> probes)
     {
-        if (HasIvPart(scenario.Line, scenario.Load))
-            throw new InputException("the frequency-domain solve needs a linear network, and this one has I-V table ('iv') parts: leave the check out for it");
+        if (HasIvPart(scenario.Line, scenario.Load) || scenario.Source.Buffer is not null)
+            throw new InputException("the frequency-domain solve needs a linear network, and this one has I-V table ('iv') or buffer model parts: leave the check out for it");
         var b = new CircuitBuilder();
         foreach (var p in probes.Where(p => p.Anchor == ProbeAnchor.Distance))
         {
@@ -46,7 +46,7 @@ internal sealed class CircuitBuilder
     }
 
     static bool HasIvPart(IReadOnlyList<LineElement> line, LoadSpec load) =>
-        load.Iv is not null || line.Any(e => e switch
+        load.Iv is not null || load.Buffer is not null || line.Any(e => e switch
         {
             Shunt sh => sh.Parts.Iv is not null,
             Model.Series se => se.Parts.Iv is not null,

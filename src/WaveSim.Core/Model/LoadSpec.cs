@@ -18,6 +18,12 @@ public sealed record LoadSpec(double? R = null, double To = 0, double? C = null,
     /// </summary>
     public IvCurve? Iv { get; init; }
 
+    /// <summary>
+    /// A receiver from a buffer model in parallel with the other parts: its clamps and C_comp at the die pad, its package
+    /// between the pad and this node; null for none. Its Vinh and Vinl are <see cref="Receiver"/>.
+    /// </summary>
+    public BufferSpec? Buffer { get; init; }
+
     /// <summary>An open end.</summary>
     public static readonly LoadSpec Open = new();
 
@@ -30,6 +36,7 @@ public sealed record LoadSpec(double? R = null, double To = 0, double? C = null,
         if (C is { } c) parts.Add("C " + Units.Quantity.Format(c, "F"));
         if (L is { } l) parts.Add("L " + Units.Quantity.Format(l, "H"));
         if (Iv is { } iv) parts.Add($"I-V table ({iv.Voltages.Count} points)" + (To != 0 && R is null ? " to " + Units.Quantity.Format(To, "V") : ""));
+        if (Buffer is { } b) parts.Add(b.Describe());
         return parts.Count == 0 ? "open" : string.Join(" ∥ ", parts);
     }
 }

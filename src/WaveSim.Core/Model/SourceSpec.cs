@@ -53,6 +53,13 @@ public sealed record SourceSpec
     public double Resistance { get; init; }
 
     /// <summary>
+    /// A driver from a buffer model in place of the Thevenin source; null for none. The waveform then only says when it
+    /// switches; <see cref="High"/> and <see cref="Low"/> hold its pullup and pulldown references and <see cref="Rise"/> and
+    /// <see cref="Fall"/> the shorter of its 20-80 % rise and fall times (the edge the time step is chosen for).
+    /// </summary>
+    public BufferSpec? Buffer { get; init; }
+
+    /// <summary>
     /// The shortest 10-90 % edge the run carries, s (0: edges as given). A rise or fall below it, a zero one included, is run as a
     /// Gaussian-filtered step of this 10-90 time; <see cref="Simulate.Run"/> sets it from the grid (a few solver steps).
     /// It does not enter <see cref="ShortestFeature"/>, so it never changes the time step.

@@ -26,7 +26,8 @@ public static class SweepCsv
         csv.NextRecord();
         foreach (var p in r.Points)
         {
-            foreach (double v in p.Values) csv.WriteField(Cell(v));
+            for (int k = 0; k < p.Values.Count; k++)
+                csv.WriteField(r.Axes[k].Choices is { } names ? names[(int)p.Values[k]] : Cell(p.Values[k]));
             foreach (var f in p.Figures)
                 foreach (string name in SignalFigures.FigureNames)
                     csv.WriteField(f.GetNumber(name) is { } x ? Cell(x) : "");

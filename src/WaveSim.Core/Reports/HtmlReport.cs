@@ -66,6 +66,7 @@ public static class HtmlReport
         w.El("pre", input.ScenarioText, ("id", "scenario"));
 
         Plan(w, r);
+        BufferSection.Write(w, s);
         Figures(w, input, checks);
 
         w.El("h2", "Waveforms");

@@ -16,7 +16,7 @@ public static class ScenarioLoader
     /// <summary>The top-level keys accepted.</summary>
     public static readonly string[] TopKeys = ["title", "source", "line", "load", "probes", "simulation"];
     /// <summary>The keys accepted under <c>source</c>.</summary>
-    public static readonly string[] SourceKeys = ["waveform", "low", "high", "rise", "fall", "delay", "width", "period", "frequency", "bit_time", "pattern", "prbs", "file", "resistance"];
+    public static readonly string[] SourceKeys = ["waveform", "low", "high", "rise", "fall", "delay", "width", "period", "frequency", "bit_time", "pattern", "prbs", "file", "resistance", "buffer"];
     /// <summary>The keys accepted under <c>segment</c>.</summary>
     public static readonly string[] SegmentKeys = ["length", "z0", "delay", "velocity", "eps_eff", "r", "l", "g", "c", "geometry", "loss", "mode"];
     /// <summary>The keys accepted under <c>shunt</c> and <c>series</c>.</summary>
@@ -24,7 +24,9 @@ public static class ScenarioLoader
     /// <summary>The keys accepted under <c>branch</c>.</summary>
     public static readonly string[] BranchKeys = ["name", "line", "load"];
     /// <summary>The keys accepted under <c>load</c>.</summary>
-    public static readonly string[] LoadKeys = ["r", "to", "c", "l", "iv", "receiver"];
+    public static readonly string[] LoadKeys = ["r", "to", "c", "l", "iv", "receiver", "buffer"];
+    /// <summary>The keys accepted under <c>load.buffer</c> (and <c>source.buffer</c>).</summary>
+    public static readonly string[] BufferKeys = BufferReference.Keys;
     /// <summary>The keys accepted under <c>load.receiver</c>.</summary>
     public static readonly string[] ReceiverKeys = ["vih", "vil"];
     /// <summary>The keys accepted in each probe.</summary>
@@ -123,9 +125,11 @@ public static class ScenarioLoader
         string wf = s.Text("waveform") ?? throw s.Error("missing required key 'source.waveform'");
         if (!Enum.TryParse<WaveformKind>(wf, ignoreCase: true, out var kind) || int.TryParse(wf, out _))
             throw s.Error(s.Node("waveform")!, "source.waveform", $"'{wf}' is not a waveform; expected one of: step, pulse, trapezoid, gaussian, sine, bits, table");
-        double high = s.Quantity("high") ?? throw s.Error("missing required key 'source.high'");
-        double low = s.Quantity("low") ?? 0;
-        double rise = s.NonNegative("rise") ?? 0;
+        var buffer = BufferReference.Read(s, "buffer", receiving: false);
+        if (buffer is not null && BufferDriver.Conflict(s) is { } conflict) throw conflict;
+        double high = buffer is not null ? BufferDriver.High(buffer) : s.Quantity("high") ?? throw s.Error("missing required key 'source.high'");
+        double low = buffer is not null ? BufferDriver.Low(buffer) : s.Quantity("low") ?? 0;
+        double rise = buffer is not null ? BufferDriver.EdgeTime(buffer) : s.NonNegative("rise") ?? 0;
         double? fallGiven = s.NonNegative("fall");
         double fall = fallGiven ?? rise;
         double delay = s.NonNegative("delay") ?? 0;
@@ -166,6 +170,7 @@ public static class ScenarioLoader
             Waveform = kind, Low = low, High = high, Rise = rise, Delay = delay, Width = width,
             Period = period, BitTime = bitTime, Bits = bits, TableTime = [.. tt], TableVolts = [.. tv], Resistance = resistance,
         };
+        if (buffer is not null) return BufferDriver.Check(s, spec with { Buffer = buffer });
         return fallGiven is { } f ? spec with { Fall = f } : spec;   // a fall never written follows the rise, in variants too
     }
 
@@ -331,7 +336,7 @@ public static class ScenarioLoader
             {
                 "open" or "" or null => LoadSpec.Open,
                 "short" => new LoadSpec(Short: true),
-                _ => throw parent.Error(node, parent.Join(key), $"'{s.Value}' is not a load; expected 'open', 'short' or a mapping of r, to, c, l, iv, receiver"),
+                _ => throw parent.Error(node, parent.Join(key), $"'{s.Value}' is not a load; expected 'open', 'short' or a mapping of r, to, c, l, iv, receiver, buffer"),
             };
         }
         var m = parent.Map(key, LoadKeys)!;
@@ -347,7 +352,11 @@ public static class ScenarioLoader
             if (ScenarioRules.ThresholdOrder(vih, vil) is { } order) throw rm.Error(rm.Node("vil")!, rm.Join("vil"), order);
             rx = new ReceiverThresholds(vih, vil);
         }
-        return new LoadSpec(r, to, m.Positive("c"), m.Positive("l"), false, rx) { Iv = iv };
+        var buffer = BufferReference.Read(m, "buffer", receiving: true);
+        if (buffer is not null && rx is not null)
+            throw m.Error(m.Node("receiver")!, m.Join("receiver"), "a buffer receiver takes its thresholds from the model's Vinh and Vinl: give 'buffer' or 'receiver', not both");
+        if (buffer is { Model: { Vinh: { } vinh, Vinl: { } vinl } }) rx = new ReceiverThresholds(vinh, vinl);
+        return new LoadSpec(r, to, m.Positive("c"), m.Positive("l"), false, rx) { Iv = iv, Buffer = buffer };
     }
 
     static SimulationSpec ReadSimulation(YamlMap top)

@@ -79,6 +79,7 @@ public static class ScenarioValues
         var s = scenario;
         foreach (var change in changes)
         {
+            if (BufferCorners.IsCornerKey(change.KeyPath)) { s = BufferCorners.With(s, change.KeyPath, change.Value); continue; }
             var path = KeyPath.Parse(change.KeyPath);
             var (place, key) = Locate(s, path);
             Check(path, key, change.Value, change.Dimension);

@@ -22,6 +22,7 @@ public static class ScenarioWarnings
             list.Add(new(key, $"{EdgeLimit.Describe(t)} is shorter than the shortest edge the grid carries ({Steps} time steps): "
                 + $"it is run as a Gaussian-filtered step with a 10-90 % time of {Quantity.Format(plan.MinimumEdge, "s")}"));
         if (Dispersion(s, plan) is { } d) list.Add(d);
+        if (s.Source.Buffer is { } b) list.AddRange(BufferDriver.Notes(b).Select(n => new ScenarioWarning("source.buffer", n)));
         return list;
     }
 

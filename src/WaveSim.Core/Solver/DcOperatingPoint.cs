@@ -39,6 +39,7 @@ internal static class DcOperatingPoint
     /// </summary>
     public static (double[] JunctionVolts, double[] BranchCurrents) Solution(Network net, double sourceLevel)
     {
+        net.Driver?.HoldLevel(sourceLevel);   // a buffer driver: settled in the state of that level
         var x = Solve(net, sourceLevel, 0) ?? Solve(net, sourceLevel, Rmin)
             ?? throw new InputException("the network has no defined DC solution (a loop with no resistance?): give the driver or the load a resistance");
         int nj = net.Junctions.Count, nb = net.Branches.Count;
@@ -133,7 +134,7 @@ internal static class DcOperatingPoint
             throw new NumericalException($"the DC operating point with the I-V parts was not found (Newton's method and source stepping both failed at '{parts[0].Label}')");
         for (int q = 0; q < k; q++)
         {
-            double i = parts[q].Curve.Current(v[q]);
+            double i = parts[q].Law.Current(v[q], out _);
             parts[q].Average = i;
             for (int r = 0; r < n; r++) x[r] += i * w[q][r];
         }

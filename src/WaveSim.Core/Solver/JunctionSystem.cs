@@ -91,7 +91,7 @@ internal sealed class JunctionSystem
         {
             var part = _net.Nonlinear[p];
             _vPart[p] = Across(_junctionV!, part) - part.Offset;
-            _iNow[p] = part.Curve.Current(_vPart[p]);
+            _iNow[p] = part.Law.Current(_vPart[p], out _);
         }
     }
 

@@ -23,6 +23,7 @@ internal sealed class LeapfrogSolver
         foreach (var s in _net.Segments) { s.V = new double[s.Cells + 1]; s.I = new double[s.Cells]; }
         _jv = new double[_net.Junctions.Count];
         _settled = SettledLevels(scenario);
+        _net.Driver?.Hold(afterFirstEdge: false);
         DcOperatingPoint.Apply(_net, scenario.Source.InitialLevel, _jv);
         CopyEndVoltages();
         _kernels = _net.Segments.Select(s => new SegmentKernel(s, plan.Dt)).ToArray();
@@ -85,6 +86,7 @@ internal sealed class LeapfrogSolver
                     else _kernels[s].UpdateVoltages(_segV[s], _segI[s]);
             }
             double next = src.Value(t + dt);
+            _net.Driver?.At(t + dt);
             _junctions.Solve(src.Value(t), next);
             var x = _junctions.Voltages;
             for (int j = 0; j < _jv.Length; j++)
@@ -125,6 +127,7 @@ internal sealed class LeapfrogSolver
     double[]? SettledLevels(Scenario scenario)
     {
         if (scenario.Source.FirstEdgeLevel is not { } level) return null;
+        if (_net.Driver is { } driver) { if (!driver.HasEdge) return null; driver.Hold(afterFirstEdge: true); }
         try { DcOperatingPoint.Apply(_net, level, _jv); }
         catch (InputException) { return null; }   // an ideal loop that only the edge drives: the figures estimate the level
         CopyEndVoltages();
@@ -144,6 +147,12 @@ internal sealed class LeapfrogSolver
     {
         double e = 0;
         for (int j = 0; j < _jv.Length; j++) e += 0.5 * _net.Junctions[j].C * _jv[j] * _jv[j];
+        // The lumped parts' stored energy too (a receiver's C_comp and package), so the balance covers the whole net.
+        foreach (var br in _net.Branches)
+        {
+            e += 0.5 * br.L * br.Current * br.Current;
+            if (br.C is { } c) e += 0.5 * c * br.CapVoltage * br.CapVoltage;
+        }
         foreach (var seg in _net.Segments)
         {
             double cdz = seg.Plan.Segment.C * seg.Dz;

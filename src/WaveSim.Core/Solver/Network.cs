@@ -71,6 +71,11 @@ internal sealed class NonlinearPart
     public double Offset;
     /// <summary>The step-average current (the trapezoidal mean of the step's two ends), A, for probes.</summary>
     public double Average;
+    /// <summary>A buffer driver's time-varying law in place of <see cref="Curve"/>; null for a fixed table.</summary>
+    public DriverLaw? Driver { get; init; }
+    IPartLaw? _law;
+    /// <summary>The law the solves evaluate: the driver's, or the table's (with its cached segment search).</summary>
+    public IPartLaw Law => _law ??= Driver ?? (IPartLaw)new PartLaw(Curve);
 }
 
 /// <summary>A node of the grid as seen by a probe: which voltage to read and which currents to average.</summary>
@@ -97,6 +102,11 @@ internal sealed class Network
     /// <summary>For each line path ("" for the main line, "stub", "stub/sub"), its nodes in order with position and edges.</summary>
     public Dictionary<string, LineNodes> Lines { get; } = [];
     public int SourceBranch { get; set; }
+    /// <summary>A buffer driver's C_pkg, a branch from ground into the pin, whose current the source probe takes off the
+    /// package's (the pin's current into the line); −1 for none.</summary>
+    public int SourceShunt { get; set; } = -1;
+    /// <summary>A buffer driver's switching schedule (sets its law's Ku and Kd for each instant); null for a Thevenin source.</summary>
+    public DriverSchedule? Driver { get; set; }
 }
 
 /// <summary>The nodes of one line in order from its start, with the edges on either side of each node.</summary>

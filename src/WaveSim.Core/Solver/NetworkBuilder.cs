@@ -10,12 +10,41 @@ internal static class NetworkBuilder
         var net = new Network();
         int planIndex = 0;
         int source = AddJunction(net, "source", 0);
-        net.SourceBranch = AddBranch(net, new LumpedBranch
-        {
-            Role = BranchRole.Source, Label = "driver", A = -1, B = source, R = scenario.Source.Resistance, DrivenA = true,
-        });
+        if (scenario.Source.Buffer is { } buffer) AddDriver(net, scenario, buffer, source);
+        else
+            net.SourceBranch = AddBranch(net, new LumpedBranch
+            {
+                Role = BranchRole.Source, Label = "driver", A = -1, B = source, R = scenario.Source.Resistance, DrivenA = true,
+            });
         BuildLine(net, scenario, plan, ref planIndex, scenario.Line, scenario.Load, source, "", "");
         return net;
+    }
+
+    /// <summary>
+    /// A buffer driver at the line's start (the pin): at the die pad its switching law (<see cref="DriverLaw"/>) and C_comp to
+    /// ground; R_pkg + L_pkg from the pad to the pin (the source branch, whose current the source probe reads) and C_pkg from
+    /// the pin to ground, written as a branch from ground into the pin so the probe subtracts it: the pin's current into the line.
+    /// </summary>
+    static void AddDriver(Network net, Scenario scenario, Model.BufferSpec buffer, int pin)
+    {
+        int pad = AddJunction(net, "driver pad", 0);
+        net.SourceBranch = AddBranch(net, new LumpedBranch
+        {
+            Role = BranchRole.Source, Label = "driver package", A = pad, B = pin, R = buffer.PackageR, L = buffer.PackageL,
+        });
+        if (buffer.PackageC > 0)
+            net.SourceShunt = AddBranch(net, new LumpedBranch { Role = BranchRole.Source, Label = "driver C_pkg", A = -1, B = pin, C = buffer.PackageC });
+        var curves = buffer.Curves;
+        if (curves.CComp > 0)
+            AddBranch(net, new LumpedBranch { Role = BranchRole.Source, Label = "driver C_comp", A = pad, B = -1, C = curves.CComp });
+        var law = new DriverLaw(curves);
+        net.Junctions[pad].G += law.Shunt;
+        net.Nonlinear.Add(new NonlinearPart
+        {
+            Role = BranchRole.Source, Label = "driver", A = pad, B = -1, Driver = law,
+            Curve = Buffers.IvCurve.Create([(-1, 0), (1, 0)], "driver"),   // unused: the driver's law stands in its place
+        });
+        net.Driver = new DriverSchedule(scenario.Source, buffer, scenario.Simulation.Duration, law);
     }
 
     static int AddJunction(Network net, string label, double position)
@@ -132,5 +161,38 @@ internal static class NetworkBuilder
         if (load.C is { } c) Add(new LumpedBranch { Role = BranchRole.Load, Label = label + " C", A = node, B = -1, C = c });
         if (load.L is { } l) Add(new LumpedBranch { Role = BranchRole.Load, Label = label + " L", A = node, B = -1, L = l });
         if (load.Iv is { } iv) nodes.LoadParts.Add(AddPart(net, BranchRole.Load, label + " I-V", node, -1, iv, load.To));
+        if (load.Buffer is { } buffer) AddReceiver(net, nodes, buffer, node, label + " buffer");
+    }
+
+    /// <summary>
+    /// A buffer receiver at the line's end (the pin): C_pkg from the pin to ground and R_pkg + L_pkg in series from the pin to
+    /// the die pad, where C_comp goes to ground and the clamps' summed law conducts. The load probe reads the pin's current:
+    /// the package's branches, or, without a package, the pad's own parts.
+    /// </summary>
+    static void AddReceiver(Network net, LineNodes nodes, Model.BufferSpec buffer, int pin, string label)
+    {
+        int pad = pin;
+        if (buffer.PackageC > 0)
+            nodes.LoadBranches.Add(AddBranch(net, new LumpedBranch { Role = BranchRole.Load, Label = label + " C_pkg", A = pin, B = -1, C = buffer.PackageC }));
+        bool series = buffer.PackageR > 0 || buffer.PackageL > 0;
+        if (series)
+        {
+            pad = AddJunction(net, label + " pad", nodes.Length);
+            nodes.LoadBranches.Add(AddBranch(net, new LumpedBranch
+            {
+                Role = BranchRole.Load, Label = label + " package", A = pin, B = pad, R = buffer.PackageR, L = buffer.PackageL,
+            }));
+        }
+        double ccomp = buffer.Curves.CComp;
+        if (ccomp > 0)
+        {
+            int b = AddBranch(net, new LumpedBranch { Role = BranchRole.Load, Label = label + " C_comp", A = pad, B = -1, C = ccomp });
+            if (!series) nodes.LoadBranches.Add(b);
+        }
+        if (buffer.ClampLaw() is { } clamps)
+        {
+            int p = AddPart(net, BranchRole.Load, label + " clamps", pad, -1, clamps, 0);
+            if (!series) nodes.LoadParts.Add(p);
+        }
     }
 }

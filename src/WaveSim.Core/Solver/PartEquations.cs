@@ -21,7 +21,7 @@ internal sealed class PartEquations
     readonly double _c;
     readonly int _k;
     readonly double[] _g, _step, _trial, _jac;
-    readonly PartLaw[] _laws;
+    readonly IPartLaw[] _laws;
 
     public PartEquations(IReadOnlyList<NonlinearPart> parts, double[,] m, double c)
     {
@@ -30,7 +30,7 @@ internal sealed class PartEquations
         // Parts the step's network does not couple (at the two ends of a line, which only the line's cells join) have M_pq = 0
         // exactly: their equations are independent, one scalar root each.
         _currents = new double[_k];
-        _laws = parts.Select(p => new PartLaw(p.Curve)).ToArray();
+        _laws = parts.Select(p => p.Law).ToArray();
         _uncoupled = true;
         for (int p = 0; p < _k; p++)
             for (int q = 0; q < _k; q++)
@@ -43,7 +43,7 @@ internal sealed class PartEquations
     /// <summary>The parts' currents f(v) at the solution of the last <see cref="Solve"/> (the laws' own values, before c).</summary>
     public ReadOnlySpan<double> Currents => _currents;
 
-    double F(int p, double v) => _c * _parts[p].Curve.Current(v);
+    double F(int p, double v) => _c * _laws[p].Current(v, out _);
 
     /// <summary>Solves for the part voltages, starting from <paramref name="v"/> (the guess, overwritten by the solution).</summary>
     /// <returns>False when no solution was found to the tolerance.</returns>
@@ -71,7 +71,7 @@ internal sealed class PartEquations
 
     bool Done(double[] v)
     {
-        for (int p = 0; p < _k; p++) _currents[p] = _parts[p].Curve.Current(v[p]);
+        for (int p = 0; p < _k; p++) _currents[p] = _laws[p].Current(v[p], out _);
         return true;
     }
 
@@ -96,6 +96,8 @@ internal sealed class PartEquations
         return worst;
     }
 
+    double Slope(int q, double v) { _laws[q].Current(v, out double s); return s; }
+
     bool Newton(ReadOnlySpan<double> v0, double[] v)
     {
         double norm = Residual(v0, v, _g);
@@ -104,7 +106,7 @@ internal sealed class PartEquations
             if (norm <= Tolerance(v)) return true;
             for (int p = 0; p < _k; p++)
                 for (int q = 0; q < _k; q++)
-                    _jac[p * _k + q] = (p == q ? 1 : 0) - _m[p, q] * _c * _parts[q].Curve.Slope(v[q]);
+                    _jac[p * _k + q] = (p == q ? 1 : 0) - _m[p, q] * _c * Slope(q, v[q]);
             for (int p = 0; p < _k; p++) _step[p] = -_g[p];
             if (!Dense.SolveInPlace(_jac, _step, _k)) return false;
             double lambda = 1, trialNorm = double.PositiveInfinity;

@@ -7,7 +7,7 @@ namespace WaveSim.Core.Solver;
 /// <see cref="IvCurve.Slope"/>, found from the segment used last (a step moves the voltage little, so the search is
 /// usually a compare or two instead of a binary search).
 /// </summary>
-internal sealed class PartLaw
+internal sealed class PartLaw : IPartLaw
 {
     readonly double[] _v, _i, _s;
     int _hint;

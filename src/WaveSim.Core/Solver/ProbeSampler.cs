@@ -65,7 +65,7 @@ internal sealed class ProbeSampler
             {
                 var first = line.Nodes[0];
                 pick = spec.BranchPath.Count == 0
-                    ? (0, first.Node, [new EdgeRef(-1, -1, net.SourceBranch)], 1)
+                    ? (0, first.Node, net.SourceShunt >= 0 ? [new EdgeRef(-1, -1, net.SourceBranch), new EdgeRef(-1, -1, net.SourceShunt)] : [new EdgeRef(-1, -1, net.SourceBranch)], 1)
                     : (0, first.Node, first.Downstream, 1);
             }
             else if (spec.Anchor == ProbeAnchor.Load)

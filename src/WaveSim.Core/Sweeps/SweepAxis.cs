@@ -54,7 +54,13 @@ public sealed partial record SweepAxis(string KeyPath, Dimension Dimension, IRea
     public string DisplayUnit => Unit == "ohm" ? "\u03a9" : Unit == "ohm/m" ? "\u03a9/m" : Unit;
 
     /// <summary>Value <paramref name="index"/> written as scenario text, round-trip exact (e.g. "4.7e-12 F").</summary>
-    public string Text(int index) => Scenarios.ScenarioKeys.Format(Values[index], Dimension);
+    public string Text(int index) => Choices is { } c ? c[(int)Values[index]] : Scenarios.ScenarioKeys.Format(Values[index], Dimension);
+
+    /// <summary>A value of this axis for a listing: the choice's name for a discrete key, else the value with its unit (4 digits).</summary>
+    public string Show(double value) => Choices is { } c ? c[(int)value] : Quantity.Format(value, DisplayUnit, 4);
+
+    /// <summary>The names of a discrete key's values (a buffer's corner: the values are indices into it); null for a number.</summary>
+    public IReadOnlyList<string>? Choices { get; init; }
 
     /// <summary>Reads <c>KEY=RANGE</c>; an error names the <c>text</c> parameter (<see cref="InputException.Parameter"/>).</summary>
     /// <exception cref="InputException">The text is not KEY=RANGE, the range is malformed, or its values mix dimensions.</exception>
@@ -64,6 +70,11 @@ public sealed partial record SweepAxis(string KeyPath, Dimension Dimension, IRea
         if (eq <= 0 || eq == text.Length - 1)
             throw Bad(text, "expected KEY=RANGE, e.g. load.r=10ohm..200ohm:20, load.c=1pF,2pF,5pF or load.r=10..200 ohm:20:log");
         string key = text[..eq].Trim(), range = text[(eq + 1)..].Trim();
+        if (Scenarios.BufferCorners.IsCornerKey(key))
+        {
+            var idx = range.Split(',').Select(c => Scenarios.BufferCorners.IndexOf(c) ?? throw Bad(text, $"'{c.Trim()}' is not a corner; expected typ, min or max")).ToArray();
+            return new SweepAxis(key, Dimension.Number, [.. idx.Select(i => (double)i)]) { Choices = Scenarios.BufferCorners.Names };
+        }
         int dots = range.IndexOf("..", StringComparison.Ordinal);
         return dots >= 0 ? ParseRange(text, key, range, dots) : ParseList(text, key, range);
     }

@@ -40,7 +40,8 @@ public static class TerminationPlanner
 
     static TerminationDesign Series(Scenario s, double z0, TerminationOptions o)
     {
-        double rd = s.Source.Resistance;
+        // A buffer driver's resistance is its I-V curves' small-signal resistance near its levels (BufferSpec.OutputResistance).
+        double rd = s.Source.Buffer is { } b ? b.OutputResistance ?? 0 : s.Source.Resistance;
         if (rd >= z0)
             return new(TerminationKind.Series, [], null,
                 $"the driver's resistance {Quantity.Format(rd, "Ω", 3)} is already at or above Z0 {Quantity.Format(z0, "Ω", 3)}");
