@@ -19,12 +19,12 @@ public sealed record CoupledRunOptions
 }
 
 /// <summary>Plans, checks and runs a coupled scenario: the work behind <see cref="Simulate.RunCoupled"/>.</summary>
-internal static class CoupledRun
+public static class CoupledRun
 {
     /// <summary>Bytes per recorded probe value: the per-step record of V and I and the figure copy.</summary>
     const double BytesPerSample = 4 * sizeof(double);
 
-    public static CoupledResult Solve(CoupledScenario s, CoupledRunOptions o, CancellationToken ct)
+    internal static CoupledResult Solve(CoupledScenario s, CoupledRunOptions o, CancellationToken ct)
     {
         var plan = CoupledPlan.For(s);
         if (!o.Force) CheckLimits(s, plan);
@@ -34,6 +34,8 @@ internal static class CoupledRun
         return new CoupledSolver(run, plan).Run(o.TrackEnergy, o.SnapshotTimes, o.Progress, ct);
     }
 
+    /// <summary>Throws when the run is beyond the cell-update limit or its probe record beyond the memory limit (<see cref="GridPlan"/>'s).</summary>
+    /// <exception cref="InputException">The run exceeds a limit; the message says which and what to change.</exception>
     public static void CheckLimits(CoupledScenario s, CoupledPlan plan)
     {
         if (plan.CellUpdates > GridPlan.CellUpdateLimit)
