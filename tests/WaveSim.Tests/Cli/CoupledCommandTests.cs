@@ -18,7 +18,7 @@ public class CoupledCommandTests
         string header = File.ReadLines(Path.Combine(outDir, "probes.csv")).First();
         Assert.Equal("time_s,drv_V,drv_A,rx_V,rx_A,next_V,next_A,fext_V,fext_A,mid_V,mid_A", header);
         var summary = JsonNode.Parse(File.ReadAllText(Path.Combine(outDir, "summary.json")))!;
-        // The quiet line's near end: Kb·V_incident, Kb = 0.0657 (CHECKS §13 example), V_incident about 0.5 V.
+        // The quiet line's near end: Kb·V_incident, Kb = 0.0657 (ReferenceData/published-checks.md §13 example), V_incident about 0.5 V.
         double next = summary["probes"]!["next"]!["crosstalk_peak_V"]!.GetValue<double>();
         Assert.InRange(next, 0.9 * 0.0657 * 0.5, 1.1 * 0.0657 * 0.5);
         Assert.True(summary["probes"]!["fext"]!["crosstalk_peak_V"]!.GetValue<double>() < 0, "negative far-end pulse (Lm/L > Cm/C)");

@@ -7,7 +7,7 @@ namespace WaveSim.Tests.Coupled;
 /// Near- and far-end crosstalk of a symmetric pair against two independent references: the exact even/odd-mode solution
 /// (standard even/odd analysis, e.g. Pozar, Microwave Engineering, 4th ed. 2012, sec. 7.6; from memory) and the
 /// weak-coupling coefficients Kb = (Lm/L + Cm/C)/4, Kf = (Lm/L − Cm/C)/2 (Paul, Transmission Lines in Digital Systems for
-/// EMC Practitioners, Wiley 2012, ch. 5; from memory). Matrices: the example of ReferenceData (CHECKS §13): L11 = 9.9 nH/in,
+/// EMC Practitioners, Wiley 2012, ch. 5; from memory). Matrices: the example of ReferenceData/published-checks.md §13: L11 = 9.9 nH/in,
 /// L12 = 1.5 nH/in, C11 = 3.6 pF/in, C12 = −0.4 pF/in, giving Kb = 0.0657 and Lm/L − Cm/C = 0.0404.
 /// </summary>
 public class CrosstalkTests
@@ -25,7 +25,7 @@ public class CrosstalkTests
     public void Coupling_coefficients_of_the_example_match_the_published_values()
     {
         var (kb, kf) = SectionModes.Coupling(CoupledSection.Lossless(Length, L, C));
-        Assert.Equal(0.0657, kb, 4e-4);          // CHECKS §13 example: (0.1515 + 0.1111)/4
+        Assert.Equal(0.0657, kb, 4e-4);          // ReferenceData/published-checks.md §13 example: (0.1515 + 0.1111)/4
         Assert.Equal(0.0404 / 2, kf, 2e-4);      // (Lm/L − Cm/C)/2
     }
 

@@ -54,7 +54,7 @@ public class ModeAndPassivityTests
     [Fact]
     public void Even_odd_impedances_give_the_published_matrix_relations()
     {
-        // CHECKS §13: Le = Z0e/ve = L11 + L12, Lo = Z0o/vo = L11 − L12, Ce = 1/(Z0e·ve) = C11 + C12, Co = 1/(Z0o·vo) = C11 − C12.
+        // ReferenceData/published-checks.md §13: Le = Z0e/ve = L11 + L12, Lo = Z0o/vo = L11 − L12, Ce = 1/(Z0e·ve) = C11 + C12, Co = 1/(Z0o·vo) = C11 − C12.
         var (l, c) = SectionModes.FromModes(60, 42, 1.6e8, 1.75e8);
         Assert.Equal(60 / 1.6e8, l[0, 0] + l[0, 1], 1e-18);
         Assert.Equal(42 / 1.75e8, l[0, 0] - l[0, 1], 1e-18);
