@@ -30,10 +30,12 @@ public static class CoupledLoader
     {
         try
         {
+            YamlShape.Check(yaml, "scenario");   // before the tree is built: the tree's builder recurses on deep nesting
             var stream = new YamlStream();
             stream.Load(new StringReader(yaml));
             return stream.Documents.Count > 0 && stream.Documents[0].RootNode is YamlMappingNode root && IsCoupled(root);
         }
+        catch (ScenarioException) { return false; }   // the loader that follows reports it
         catch (YamlException) { return false; }
         catch (InvalidOperationException) { return false; }
         catch (ArgumentException) { return false; }
