@@ -42,6 +42,7 @@ internal sealed class SectionGrid
     /// <summary>Currents from n−½ to n+½ from the voltages at n; returns Σ I^{n−½}·(L·dz)·I^{n+½} when <paramref name="product"/>.</summary>
     public double UpdateCurrents(bool product)
     {
+        if (N == 2 && !product) { UpdateCurrentsPair(); return 0; }
         int n = N;
         double sum = 0;
         Span<double> old = stackalloc double[n];
@@ -66,6 +67,7 @@ internal sealed class SectionGrid
     /// <summary>Interior node voltages from n to n+1 from the currents at n+½.</summary>
     public void UpdateVoltages()
     {
+        if (N == 2) { UpdateVoltagesPair(); return; }
         int n = N;
         Span<double> old = stackalloc double[n];
         for (int k = 1; k < Cells; k++)
@@ -79,6 +81,34 @@ internal sealed class SectionGrid
                 for (int b = 0; b < n; b++) x += _av[row + b] * old[b] - _bv[row + b] * _di[b];
                 V[vi + a] = x;
             }
+        }
+    }
+
+    /// <summary>The current update unrolled for a pair (the common case), the same arithmetic as the general loop.</summary>
+    void UpdateCurrentsPair()
+    {
+        double a00 = _ai[0], a01 = _ai[1], a10 = _ai[2], a11 = _ai[3], b00 = _bi[0], b01 = _bi[1], b10 = _bi[2], b11 = _bi[3];
+        var v = V; var i = I;
+        for (int k = 0; k < Cells; k++)
+        {
+            int x = 2 * k;
+            double d0 = v[x + 2] - v[x], d1 = v[x + 3] - v[x + 1], o0 = i[x], o1 = i[x + 1];
+            i[x] = a00 * o0 - b00 * d0 + (a01 * o1 - b01 * d1);
+            i[x + 1] = a10 * o0 - b10 * d0 + (a11 * o1 - b11 * d1);
+        }
+    }
+
+    /// <summary>The voltage update unrolled for a pair.</summary>
+    void UpdateVoltagesPair()
+    {
+        double a00 = _av[0], a01 = _av[1], a10 = _av[2], a11 = _av[3], b00 = _bv[0], b01 = _bv[1], b10 = _bv[2], b11 = _bv[3];
+        var v = V; var i = I;
+        for (int k = 1; k < Cells; k++)
+        {
+            int x = 2 * k;
+            double d0 = i[x] - i[x - 2], d1 = i[x + 1] - i[x - 1], o0 = v[x], o1 = v[x + 1];
+            v[x] = a00 * o0 - b00 * d0 + (a01 * o1 - b01 * d1);
+            v[x + 1] = a10 * o0 - b10 * d0 + (a11 * o1 - b11 * d1);
         }
     }
 
