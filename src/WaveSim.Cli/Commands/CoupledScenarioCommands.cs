@@ -33,7 +33,10 @@ public static class CoupledScenarioCommands
         using var folder = new OutputFolder(settings.OutDir, "run");
         CoupledOutcome run;
         using (var bar = new ProgressBar(error, "simulating"))
-            run = Simulate.RunCoupled(s, new CoupledRunOptions { Force = settings.Force, Progress = bar, SettleBand = settings.SettleBand }, ct);
+        {
+            try { run = Simulate.RunCoupled(s, new CoupledRunOptions { Force = settings.Force, Progress = bar, SettleBand = settings.SettleBand }, ct); }
+            catch (InputException ex) when (ex is not ScenarioException) { throw new InputException($"{path}: {ex.Message}"); }   // name the file
+        }
         var written = CoupledRunFiles.Write(run, folder, settings.Svg, settings.Currents);
         folder.Commit();
         if (settings.Json) { output.WriteLine(written.Summary); return ExitCodes.Ok; }

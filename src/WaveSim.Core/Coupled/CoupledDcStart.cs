@@ -64,7 +64,7 @@ internal static class CoupledDcStart
         var x = a2.Svd(computeVectors: true).Solve(rhs);
         double scale = Math.Max(1, rhs.AbsoluteMaximum());
         if (!x.All(double.IsFinite) || (a2 * x - rhs).AbsoluteMaximum() > 1e-6 * scale)
-            throw new InputException("the end networks have no DC operating point (an ideal source loop, or sources in conflict through zero-resistance branches)");
+            throw new InputException("near, far: the end networks have no DC operating point (an ideal source loop, or sources in conflict through zero-resistance branches)");
 
         var v0 = new double[n]; var inj = new double[n];
         for (int c = 0; c < n; c++) v0[c] = x[V0 + c];

@@ -21,9 +21,9 @@ internal sealed class CoupledSolver
         double dt = plan.Dt;
         _grids = plan.Sections.Select(p => new SectionGrid(p.Section, p.Cells, dt)).ToArray();
         Matrix<double> Half(SectionGrid g, bool cap) => (cap ? g.Section.C : g.Section.G).ToMatrix() * (g.Dz / 2);
-        _near = new EndNetwork(_n, Half(_grids[0], true), Half(_grids[0], false), s.Near, dt);
-        _far = new EndNetwork(_n, Half(_grids[^1], true), Half(_grids[^1], false), s.Far, dt);
-        _joints = Enumerable.Range(0, _grids.Length - 1).Select(k => new EndNetwork(_n,
+        _near = new EndNetwork("near", _n, Half(_grids[0], true), Half(_grids[0], false), s.Near, dt);
+        _far = new EndNetwork("far", _n, Half(_grids[^1], true), Half(_grids[^1], false), s.Far, dt);
+        _joints = Enumerable.Range(0, _grids.Length - 1).Select(k => new EndNetwork($"coupled[{k}]/coupled[{k + 1}] joint", _n,
             Half(_grids[k], true) + Half(_grids[k + 1], true), Half(_grids[k], false) + Half(_grids[k + 1], false), [], dt)).ToArray();
         _nearNow = new double[s.Near.Count]; _nearNext = new double[s.Near.Count];
         _farNow = new double[s.Far.Count]; _farNext = new double[s.Far.Count];

@@ -28,7 +28,7 @@ internal sealed class EndNetwork
     public readonly double[] Average;
     readonly double[] _zeq;
 
-    public EndNetwork(int n, Matrix<double> cj, Matrix<double> gj, IReadOnlyList<EndBranch> branches, double dt)
+    public EndNetwork(string where, int n, Matrix<double> cj, Matrix<double> gj, IReadOnlyList<EndBranch> branches, double dt)
     {
         _n = n; _dt = dt;
         Branches = [.. branches];
@@ -55,7 +55,7 @@ internal sealed class EndNetwork
         var lu = a.LU();
         double det = Math.Abs(lu.Determinant);
         if (!(det > 0) || !double.IsFinite(det) || a.ConditionNumber() > 1e15)
-            throw new InputException("the end networks leave a node without a defined voltage (the step's equations are singular)");
+            throw new InputException($"{where}: the parts leave a node without a defined voltage (the step's equations are singular: zero-impedance branches in parallel or in a loop?)");
         var inv = a.Inverse();
         _inverse = new double[_size * _size];
         for (int i = 0; i < _size; i++) for (int j = 0; j < _size; j++) _inverse[i * _size + j] = inv[i, j];
