@@ -34,7 +34,7 @@ public static class CoupledScenarioCommands
         CoupledOutcome run;
         using (var bar = new ProgressBar(error, "simulating"))
         {
-            try { run = Simulate.RunCoupled(s, new CoupledRunOptions { Force = settings.Force, Progress = bar, SettleBand = settings.SettleBand }, ct); }
+            try { run = Simulate.RunCoupled(s, new CoupledRunOptions { Force = settings.Force, Progress = bar, SettleBand = settings.SettleBand, SnapshotTimes = SpaceTimeRows(s) }, ct); }
             catch (InputException ex) when (ex is not ScenarioException) { throw new InputException($"{path}: {ex.Message}"); }   // name the file
         }
         var written = CoupledRunFiles.Write(run, folder, settings.Svg, settings.Currents);
@@ -94,6 +94,10 @@ public static class CoupledScenarioCommands
         if (problems.Count == 0) o.WriteLine("no problems found");
         return ExitCodes.Ok;
     }
+
+    /// <summary>The instants of the space-time maps' rows, as many as a single-line run keeps.</summary>
+    static double[] SpaceTimeRows(CoupledScenario s) =>
+        Enumerable.Range(0, Core.Analysis.RunAnalysis.SpaceTimeRows).Select(k => s.Simulation.Duration * k / (Core.Analysis.RunAnalysis.SpaceTimeRows - 1)).ToArray();
 
     static string V(double v) => Quantity.Format(v, "V", 3);
     static string T(double? t) => t is { } x ? Quantity.Format(x, "s", 3) : "-";

@@ -12,7 +12,8 @@ public sealed record CoupledFilesWritten(IReadOnlyList<string> Files, string Sum
 /// <summary>
 /// Writes a coupled run's files into an <see cref="OutputFolder"/>: probes.csv (the single-line form,
 /// <c>time_s,&lt;probe&gt;_V,&lt;probe&gt;_A</c>), summary.json (the plan with each section's modes, every probe's figures,
-/// the crosstalk peaks of quiet-conductor probes) and waveforms.png (.svg) with the peaks marked. The caller commits.
+/// the crosstalk peaks of quiet-conductor probes), waveforms.png (.svg) with the peaks marked, and spacetime_CONDUCTOR.png for
+/// every conductor on one voltage scale when the run kept snapshots. The caller commits.
 /// </summary>
 public static class CoupledRunFiles
 {
@@ -30,6 +31,21 @@ public static class CoupledRunFiles
         var size = currents ? PictureSizes.WaveformsWithCurrents : PictureSizes.Waveforms;
         output.Write("waveforms.png", XyChart.RenderPng(chart, size.Width, size.Height)); files.Add("waveforms.png");
         if (svg) { output.WriteText("waveforms.svg", XyChart.RenderSvg(chart, size.Width, size.Height)); files.Add("waveforms.svg"); }
+        if (r.Snapshots.Count > 1)
+        {
+            // One space-time map per conductor, all on one voltage scale so that a quiet conductor's crosstalk reads against the drive.
+            double lo = r.Snapshots.Min(x => x.Volts.Min(c => c.Min())), hi = r.Snapshots.Max(x => x.Volts.Max(c => c.Max()));
+            if (!(hi > lo)) hi = lo + 1;
+            var layout = LineLayout.Single(r.Positions, r.Scenario.LengthUnit, r.Scenario.LengthFactor, []);
+            double[] times = r.Snapshots.Select(x => x.Time).ToArray();
+            for (int c = 0; c < r.Scenario.Conductors.Count; c++)
+            {
+                string name = $"spacetime_{r.Scenario.Conductors[c]}.png";
+                output.Write(name, SpaceTimeRenderer.RenderPng(layout, times, r.Snapshots.Select(x => x.Volts[c]).ToArray(),
+                    Math.Clamp(0, lo, hi), lo, hi, PictureSizes.SpaceTime.Width, PictureSizes.SpaceTime.Height));
+                files.Add(name);
+            }
+        }
         return new CoupledFilesWritten(files, summary);
     }
 

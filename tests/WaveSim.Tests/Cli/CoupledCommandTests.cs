@@ -24,6 +24,7 @@ public class CoupledCommandTests
         Assert.True(summary["probes"]!["fext"]!["crosstalk_peak_V"]!.GetValue<double>() < 0, "negative far-end pulse (Lm/L > Cm/C)");
         Assert.Null(summary["probes"]!["drv"]!["crosstalk_peak_V"]);
         Assert.True(File.Exists(Path.Combine(outDir, "waveforms.png")));
+        Assert.True(File.Exists(Path.Combine(outDir, "spacetime_aggr.png")) && File.Exists(Path.Combine(outDir, "spacetime_quiet.png")));
     }
 
     [Fact]
