@@ -66,6 +66,20 @@ public static class Simulate
         plan.Segments.Where(s => s.Segment.Loss is not null)
             .Select(s => (s.Where, DispersiveKernel.FitFor(s.Segment, scenario, plan.Dt))).ToList();
 
+    /// <summary>
+    /// Runs a coupled scenario (several conductors over a common reference, docs/coupled.md) and analyses it: the one call
+    /// every command that simulates a coupled net goes through.
+    /// </summary>
+    /// <exception cref="InputException">The run is beyond the limits (unless forced), or the end networks are singular.</exception>
+    /// <exception cref="NumericalException">The solution became NaN or infinite.</exception>
+    /// <exception cref="OperationCanceledException">The token was cancelled.</exception>
+    public static Coupled.CoupledOutcome RunCoupled(Coupled.CoupledScenario scenario, Coupled.CoupledRunOptions? options = null, CancellationToken ct = default)
+    {
+        ArgumentNullException.ThrowIfNull(scenario);
+        options ??= new Coupled.CoupledRunOptions();
+        return Coupled.CoupledAnalysis.Analyse(Coupled.CoupledRun.Solve(scenario, options, ct), options.SettleBand);
+    }
+
     /// <summary>Throws when the plan is beyond the limits a run accepts unless forced (<see cref="PlanLimits"/>).</summary>
     /// <exception cref="PlanLimitException">The plan needs more memory or cell updates than the limits.</exception>
     public static void CheckLimits(Scenario scenario, GridPlan plan)

@@ -18,6 +18,8 @@ public static class CheckCommand
         var cmd = new Command("check", "Read a scenario and print the plan (cells, Courant numbers, step, memory) without running") { scenario, json };
         cmd.SetAction(pr => CommandGuard.Run(pr.InvocationConfiguration.Error, () =>
         {
+            if (CoupledLoader.IsCoupledFile(pr.GetValue(scenario)!))
+                return CoupledScenarioCommands.Check(pr.GetValue(scenario)!, pr.GetValue(json), pr.InvocationConfiguration.Output);
             var (s, plan) = CommonOptions.LoadPlanned(pr.GetValue(scenario)!, pr.InvocationConfiguration.Error);
             var problems = PlanAdvisor.Problems(s, plan);
             var o = pr.InvocationConfiguration.Output;

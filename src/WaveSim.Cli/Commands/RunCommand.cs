@@ -35,6 +35,13 @@ public static class RunCommand
             int nFrames = pr.GetValue(frames);
             var (fw, fh) = pr.GetValue(frameSize);
             double band = pr.GetValue(settle);
+            if (Core.Scenarios.CoupledLoader.IsCoupledFile(path))
+            {
+                CoupledScenarioCommands.Refuse(("--frames", nFrames > 0), ("--check-frequency-domain", pr.GetValue(fdCheck)),
+                    ("--window", pr.GetResult(window) is not null), ("--plot", pr.GetResult(plot) is not null));
+                return CoupledScenarioCommands.Run(path, new(CommonOptions.OutputDir(pr.GetValue(outDir), path), pr.GetValue(json), pr.GetValue(force),
+                    pr.GetValue(svg), pr.GetValue(currents), band), pr.InvocationConfiguration.Output, pr.InvocationConfiguration.Error, ct);
+            }
             var (s, plan) = CommonOptions.LoadPlanned(path, pr.InvocationConfiguration.Error);
             var files = new RunFileOptions
             {

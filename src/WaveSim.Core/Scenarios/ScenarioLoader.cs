@@ -78,6 +78,7 @@ public static class ScenarioLoader
         if (stream.Documents.Count == 0 || stream.Documents[0].RootNode is not YamlMappingNode root)
             throw new ScenarioException($"{file}:1:1: a scenario is a mapping of keys (title, source, line, load, probes, simulation)");
 
+        if (CoupledLoader.IsCoupled(root)) throw CoupledLoader.NotHere(root, file);
         var top = new YamlMap(file, "", root, TopKeys);
         var source = ReadSource(top, file);
         var lineNode = top.Sequence("line") ?? throw top.Error("missing required key 'line'");
@@ -119,9 +120,9 @@ public static class ScenarioLoader
 
     static string FirstLine(string s) => s.ReplaceLineEndings(" ");
 
-    static SourceSpec ReadSource(YamlMap top, string file)
+    internal static SourceSpec ReadSource(YamlMap top, string file, params string[] extraKeys)
     {
-        var s = top.Map("source", SourceKeys) ?? throw top.Error("missing required key 'source'");
+        var s = top.Map("source", [.. SourceKeys, .. extraKeys]) ?? throw top.Error("missing required key 'source'");
         string wf = s.Text("waveform") ?? throw s.Error("missing required key 'source.waveform'");
         if (!Enum.TryParse<WaveformKind>(wf, ignoreCase: true, out var kind) || int.TryParse(wf, out _))
             throw s.Error(s.Node("waveform")!, "source.waveform", $"'{wf}' is not a waveform; expected one of: step, pulse, trapezoid, gaussian, sine, bits, table");
@@ -359,7 +360,7 @@ public static class ScenarioLoader
         return new LoadSpec(r, to, m.Positive("c"), m.Positive("l"), false, rx) { Iv = iv, Buffer = buffer };
     }
 
-    static SimulationSpec ReadSimulation(YamlMap top)
+    internal static SimulationSpec ReadSimulation(YamlMap top)
     {
         var m = top.Map("simulation", SimulationKeys) ?? throw top.Error("missing required key 'simulation' (with 'duration')");
         double duration = m.Positive("duration") ?? throw m.Error("missing required key 'simulation.duration'");
