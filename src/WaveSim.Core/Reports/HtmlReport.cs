@@ -66,7 +66,7 @@ public static class HtmlReport
         if (input.Terminations is { } t) TerminationSection(w, t, n);
         Limits(w);
         long rest = w.Length + PageShell.ScriptBytes;
-        string json = PageData.Json(input.Outcome, picture, input.Waveforms.Probes, MaxPageBytes - rest);
+        string json = PageData.Json(input.Outcome, picture, input.Waveforms.Probes, MaxPageBytes - rest, input.Waveforms.Currents);
         PageShell.Scripts(w, json);
         w.Line("</body>").Line("</html>");
         return new HtmlReportResult(w.ToString(), checks);

@@ -43,8 +43,10 @@ public static class MinMaxColumns
                     int lo = start, hi = start;
                     for (int k = start + 1; k < end; k++)
                     {
-                        if (x[k] < x[lo]) lo = k;
-                        if (x[k] > x[hi]) hi = k;
+                        // NaN is a gap: never an extreme while a number is there.
+                        if (double.IsNaN(x[k])) continue;
+                        if (double.IsNaN(x[lo]) || x[k] < x[lo]) lo = k;
+                        if (double.IsNaN(x[hi]) || x[k] > x[hi]) hi = k;
                     }
                     // The extreme that comes first is drawn first, so the line keeps the waveform's direction.
                     v[s].Add(lo <= hi ? x[lo] : x[hi]);

@@ -2,7 +2,6 @@ using System.Globalization;
 using System.Text;
 using WaveSim.Core.Analysis;
 using WaveSim.Core.Pictures;
-using WaveSim.Core.Solver;
 
 namespace WaveSim.Core.Reports;
 
@@ -19,46 +18,51 @@ public static class PageData
     /// <summary>Most positions kept along the line in a frame (min/max pairs over the rest).</summary>
     public const int FramePositions = 400;
 
+    /// <summary>The JSON of one run (<see cref="PageRecord.Of"/>); the full record is carried when the whole stays under <paramref name="budgetBytes"/>.</summary>
+    public static string Json(RunOutcome run, WaveformPicture picture, IReadOnlyList<string>? plot, long budgetBytes, bool currents = false) =>
+        Json(PageRecord.Of(run, picture, plot, currents), budgetBytes);
+
     /// <summary>
-    /// The JSON of one run. The full record is carried when the whole JSON stays under <paramref name="budgetBytes"/>;
-    /// <paramref name="picture"/> gives the window first shown and the probes first drawn (the static picture's choices).
+    /// The JSON of <paramref name="record"/>: the thinned record always, the full record when the whole JSON stays under
+    /// <paramref name="budgetBytes"/>.
     /// </summary>
-    public static string Json(RunOutcome run, WaveformPicture picture, IReadOnlyList<string>? plot, long budgetBytes, string label = "")
+    public static string Json(PageRecord record, long budgetBytes)
     {
-        ArgumentNullException.ThrowIfNull(run);
-        ArgumentNullException.ThrowIfNull(picture);
-        var r = run.Result;
+        ArgumentNullException.ThrowIfNull(record);
+        var traces = record.Traces;
+        bool currents = traces.Count > 0 && traces.All(x => x.Amps is not null);
         var sb = new StringBuilder();
         sb.Append('{');
-        Str(sb, "title", r.Scenario.Title).Append(',');
-        Str(sb, "label", label).Append(',');
-        Num(sb, "stepS", r.Plan.Dt).Append(',');
-        Num(sb, "durationS", r.Time[^1]).Append(',');
-        sb.Append("\"window\":[").Append(G(picture.Shown.Start)).Append(',').Append(G(picture.Shown.Stop)).Append("],");
+        Str(sb, "title", record.Title).Append(',');
+        Num(sb, "stepS", record.StepS).Append(',');
+        Num(sb, "durationS", record.Time[^1]).Append(',');
+        sb.Append("\"currents\":").Append(currents ? "true" : "false").Append(',');
+        sb.Append("\"currentsShown\":").Append(currents && record.CurrentsShown ? "true" : "false").Append(',');
+        sb.Append("\"window\":[").Append(G(Math.Max(record.Window.Start, record.Time[0]), TimeFormat)).Append(',')
+          .Append(G(Math.Min(record.Window.Stop, record.Time[^1]), TimeFormat)).Append("],");
         sb.Append("\"probes\":[");
-        var thresholds = run.Verdicts.ToDictionary(v => v.Probe, v => v.Judged ? v.Thresholds : null);
-        for (int i = 0; i < r.Probes.Count; i++)
+        for (int i = 0; i < traces.Count; i++)
         {
-            var p = r.Probes[i];
+            var p = traces[i];
             if (i > 0) sb.Append(',');
             sb.Append('{');
             Str(sb, "name", p.Name).Append(',');
-            Str(sb, "at", p.Location).Append(',');
-            sb.Append("\"shown\":").Append(plot is null || plot.Contains(p.Name) ? "true" : "false");
-            if (thresholds.GetValueOrDefault(p.Name) is { } th)
+            Str(sb, "at", p.At).Append(',');
+            sb.Append("\"shown\":").Append(p.Shown ? "true" : "false");
+            if (p.Thresholds is { } th)
                 sb.Append(',').Append("\"vihV\":").Append(G(th.Vih)).Append(",\"vilV\":").Append(G(th.Vil));
             sb.Append('}');
         }
         sb.Append("],");
-        var series = r.Probes.Select(p => p.Volts).Concat(r.Probes.Select(p => p.Amps)).ToArray();
-        var (t, v) = MinMaxColumns.Thin(r.Time, series, Columns);
+        var series = traces.Select(p => p.Volts).Concat(currents ? traces.Select(p => p.Amps!) : []).ToArray();
+        var (t, v) = MinMaxColumns.Thin(record.Time, series, Columns);
         sb.Append("\"overview\":");
-        Record(sb, t, v, r.Probes.Count);
+        Record(sb, t, v, traces.Count);
         sb.Append(',');
-        Frames(sb, r);
+        Frames(sb, record);
         // The full record only where it fits: every sample for zoomed ranges, else the zoom draws the thinned record.
         var full = new StringBuilder();
-        if (t.Length < r.Time.Length) Record(full, r.Time, series, r.Probes.Count);
+        if (t.Length < record.Time.Length) Record(full, record.Time, series, traces.Count);
         bool fits = full.Length > 0 && sb.Length + full.Length + 16 < budgetBytes;
         sb.Append(",\"full\":").Append(fits ? full.ToString() : "null");
         sb.Append(",\"fullLeftOut\":").Append(full.Length > 0 && !fits ? "true" : "false");
@@ -73,19 +77,19 @@ public static class PageData
         sb.Append(",\"v\":[");
         for (int i = 0; i < probes; i++) { if (i > 0) sb.Append(','); Array(sb, series[i]); }
         sb.Append("],\"a\":[");
-        for (int i = 0; i < probes; i++) { if (i > 0) sb.Append(','); Array(sb, series[probes + i]); }
+        for (int i = 0; i < probes && series.Count > probes; i++) { if (i > 0) sb.Append(','); Array(sb, series[probes + i]); }
         sb.Append("]}");
     }
 
-    static void Frames(StringBuilder sb, SimulationResult r)
+    static void Frames(StringBuilder sb, PageRecord r)
     {
         sb.Append("\"frames\":");
-        if (r.Snapshots.Count < 2 || r.Lines.Count == 0) { sb.Append("null"); return; }
-        var (z, rows) = MinMaxColumns.Thin(r.Lines[0].Positions, r.Snapshots.Select(s => s.Volts[0]).ToArray(), FramePositions / 2);
+        if (r.FramePositions is not { } positions || r.FrameTimes is not { } times || r.FrameVolts is not { } rows0 || times.Length < 2) { sb.Append("null"); return; }
+        var (z, rows) = MinMaxColumns.Thin(positions, rows0, FramePositions / 2);
         sb.Append("{\"z\":");
         Array(sb, z);
         sb.Append(",\"t\":");
-        Array(sb, r.Snapshots.Select(s => s.Time).ToArray(), TimeFormat);
+        Array(sb, times, TimeFormat);
         sb.Append(",\"v\":[");
         for (int k = 0; k < rows.Length; k++) { if (k > 0) sb.Append(','); Array(sb, rows[k]); }
         sb.Append("]}");

@@ -221,4 +221,30 @@ public class InteractivePageBrowserTests(BrowserSession session, ITestOutputHelp
         Assert.DoesNotMatch(new Regex(@"\d[eE][+-]?\d"), cells);
         opened.AssertClean();
     }
+
+    [SkippableFact]
+    public async Task The_overlay_page_and_a_report_opened_with_currents_draw_without_errors()
+    {
+        session.RequireBrowser();
+        var a = RunOf(ReportScenarios.Matched).Result;
+        var b = RunOf(ReportScenarios.Ringing).Result;
+        var traces = new[] { a, b }.Select(r => new OverlayTrace(r.Scenario.Title, "folder", r.Time, r.Probe("rx").Volts)).ToList();
+        await using (var opened = await session.OpenAsync(OverlayPage.Html("rx", "rx", traces, null), "overlay.html"))
+        {
+            var page = opened.Page;
+            Assert.Equal(3, await Js<int>(page, "wavesimPage.charts.v.series.length"));
+            Assert.True(await Js<bool>(page, "document.getElementById('show-currents').parentNode.hidden"), "an overlay has no currents");
+            // The matched run is 10 ns long, the ringing one 40 ns: past 10 ns the first trace is a gap.
+            Assert.Null(await Js<double?>(page, "wavesimPage.valueAt(0, 20e-9)"));
+            Assert.Equal(b.Probe("rx").Volts[^1], await Js<double>(page, "wavesimPage.valueAt(1, 40e-9)"), 1e-5);
+            opened.AssertClean();
+        }
+        var run = RunOf(ReportScenarios.Matched);
+        var input = ReportInput.For(run, "") with { Waveforms = new Core.Pictures.WaveformOptions { Currents = true } };
+        await using (var opened = await session.OpenAsync(HtmlReport.Build(input).Html, "currents.html"))
+        {
+            Assert.True(await Js<bool>(opened.Page, "!!wavesimPage.charts.a && !document.getElementById('chart-a-box').hidden"));
+            opened.AssertClean();
+        }
+    }
 }

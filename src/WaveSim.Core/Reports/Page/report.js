@@ -63,7 +63,11 @@
         out[0].push(t[start], t[end - 1]);
         for (s = 0; s < all.length; s++) {
           var x = all[s], lo = start, hi = start;
-          for (var k = start + 1; k < end; k++) { if (x[k] < x[lo]) lo = k; if (x[k] > x[hi]) hi = k; }
+          for (var k = start + 1; k < end; k++) {
+            if (x[k] === null) continue;   // a gap (an overlay's trace outside its record)
+            if (x[lo] === null || x[k] < x[lo]) lo = k;
+            if (x[hi] === null || x[k] > x[hi]) hi = k;
+          }
           if (lo <= hi) out[s + 1].push(x[lo], x[hi]); else out[s + 1].push(x[hi], x[lo]);
         }
       }
@@ -78,6 +82,7 @@
     var i = lowerBound(ts, t);
     if (i <= 0) return x[0];
     if (i >= ts.length) return x[ts.length - 1];
+    if (x[i - 1] === null || x[i] === null) return null;
     var f = (t - ts[i - 1]) / (ts[i] - ts[i - 1]);
     return x[i - 1] + f * (x[i] - x[i - 1]);
   }
@@ -278,11 +283,14 @@
       box.appendChild(label);
     });
     var cur = document.getElementById("show-currents");
-    cur.addEventListener("change", function () {
+    if (!data.currents) cur.parentNode.hidden = true;
+    cur.addEventListener("change", showCurrents);
+    function showCurrents() {
       var el = document.getElementById("chart-a-box");
       el.hidden = !cur.checked;
       if (cur.checked && !page.charts.a) { makeChart("a"); probes.forEach(function (p, i) { page.charts.a.setSeries(i + 1, { show: page.charts.v.series[i + 1].show }); }); }
-    });
+    }
+    if (data.currentsShown) { cur.checked = true; page.showCurrentsAtStart = showCurrents; }
     document.getElementById("reset-zoom").addEventListener("click", resetZoom);
     document.getElementById("clear-cursors").addEventListener("click", function () { page.cursors = [null, null]; cursorTable(); redrawAll(); });
   }
@@ -382,6 +390,7 @@
     current = view(range.min, range.max, columns());
     toggles();
     makeChart("v");
+    if (page.showCurrentsAtStart) page.showCurrentsAtStart();
     cursorTable();
     frames();
     spaceTime();
