@@ -20,6 +20,9 @@ public static class PageAssets
     /// <summary>The page's own script: charts, cursors, scrubber, space-time readout.</summary>
     public static string PageScript => Read("WaveSim.Page.report.js");
 
+    /// <summary>The script of a study's page: a chart per figure over the variants, a click shows a variant's waveforms.</summary>
+    public static string VariantScript => Read("WaveSim.Page.variants.js");
+
     /// <summary>The page's own style sheet.</summary>
     public static string PageStyle => Read("WaveSim.Page.report.css");
 

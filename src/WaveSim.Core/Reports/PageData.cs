@@ -2,6 +2,7 @@ using System.Globalization;
 using System.Text;
 using WaveSim.Core.Analysis;
 using WaveSim.Core.Pictures;
+using WaveSim.Core.Rendering;
 
 namespace WaveSim.Core.Reports;
 

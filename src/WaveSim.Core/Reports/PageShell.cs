@@ -48,7 +48,9 @@ internal static class PageShell
         w.Raw("<p class=\"note\" id=\"spacetime-scale\"></p>\n<canvas id=\"spacetime-map\"></canvas>\n<p id=\"spacetime-readout\">&#160;</p>\n");
     }
 
-    public static void Scripts(HtmlWriter w, string json)
+    public static void Scripts(HtmlWriter w, string json) => Scripts(w, json, PageAssets.PageScript);
+
+    public static void Scripts(HtmlWriter w, string json, string script)
     {
         // Neither "</" nor "]]>" appears in the data (strings are JSON-escaped), so the block cannot end early; the page's
         // script strips the CDATA markers an HTML parser leaves in the text.
@@ -56,6 +58,6 @@ internal static class PageShell
         w.Raw(json).Raw("\n]]></script>\n");
         w.Raw("<script>//<![CDATA[\n/* uPlot 1.6.32, inlined unchanged.\n").Raw(PageAssets.ChartLicence.Replace("*/", "* /", StringComparison.Ordinal))
          .Raw("\n*/\n").Raw(PageAssets.ChartScript).Raw("\n//]]></script>\n");
-        w.Raw("<script>//<![CDATA[\n").Raw(PageAssets.PageScript).Raw("\n//]]></script>\n");
+        w.Raw("<script>//<![CDATA[\n").Raw(script).Raw("\n//]]></script>\n");
     }
 }

@@ -247,4 +247,42 @@ public class InteractivePageBrowserTests(BrowserSession session, ITestOutputHelp
             opened.AssertClean();
         }
     }
+
+    [SkippableFact]
+    public async Task A_sweep_page_marks_the_best_point_and_a_click_shows_that_points_waveforms()
+    {
+        session.RequireBrowser();
+        // The matched net with the load varied: at 50 ohm the line is matched and the load sees 0.5 V (Pozar eq. 2.35).
+        var s = TestScenarios.Parse(ReportScenarios.Matched);
+        var grid = Core.Sweeps.SweepGrid.Build(s, [Core.Sweeps.SweepAxis.Parse("load.r=25,50,100,200 ohm")]);
+        var result = Core.Sweeps.SweepRunner.Run(grid, new Core.Sweeps.SweepRunOptions { Serial = true, WaveformColumns = StudyPages.WaveformColumns });
+        var goal = Core.Sweeps.SweepGoal.Parse("min:rx.overshoot", result.Probes);
+        var set = StudyPages.Sweep("matched net: sweep", result, ["overshoot_pct", "settling_s"], goal, []);
+        await using var opened = await session.OpenAsync(VariantPage.Html(set), "sweep.html");
+        var page = opened.Page;
+        Assert.Equal(2, await Js<int>(page, "wavesimPage.charts.length"));
+        int best = set.Best!.Value;
+        Assert.Equal(best, await Js<int>(page, "wavesimPage.selected"));
+        // A click on the point of 100 ohm (index 2) of the first chart (inside the plot; the last point sits on its edge).
+        await page.EvaluateExpressionAsync("wavesimPage.charts[0].over.scrollIntoView({ block: 'center' })");
+        double[] box = await Js<double[]>(page, "(() => { const u = wavesimPage.charts[0], r = u.over.getBoundingClientRect(); return [r.left, r.top, u.valToPos(u.data[0][2], 'x'), r.height]; })()");
+        await page.Mouse.MoveAsync((decimal)(box[0] + box[2]), (decimal)(box[1] + box[3] / 2));
+        await page.Mouse.DownAsync();
+        await page.Mouse.UpAsync();
+        Assert.Equal(2, await Js<int>(page, "wavesimPage.selected"));
+        double[] shown = await Js<double[]>(page, "Array.from(wavesimPage.wave.data[2])");
+        var expected = result.Points[2].Waveforms!.Volts[1];
+        Assert.Equal(expected.Length, shown.Length);
+        for (int i = 0; i < shown.Length; i++) Assert.Equal(expected[i], shown[i], 1e-5);
+        // The load of 100 ohm on the matched 50 ohm line and driver: launch 0.5 V, Γ = (100 − 50)/(100 + 50) = 1/3 (Pozar
+        // eq. 2.35), so the load settles at 0.5 × (1 + 1/3) = 2/3 V once the reflection is absorbed at the matched source.
+        Assert.Equal(2.0 / 3, shown[^1], 2e-3);
+        Assert.Contains("load.r = 100 Ω", await Js<string>(page, "document.getElementById('variant-title').textContent"));
+        opened.AssertClean();
+
+        var study = Core.Terminations.TerminationStudy.Run(TestScenarios.Parse(ReportScenarios.Ringing), new Core.Terminations.TerminationOptions { Serial = true });
+        await using var terms = await session.OpenAsync(VariantPage.Html(StudyPages.Terminations("ringing net: terminations", study)), "terminations.html");
+        Assert.Equal(4, await Js<int>(terms.Page, "wavesimPage.charts.length"));
+        terms.AssertClean();
+    }
 }

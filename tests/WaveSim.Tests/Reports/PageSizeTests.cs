@@ -1,6 +1,7 @@
 using System.Text;
 using System.Text.RegularExpressions;
 using WaveSim.Core;
+using WaveSim.Core.Rendering;
 using WaveSim.Core.Reports;
 
 namespace WaveSim.Tests.Reports;

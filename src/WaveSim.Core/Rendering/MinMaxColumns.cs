@@ -1,4 +1,4 @@
-namespace WaveSim.Core.Reports;
+namespace WaveSim.Core.Rendering;
 
 /// <summary>
 /// Thins sampled waveforms for drawing: the record is cut into columns of equal time (one per pixel column) and each keeps
