@@ -225,7 +225,7 @@
       scales: { x: { time: false } },
       legend: { show: false },
       axes: [
-        { values: function (u, vals) { return vals.map(function (v) { return eng(v, "s", 3); }); }, label: "time", size: 44 },
+        { values: function (u, vals) { return vals.map(function (v) { return eng(v, "s", 3); }); }, label: "time", size: 44, space: 70 },
         { values: function (u, vals) { return vals.map(function (v) { return eng(v, unit, 3); }); }, label: kind === "a" ? "current" : "voltage", size: 74 },
       ],
       series: [{ label: "time" }].concat(probes.map(function (p, i) {
@@ -314,7 +314,7 @@
       scales: { x: { time: false }, y: { range: [lo - pad, hi + pad] } },
       legend: { show: false },
       axes: [
-        { values: function (u, vals) { return vals.map(function (v) { return eng(v, "m", 3); }); }, label: "position along the line", size: 44 },
+        { values: function (u, vals) { return vals.map(function (v) { return eng(v, "m", 3); }); }, label: "position along the line", size: 44, space: 70 },
         { values: function (u, vals) { return vals.map(function (v) { return eng(v, "V", 3); }); }, label: "voltage", size: 74 },
       ],
       series: [{ label: "z" }, { label: "V(z)", stroke: "#1f5fbf", width: 2, points: { show: false } }],
