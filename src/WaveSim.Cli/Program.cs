@@ -20,6 +20,7 @@ public static class Program
             FitCommand.Create(),
             TdrCommand.Create(),
             ReportCommand.Create(),
+            OverlayCommand.Create(),
             XSectionCommand.Create(),
             BuffersCommand.Create(),
             BenchCommand.Create(),

@@ -1,5 +1,6 @@
 using System.CommandLine;
 using System.Text.Json.Nodes;
+using WaveSim.Cli.Parsing;
 using WaveSim.Core;
 using WaveSim.Core.Output;
 using WaveSim.Core.Reports;
@@ -23,8 +24,11 @@ public static class ReportCommand
         var force = CommonOptions.Force();
         var terminations = new Option<bool>("--terminations") { Description = "Add the termination comparison (runs every strategy)" };
         var settle = CommonOptions.SettleBand();
+        var window = StructuredOption.Window("--window", "Time span first shown by the page and drawn in its static picture: START..STOP or all; default as run's waveforms.png");
+        var plot = StructuredOption.CommaList("--plot", "Probes first shown by the page and drawn in its static picture, comma-separated; default: every probe", "probe names", helpName: "PROBES");
+        var currents = new Option<bool>("--currents") { Description = "Show the current chart when the page opens and add currents to its static picture" };
         var cmd = new Command("report", "Simulate a scenario and write one self-contained HTML report (report.html)")
-        { scenario, outDir, json, force, terminations, settle };
+        { scenario, outDir, json, force, terminations, settle, window, plot, currents };
         cmd.SetAction((pr, ct) => CommandGuard.RunAsync(pr.InvocationConfiguration.Error, () =>
         {
             string path = pr.GetValue(scenario)!;
@@ -34,6 +38,7 @@ public static class ReportCommand
             var s = document.Scenario;
             string text = document.Text;
             var options = HtmlReport.RunOptions(band, pr.GetValue(force)) with { Plan = plan };
+            var pictures = RunCommand.PictureOptions(s, pr.GetValue(window), pr.GetResult(plot) is null ? null : pr.GetValue(plot), pr.GetValue(currents));
             string dir = CommonOptions.OutputDir(pr.GetValue(outDir), path);
             using var output = new OutputFolder(dir, "report"); // held from before the work starts, so a second run into it is refused at once
             RunOutcome run;
@@ -43,7 +48,7 @@ public static class ReportCommand
             if (pr.GetValue(terminations))
                 using (var bar = new ProgressBar(pr.InvocationConfiguration.Error, "terminations"))
                     study = TerminationStudy.Run(s, new TerminationOptions { SettleBand = band, Force = pr.GetValue(force) }, bar, ct);
-            var report = HtmlReport.Build(ReportInput.For(run, text, study));
+            var report = HtmlReport.Build(ReportInput.For(run, text, study) with { Waveforms = pictures });
             output.WriteText(FileName, report.Html);
             output.Commit();
             string file = Path.Combine(Path.GetFullPath(dir), FileName);

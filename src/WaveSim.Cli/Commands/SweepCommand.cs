@@ -4,6 +4,7 @@ using WaveSim.Cli.Parsing;
 using WaveSim.Core;
 using WaveSim.Core.Output;
 using WaveSim.Core.Rendering;
+using WaveSim.Core.Reports;
 using WaveSim.Core.Sweeps;
 using WaveSim.Core.Units;
 
@@ -29,8 +30,9 @@ public static class SweepCommand
         var outDir = CommonOptions.Out();
         var json = CommonOptions.Json();
         var force = CommonOptions.Force();
+        var html = new Option<bool>("--html") { Description = "Also write sweep.html: a chart per figure, the best point and limits marked; a click shows a point's waveforms" };
         var cmd = new Command("sweep", "Run a grid of scenario variants and tabulate the signal figures")
-        { scenario, vary, figure, goal, limit, serial, settle, outDir, json, force };
+        { scenario, vary, figure, goal, limit, serial, settle, outDir, json, force, html };
         cmd.SetAction((pr, ct) => CommandGuard.RunAsync(pr.InvocationConfiguration.Error, () =>
         {
             string path = pr.GetValue(scenario)!;
@@ -49,7 +51,11 @@ public static class SweepCommand
 
             SweepResult result;
             using (var bar = new ProgressBar(pr.InvocationConfiguration.Error, $"sweep of {grid.Points.Count} points"))
-                result = SweepRunner.Run(grid, new SweepRunOptions { Serial = pr.GetValue(serial), SettleBand = band, Force = pr.GetValue(force), Progress = bar }, ct);
+                result = SweepRunner.Run(grid, new SweepRunOptions
+                {
+                    Serial = pr.GetValue(serial), SettleBand = band, Force = pr.GetValue(force), Progress = bar,
+                    WaveformColumns = pr.GetValue(html) ? StudyPages.ColumnsFor(grid.Points.Count, grid.Probes.Count) : 0,
+                }, ct);
 
             var best = g is null ? null : result.Best(g, limits);
             var charted = new List<string>();
@@ -64,6 +70,11 @@ public static class SweepCommand
                 var size = PictureSizes.Sweep(chart.Panels.Count);
                 output.Write(file, XyChart.RenderPng(chart, size.Width, size.Height));
                 charted.Add(file);
+            }
+            if (pr.GetValue(html))
+            {
+                output.WriteText("sweep.html", VariantPage.Html(StudyPages.Sweep($"{s.Title}: sweep", result, figures, g, limits)));
+                charted.Add("sweep.html");
             }
             output.Commit();
             var o = pr.InvocationConfiguration.Output;

@@ -5,6 +5,7 @@ using WaveSim.Core;
 using WaveSim.Core.Analysis;
 using WaveSim.Core.Output;
 using WaveSim.Core.Rendering;
+using WaveSim.Core.Reports;
 using WaveSim.Core.Terminations;
 using WaveSim.Core.Units;
 
@@ -26,8 +27,9 @@ public static class TerminationsCommand
         var level = QuantityOption.Optional("--thevenin-level", Dimension.Voltage, "Thevenin termination level (default: halfway between the source's low and high)", helpName: "VOLTS");
         var settle = CommonOptions.SettleBand();
         var serial = new Option<bool>("--serial") { Description = "Run the strategies one at a time" };
+        var html = new Option<bool>("--html") { Description = "Also write terminations.html: a chart per figure over the strategies with the limits marked; a click shows a strategy's waveforms" };
         var cmd = new Command("terminations", "Compare termination strategies on the scenario's net and recommend part values")
-        { scenario, outDir, json, series, maxOvershoot, maxSettling, level, settle, serial, force };
+        { scenario, outDir, json, series, maxOvershoot, maxSettling, level, settle, serial, force, html };
         cmd.SetAction((pr, ct) => CommandGuard.RunAsync(pr.InvocationConfiguration.Error, () =>
         {
             string path = pr.GetValue(scenario)!;
@@ -49,10 +51,11 @@ public static class TerminationsCommand
                 result = LibraryErrors.Naming(() => TerminationStudy.Run(s, options, bar, ct), (nameof(TerminationOptions.TheveninLevelV), "--thevenin-level"));
             output.WriteText("terminations.csv", w => TerminationsCsv.Write(result, w));
             output.Write("terminations.png", XyChart.RenderPng(TerminationPictures.Receiver(result), PictureSizes.Terminations.Width, PictureSizes.Terminations.Height));
+            if (pr.GetValue(html)) output.WriteText("terminations.html", VariantPage.Html(StudyPages.Terminations($"{s.Title}: terminations", result)));
             output.Commit();
             var o = pr.InvocationConfiguration.Output;
             if (pr.GetValue(json)) o.WriteLine(RunSummary.Text(TerminationReport.Json(result, dir)));
-            else Print(o, result, dir);
+            else Print(o, result, dir, pr.GetValue(html));
             return ExitCodes.Ok;
         }));
         return cmd;
@@ -67,7 +70,7 @@ public static class TerminationsCommand
         return pct;
     }
 
-    static void Print(TextWriter o, TerminationStudyResult r, string dir)
+    static void Print(TextWriter o, TerminationStudyResult r, string dir, bool html)
     {
         o.WriteLine($"Z0 {Quantity.Format(r.Z0, "Ω", 3)} (first segment), line delay {Quantity.Format(r.LineDelayS, "s", 3)}, receiver '{r.ReceiverProbe}'; limits: overshoot {r.Options.MaxOvershootPct:G3} %, settling {Quantity.Format(r.Options.MaxSettlingS, "s", 3)}");
         bool eyes = r.Outcomes.Any(x => x.ReceiverEye is not null);
@@ -102,7 +105,7 @@ public static class TerminationsCommand
                 parts += $"; level asked {Quantity.Format(x.Design.TargetTheveninV, "V", 3)}, the {r.Options.Series} pair gives {Quantity.Format(level, "V", 3)}";
             o.WriteLine($"  {x.Design.Name,-9} {parts}");
         }
-        o.WriteLine($"wrote {Path.Combine(dir, "terminations.csv")}, terminations.png");
+        o.WriteLine($"wrote {Path.Combine(dir, "terminations.csv")}, terminations.png" + (html ? ", terminations.html" : ""));
     }
 
     static string T(double? t) => t is { } x ? Quantity.Format(x, "s", 3) : "-";

@@ -20,22 +20,8 @@ public sealed record HtmlReportResult(string Html, IReadOnlyList<ReceiverCheck> 
 /// </summary>
 public static class HtmlReport
 {
-    const string Style = """
-        body { background: #fff; color: #111; font-family: system-ui, -apple-system, "Segoe UI", Roboto, "Noto Sans", "DejaVu Sans", sans-serif; margin: 2em auto; max-width: 1150px; padding: 0 1em; line-height: 1.4; }
-        h1 { font-size: 1.6em; margin-bottom: 0.2em; }
-        h2 { font-size: 1.2em; margin-top: 1.8em; border-bottom: 1px solid #bbb; padding-bottom: 0.2em; }
-        table { border-collapse: collapse; margin: 0.6em 0; font-size: 0.9em; }
-        th, td { border: 1px solid #999; padding: 0.25em 0.5em; text-align: right; }
-        td { white-space: nowrap; }
-        .wide { overflow-x: auto; }
-        th { background: #f2f2f2; }
-        td:first-child, th:first-child { text-align: left; }
-        td.pass { background: #e3f1e3; }
-        td.fail { background: #f7dddd; font-weight: bold; }
-        pre { background: #f7f7f7; border: 1px solid #ccc; padding: 0.6em; overflow-x: auto; font-size: 0.85em; }
-        img { max-width: 100%; height: auto; border: 1px solid #ddd; display: block; margin: 0.6em 0; }
-        .note { color: #444; font-size: 0.9em; }
-        """;
+    /// <summary>The largest page the report writes with the full record; above it the zoom draws the thinned record.</summary>
+    public const long MaxPageBytes = 10_000_000;
 
     /// <summary>
     /// The options a run needs for its report: the full analysis with receivers judged at the default limits and
@@ -47,50 +33,47 @@ public static class HtmlReport
         Analysis = new AnalysisOptions { SettleBand = settleBand, Limits = new VerdictLimits { SettleBand = settleBand } },
     };
 
-    /// <summary>Builds the page. The run must hold snapshots (simulate with <see cref="RunOptions"/>); without them the space-time map is left out with a note.</summary>
+    /// <summary>Builds the page. The run must hold snapshots (simulate with <see cref="RunOptions"/>); without them the frames and space-time map are left out with a note.</summary>
     public static HtmlReportResult Build(ReportInput input)
     {
         ArgumentNullException.ThrowIfNull(input);
         var r = input.Result;
         var s = r.Scenario;
         var checks = ReceiverCheck.Of(input.Outcome);
+        var n = new ReportNumbers(r.Plan.Dt);
         var w = new HtmlWriter();
-        w.Line("<!DOCTYPE html>").Line("<html lang=\"en\">").Line("<head>").Line("<meta charset=\"utf-8\" />")
-         .Line("<meta name=\"viewport\" content=\"width=device-width, initial-scale=1\" />");
-        w.El("title", $"{s.Title} - WaveSim report");
-        w.Raw("<style>\n").Raw(Style).Raw("\n</style>\n").Line("</head>").Line("<body>");
+        PageShell.Head(w, $"{s.Title} - WaveSim report");
         w.El("h1", s.Title);
         w.El("p", $"WaveSim report. Simulated {Quantity.Format(s.Simulation.Duration, "s", 4)} in {r.Plan.Steps} steps; scenario file {Path.GetFileName(s.FilePath ?? "")}.", ("class", "note"));
 
         w.El("h2", "Scenario");
         w.El("pre", input.ScenarioText, ("id", "scenario"));
 
-        Plan(w, r);
+        Plan(w, r, n);
         BufferSection.Write(w, s);
-        Figures(w, input, checks);
+        Figures(w, input, checks, n);
 
-        w.El("h2", "Waveforms");
-        // The same default window as run's waveforms.png: a long clock or bit stream shows its start-up and first edges.
-        var picture = RunPictures.Waveforms(input.Outcome, new WaveformOptions());
-        if (picture.Limited)
-            w.El("p", $"The picture shows {picture.Shown.Describe()}: the start-up and the first {picture.EdgesShown} of " +
-                $"{picture.SourceEdges} source edges. The figures and verdicts cover the whole record.", ("class", "note"), ("id", "waveform-window"));
+        // The same window and probes as run's waveforms.png: a long clock or bit stream shows its start-up and first edges.
+        var picture = RunPictures.Waveforms(input.Outcome, input.Waveforms);
+        PageShell.Waveforms(w, picture);
+        w.Raw("<details>\n<summary>Static picture (as waveforms.png)</summary>\n");
         w.Image("waveforms", XyChart.RenderPng(picture.Chart, ReportImages.WaveformWidth, ReportImages.WaveformHeight),
             ReportImages.WaveformWidth, ReportImages.WaveformHeight, "Probe voltages against time");
-        w.El("h2", "Space-time map");
-        w.El("p", "Voltage along the main line (across) against time (down).", ("class", "note"));
-        if (r.Snapshots.Count < 2) w.El("p", "No snapshots were recorded in this run, so there is no space-time map.");
-        else w.Image("spacetime", RunPictures.SpaceTime(r, ReportImages.SpaceTimeWidth, ReportImages.SpaceTimeHeight),
-            ReportImages.SpaceTimeWidth, ReportImages.SpaceTimeHeight, "Voltage along the line against time");
+        w.Raw("</details>\n");
+        if (r.Snapshots.Count < 2) w.El("p", "No snapshots were recorded in this run, so there are no frames and no space-time map.", ("class", "note"));
+        else PageShell.FramesAndMap(w);
 
         if (input.Eyes.Count > 0) Eyes(w, s.Title, input.Eyes);
-        if (input.Terminations is { } t) TerminationSection(w, t);
+        if (input.Terminations is { } t) TerminationSection(w, t, n);
         Limits(w);
+        long rest = w.Length + PageShell.ScriptBytes;
+        string json = PageData.Json(input.Outcome, picture, input.Waveforms.Probes, MaxPageBytes - rest, input.Waveforms.Currents);
+        PageShell.Scripts(w, json);
         w.Line("</body>").Line("</html>");
         return new HtmlReportResult(w.ToString(), checks);
     }
 
-    static void Plan(HtmlWriter w, SimulationResult r)
+    static void Plan(HtmlWriter w, SimulationResult r, ReportNumbers n)
     {
         var p = r.Plan;
         w.El("h2", "Plan");
@@ -99,12 +82,12 @@ public static class HtmlReport
         w.Row([("stability limit of the step", null), (Quantity.Format(p.DtLimit, "s", 4), null)]);
         w.Row([("steps", null), (p.Steps.ToString(CultureInfo.InvariantCulture), null)]);
         w.Row([("cells", null), (p.TotalCells.ToString(CultureInfo.InvariantCulture), null)]);
-        w.Row([("cell updates", null), (p.CellUpdates.ToString("G3", CultureInfo.InvariantCulture), null)]);
+        w.Row([("cell updates", null), (p.CellUpdates.ToString("N0", CultureInfo.InvariantCulture), null)]);
         w.Raw("</table>\n");
         w.Raw("<table id=\"segments\">\n").HeaderRow(["segment", "length", "Z0", "delay", "cells", "Courant number"]);
         foreach (var sp in p.Segments)
             w.Row([(sp.Where, null), (Quantity.Format(sp.Segment.Length, "m", 4), null), (Quantity.Format(sp.Segment.Z0, "Ω", 4), null),
-                (Quantity.Format(sp.Segment.Delay, "s", 4), null), (sp.Cells.ToString(CultureInfo.InvariantCulture), null),
+                (n.S(sp.Segment.Delay), null), (sp.Cells.ToString(CultureInfo.InvariantCulture), null),
                 (sp.Courant.ToString("F3", CultureInfo.InvariantCulture), null)]);
         w.Raw("</table>\n");
         var problems = PlanAdvisor.Problems(r.Scenario, p);
@@ -118,7 +101,7 @@ public static class HtmlReport
         }
     }
 
-    static void Figures(HtmlWriter w, ReportInput input, IReadOnlyList<ReceiverCheck> checks)
+    static void Figures(HtmlWriter w, ReportInput input, IReadOnlyList<ReceiverCheck> checks, ReportNumbers n)
     {
         bool bits = input.Eyes.Count > 0;
         w.El("h2", "Signal quality");
@@ -127,7 +110,8 @@ public static class HtmlReport
             "delay 50 %", "settling", "first-edge crossings", "noise margin high", "noise margin low" };
         if (bits) head.AddRange(["eye height vs thresholds", "eye width vs thresholds"]);
         head.Add("verdict");
-        w.Raw("<div class=\"wide\">\n<table id=\"figures\">\n").HeaderRow(head);
+        var rules = new CellRules(input.Limits);
+        w.Raw("<div class=\"table-box\" id=\"figures-box\">\n<table id=\"figures\">\n").HeaderRow(head);
         for (int i = 0; i < input.Figures.Count; i++)
         {
             var (p, f) = input.Figures[i];
@@ -135,22 +119,26 @@ public static class HtmlReport
             // Judged: the first edge's crossings of the band with any level failure beside them; else the record's 50 % crossings.
             string crossings = c.Verdict.Judged && c.Verdict.Edges.Count > 0
                 ? c.Verdict.FirstEdgeCrossingsText() : f.ThresholdCrossings.ToString(CultureInfo.InvariantCulture);
-            var cells = new List<(string, string?)>
+            string? Judged(string rule) => c.Thresholds is null ? CellRules.NotJudged : rule;
+            var cells = new List<(string, string?, string?)>
             {
-                (p.Name, null), (p.Location, null), (V(p.FigureVolts[^1]), null), (V(p.FigureVolts.Min()), null), (V(p.FigureVolts.Max()), null),
-                (Pct(f.OvershootPct), Cls(c.OvershootOk)), (Pct(f.UndershootPct), null), (V(f.AboveHighV), null), (V(f.BelowLowV), null),
-                (V(f.RingbackV), Cls(c.RingbackOk)), (T(f.Rise1090S), null), (T(f.Fall9010S), null),
-                (T(f.Delay50S), null), (Settling(f), Cls(c.SettlingOk)), (crossings, Cls(c.CrossingsOk)),
+                (p.Name, null, null), (p.Location, null, null), (V(p.FigureVolts[^1]), null, null), (V(p.FigureVolts.Min()), null, null),
+                (V(p.FigureVolts.Max()), null, null),
+                (Pct(f.OvershootPct), Cls(c.OvershootOk), Judged(rules.Overshoot)), (Pct(f.UndershootPct), null, null), (V(f.AboveHighV), null, null),
+                (V(f.BelowLowV), null, null), (V(f.RingbackV), Cls(c.RingbackOk), Judged(CellRules.Ringback)), (n.S(f.Rise1090S), null, null),
+                (n.S(f.Fall9010S), null, null), (n.S(f.Delay50S), null, null), (Settling(f, n), Cls(c.SettlingOk), Judged(rules.Settling)),
+                (crossings, Cls(c.CrossingsOk), Judged(CellRules.Crossings)),
                 // A bit stream has no single settled level: its margins are in the eye columns.
-                (bits ? "-" : V(f.NoiseMarginHighV), Cls(c.MarginHighOk)), (bits ? "-" : V(f.NoiseMarginLowV), Cls(c.MarginLowOk)),
+                (bits ? "-" : V(f.NoiseMarginHighV), Cls(c.MarginHighOk), Judged(CellRules.MarginHigh)),
+                (bits ? "-" : V(f.NoiseMarginLowV), Cls(c.MarginLowOk), Judged(CellRules.MarginLow)),
             };
             if (bits)
             {
                 var ef = input.Eyes.FirstOrDefault(x => x.Probe.Name == p.Name)?.Diagram?.Figures;
-                cells.Add((V(ef?.EyeHeightThresholdsV), Cls(c.EyeOk)));
-                cells.Add((T(ef?.EyeWidthThresholdsS), Cls(c.EyeOk)));
+                cells.Add((V(ef?.EyeHeightThresholdsV), Cls(c.EyeOk), Judged(CellRules.Eye)));
+                cells.Add((n.S(ef?.EyeWidthThresholdsS), Cls(c.EyeOk), Judged(CellRules.Eye)));
             }
-            cells.Add((c.Pass switch { true => "pass", false => "fail", null => "not judged" }, Cls(c.Pass)));
+            cells.Add((c.Pass switch { true => "pass", false => "fail", null => "not judged" }, Cls(c.Pass), Judged(CellRules.Verdict)));
             w.Row(cells);
         }
         w.Raw("</table>\n</div>\n");
@@ -190,24 +178,24 @@ public static class HtmlReport
 
     static byte[]? EyePng(string title, ProbeEye e) => EyePicture.RenderPng(title, e, ReportImages.EyeWidth, ReportImages.EyeHeight);
 
-    static void TerminationSection(HtmlWriter w, TerminationStudyResult t)
+    static void TerminationSection(HtmlWriter w, TerminationStudyResult t, ReportNumbers n)
     {
         w.El("h2", "Terminations");
         w.El("p", $"Z0 {Quantity.Format(t.Z0, "Ω", 3)} (first segment), line delay {Quantity.Format(t.LineDelayS, "s", 3)}, receiver '{t.ReceiverProbe}'; " +
             $"limits: overshoot {t.Options.MaxOvershootPct.ToString("G3", CultureInfo.InvariantCulture)} %, settling {Quantity.Format(t.Options.MaxSettlingS, "s", 3)}; " +
             $"parts simulated with {t.Options.Series} values; power avg is the mean over the record of the simulated v·i in the termination's resistors.");
-        w.Raw("<table id=\"terminations\">\n").HeaderRow(["strategy", "change to the net as drawn", "parts", "overshoot", "undershoot", "settling", "first-edge crossings", "delay 50 %", "power avg", "verdict"]);
+        w.Raw("<div class=\"table-box\">\n<table id=\"terminations\">\n").HeaderRow(["strategy", "change to the net as drawn", "parts", "overshoot", "undershoot", "settling", "first-edge crossings", "delay 50 %", "power avg", "verdict"]);
         foreach (var o in t.Outcomes)
         {
             string parts = o.Design.Parts.Count == 0 ? "-" : string.Join("; ", o.Design.Parts.Select(p => $"{p.Label} {Quantity.Format(p.Used, p.Unit, 3)}"));
             var f = o.Receiver;
             string change = o.Design.Kind == TerminationKind.AsDrawn ? o.Design.Note ?? "none: the scenario unchanged" : o.Result is null ? "-" : o.Design.Note ?? "-";
-            w.Row([(o.Design.Name, null), (change, null), (parts, null), (Pct(f?.OvershootPct), null), (Pct(f?.UndershootPct), null), (f is null ? "-" : Settling(f), null),
-                (o.VerdictAt(t.ReceiverProbe)?.FirstEdgeCrossingsText() ?? "-", null), (T(f?.Delay50S), null),
+            w.Row([(o.Design.Name, null), (change, null), (parts, null), (Pct(f?.OvershootPct), null), (Pct(f?.UndershootPct), null), (f is null ? "-" : Settling(f, n), null),
+                (o.VerdictAt(t.ReceiverProbe)?.FirstEdgeCrossingsText() ?? "-", null), (n.S(f?.Delay50S), null),
                 (o.PowerAverageW is { } pw ? Quantity.Format(pw, "W", 3) : "-", null),
                 (o.Result is null ? "n/a: " + o.Design.Note : o.Verdict, o.Result is null ? null : Cls(o.MeetsLimits))]);
         }
-        w.Raw("</table>\n");
+        w.Raw("</table>\n</div>\n");
         w.Image("terminations-overlay", XyChart.RenderPng(TerminationPictures.Receiver(t), ReportImages.TerminationsWidth, ReportImages.TerminationsHeight),
             ReportImages.TerminationsWidth, ReportImages.TerminationsHeight, "Receiver voltage for every termination strategy");
     }
@@ -229,9 +217,7 @@ public static class HtmlReport
     }
 
     static string? Cls(bool? ok) => ok switch { true => "pass", false => "fail", null => null };
-    static string V(double v) => Quantity.Format(v, "V", 3);
-    static string V(double? v) => v is { } x ? V(x) : "-";
-    static string T(double? t) => t is { } x ? Quantity.Format(x, "s", 3) : "-";
-    static string Settling(SignalFigures f) => f.UnsettledAtNextEdge ? "not settled before next edge" : T(f.SettlingS);
-    static string Pct(double? p) => p is { } x ? x.ToString("F1", CultureInfo.InvariantCulture) + " %" : "-";
+    static string V(double? v) => ReportNumbers.V(v);
+    static string Settling(SignalFigures f, ReportNumbers n) => f.UnsettledAtNextEdge ? "not settled before next edge" : n.S(f.SettlingS);
+    static string Pct(double? p) => ReportNumbers.Pct(p);
 }

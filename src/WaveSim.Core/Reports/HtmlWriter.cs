@@ -46,6 +46,24 @@ internal sealed class HtmlWriter
         return this;
     }
 
+    /// <summary>A table row whose cells may carry a title, shown on hover (the rule that judged the cell).</summary>
+    public HtmlWriter Row(IEnumerable<(string Text, string? Class, string? Title)> cells)
+    {
+        _sb.Append("<tr>");
+        foreach (var (t, c, title) in cells)
+        {
+            _sb.Append("<td");
+            if (c is not null) _sb.Append(" class=\"").Append(Escape(c)).Append('"');
+            if (title is not null) _sb.Append(" title=\"").Append(Escape(title)).Append('"');
+            _sb.Append('>').Append(Escape(t)).Append("</td>");
+        }
+        _sb.Append("</tr>\n");
+        return this;
+    }
+
+    /// <summary>Characters written so far.</summary>
+    public int Length => _sb.Length;
+
     /// <summary>An embedded PNG picture.</summary>
     public HtmlWriter Image(string id, byte[] png, int width, int height, string alt) =>
         Line($"<img id=\"{Escape(id)}\" src=\"{ReportImages.DataUri(png)}\" width=\"{width}\" height=\"{height}\" alt=\"{Escape(alt)}\" />");

@@ -10,6 +10,12 @@ namespace WaveSim.Core.Reports;
 /// <param name="Terminations">The termination comparison, or null to leave that section out.</param>
 public sealed record ReportInput(RunOutcome Outcome, string ScenarioText, TerminationStudyResult? Terminations)
 {
+    /// <summary>
+    /// The window first shown and the probes first drawn, by the page and its static picture alike (the choices of
+    /// <c>run</c>'s waveform picture); currents add the current panel to the static picture.
+    /// </summary>
+    public Pictures.WaveformOptions Waveforms { get; init; } = new();
+
     /// <summary>The simulated run.</summary>
     public SimulationResult Result => Outcome.Result;
 

@@ -6,7 +6,16 @@ namespace WaveSim.Core.Sweeps;
 /// <param name="Index">Position in sweep order.</param>
 /// <param name="Values">The varied keys' SI values, in axis order.</param>
 /// <param name="Figures">Signal figures per probe, in the scenario's probe order.</param>
-public sealed record SweepPointResult(int Index, IReadOnlyList<double> Values, IReadOnlyList<SignalFigures> Figures);
+public sealed record SweepPointResult(int Index, IReadOnlyList<double> Values, IReadOnlyList<SignalFigures> Figures)
+{
+    /// <summary>The point's probe voltages thinned for drawing (<see cref="SweepRunOptions.WaveformColumns"/>), or null when not kept.</summary>
+    public SweepWaveforms? Waveforms { get; init; }
+}
+
+/// <summary>A point's probe voltages thinned to min/max pairs per column (<see cref="Rendering.MinMaxColumns"/>).</summary>
+/// <param name="Time">The kept instants, s.</param>
+/// <param name="Volts">Per probe, in probe order, the voltage at those instants, V.</param>
+public sealed record SweepWaveforms(double[] Time, double[][] Volts);
 
 /// <summary>The outcome of a sweep: every point's figures, in sweep order.</summary>
 /// <param name="Axes">The varied keys.</param>

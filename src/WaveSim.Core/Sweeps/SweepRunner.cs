@@ -15,6 +15,11 @@ public sealed record SweepRunOptions
     public bool Force { get; init; }
     /// <summary>Receives the fraction of points done, 0..1.</summary>
     public IProgress<double>? Progress { get; init; }
+    /// <summary>
+    /// Keep each point's probe voltages thinned to this many columns of min/max pairs (for a page that shows a point's
+    /// waveforms); 0 (the default) keeps none.
+    /// </summary>
+    public int WaveformColumns { get; init; }
 }
 
 /// <summary>Runs every point of a <see cref="SweepGrid"/> through <see cref="Simulate.Run"/> and keeps each probe's signal figures.</summary>
@@ -35,8 +40,15 @@ public static class SweepRunner
         ParallelFor(grid.Points.Count, options.Serial, ct, i =>
         {
             var p = grid.Points[i];
-            var figures = Simulate.Run(p.Scenario, run with { Plan = p.Plan }, ct).Figures.Select(f => f.Figures).ToArray();
-            results[i] = new SweepPointResult(p.Index, p.Values, figures);
+            var outcome = Simulate.Run(p.Scenario, run with { Plan = p.Plan }, ct);
+            var figures = outcome.Figures.Select(f => f.Figures).ToArray();
+            SweepWaveforms? waves = null;
+            if (options.WaveformColumns > 0)
+            {
+                var (t, v) = Rendering.MinMaxColumns.Thin(outcome.Result.Time, outcome.Result.Probes.Select(x => x.Volts).ToArray(), options.WaveformColumns);
+                waves = new SweepWaveforms(t, v);
+            }
+            results[i] = new SweepPointResult(p.Index, p.Values, figures) { Waveforms = waves };
             int n = Interlocked.Increment(ref done);
             if (options.Progress is { } progress) lock (gate) progress.Report((double)n / results.Length);
         });

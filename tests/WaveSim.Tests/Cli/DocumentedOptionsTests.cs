@@ -22,6 +22,7 @@ public partial class DocumentedOptionsTests
         ["fit"] = ["docs/measurements.md"],
         ["tdr"] = ["docs/measurements.md"],
         ["report"] = ["docs/report.md"],
+        ["overlay"] = ["docs/report.md"],
         ["xsection"] = ["docs/xsection.md"],
         ["buffers"] = ["docs/buffers.md"],
         ["bench"] = ["docs/PERFORMANCE.md"],

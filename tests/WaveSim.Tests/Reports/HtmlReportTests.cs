@@ -26,13 +26,13 @@ public class HtmlReportTests
         table.Elements("tr").First().Elements("th").Select(th => th.Value).ToList().IndexOf(header);
 
     [Fact]
-    public void The_page_is_well_formed_and_holds_one_figures_row_per_probe_and_two_decodable_pictures()
+    public void The_page_is_well_formed_and_holds_one_figures_row_per_probe_a_decodable_picture_and_its_inlined_scripts()
     {
         var report = ReportScenarios.Build(ReportScenarios.Matched);
         var doc = Parse(report.Html);
         var rows = DataRows(ById(doc, "figures"));
         Assert.Equal(["drv", "rx"], rows.Select(r => r[0].Value));
-        foreach (var (id, w, h) in new[] { ("waveforms", ReportImages.WaveformWidth, ReportImages.WaveformHeight), ("spacetime", ReportImages.SpaceTimeWidth, ReportImages.SpaceTimeHeight) })
+        foreach (var (id, w, h) in new[] { ("waveforms", ReportImages.WaveformWidth, ReportImages.WaveformHeight) })
         {
             var img = ById(doc, id);
             Assert.Equal("img", img.Name.LocalName);
@@ -44,7 +44,12 @@ public class HtmlReportTests
         }
         // The scenario text is shown verbatim: its markup is escaped, not live.
         Assert.Contains("<script>alert(1)</script>", ById(doc, "scenario").Value);
-        Assert.Empty(doc.Descendants("script"));
+        // The page's own scripts: the data, the vendored chart library and the page's script, all inline.
+        var scripts = doc.Descendants("script").ToList();
+        Assert.Equal(3, scripts.Count);
+        Assert.All(scripts, x => Assert.Null(x.Attribute("src")));
+        Assert.Equal("canvas", ById(doc, "spacetime-map").Name.LocalName);
+        Assert.Equal("input", ById(doc, "scrubber").Name.LocalName);
     }
 
     [Fact]
@@ -52,10 +57,18 @@ public class HtmlReportTests
     {
         string html = ReportScenarios.Build(ReportScenarios.Matched).Html;
         Assert.Contains("https://example.invalid", html);   // inside the escaped scenario text
-        string outside = Regex.Replace(html, "<pre id=\"scenario\">.*?</pre>", "", RegexOptions.Singleline);
+        // The inlined library is the vendored file unchanged (its own comment names its home page); the page's script
+        // opens no connection.
+        Assert.Contains(PageAssets.ChartScript, html);
+        Assert.DoesNotMatch(new Regex(@"fetch\(|XMLHttpRequest|WebSocket|sendBeacon|import\(|EventSource"), PageAssets.ChartScript + PageAssets.PageScript);
+        string outside = Regex.Replace(html.Replace(PageAssets.ChartScript, "", StringComparison.Ordinal).Replace(PageAssets.ChartLicence, "", StringComparison.Ordinal),
+            "<pre id=\"scenario\">.*?</pre>", "", RegexOptions.Singleline);
+        Assert.Equal(3, Regex.Count(outside, @"<script\b"));
+        Assert.DoesNotMatch(new Regex(@"<script[^>]*\bsrc=", RegexOptions.IgnoreCase), outside);
+        outside = Regex.Replace(outside, @"<script\b[^>]*>", "");
         Assert.DoesNotContain("http://", outside, StringComparison.OrdinalIgnoreCase);
         Assert.DoesNotContain("https://", outside, StringComparison.OrdinalIgnoreCase);
-        Assert.DoesNotMatch(new Regex(@"<(script|link)\b|@import|url\(", RegexOptions.IgnoreCase), outside);
+        Assert.DoesNotMatch(new Regex(@"<link\b|@import|url\(", RegexOptions.IgnoreCase), outside);
         Assert.DoesNotMatch(new Regex("src=\"(?!data:image/png;base64,)", RegexOptions.IgnoreCase), outside);
     }
 

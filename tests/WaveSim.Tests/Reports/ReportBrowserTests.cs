@@ -46,7 +46,7 @@ public class ReportBrowserTests(ITestOutputHelper output)
             Assert.True(table.Success, "figures table missing from the DOM dump");
             Assert.Equal(2, Regex.Count(table.Value, "<td>(drv|rx)</td>"));
             Assert.Matches("<img id=\"waveforms\" src=\"data:image/png;base64,", dom);
-            Assert.Matches("<img id=\"spacetime\" src=\"data:image/png;base64,", dom);
+            Assert.Matches("<canvas id=\"spacetime-map\" width=\"\\d+\" height=\"\\d+\"", dom);
 
             using var bitmap = SKBitmap.Decode(shot);
             Assert.NotNull(bitmap);
