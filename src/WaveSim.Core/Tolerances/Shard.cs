@@ -32,7 +32,7 @@ public sealed record Shard(int Number, int Count)
 
     /// <summary>
     /// The shard of a Slurm job-array task: K = SLURM_ARRAY_TASK_ID − SLURM_ARRAY_TASK_MIN + 1 (the array's indices may
-    /// start anywhere, e.g. --array=0-3 or 1-4), N = SLURM_ARRAY_TASK_COUNT. Needs a contiguous array.
+    /// start anywhere, e.g. an array of 0-3 or of 1-4), N = SLURM_ARRAY_TASK_COUNT. Needs a contiguous array.
     /// </summary>
     /// <param name="variable">Reads an environment variable (null when unset).</param>
     /// <exception cref="InputException">A variable is unset or not a whole number, or the task lies outside the count.</exception>
@@ -45,7 +45,7 @@ public sealed record Shard(int Number, int Count)
         int min = variable("SLURM_ARRAY_TASK_MIN") is null ? 0 : Read("SLURM_ARRAY_TASK_MIN");
         int k = id - min + 1;
         if (count < 1 || count > MaxCount || k < 1 || k > count)
-            throw new InputException($"auto: task {id} of an array of {count} starting at {min} is not shard 1 to {count}; use a contiguous array (--array=0-{Math.Max(count - 1, 0)})") { Parameter = "text" };
+            throw new InputException($"auto: task {id} of an array of {count} starting at {min} is not shard 1 to {count}; use a contiguous array (indices 0-{Math.Max(count - 1, 0)})") { Parameter = "text" };
         return new Shard(k, count);
     }
 

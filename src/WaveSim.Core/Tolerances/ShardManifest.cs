@@ -50,7 +50,7 @@ public sealed record ShardManifest(string Kind, string ScenarioPath, string Scen
             return new ShardManifest(S("kind"), S("scenario"), S("scenario_sha256"), settings, new Shard(k, n), I("total"));
         }
         catch (Exception ex) when (ex is System.Text.Json.JsonException or InvalidOperationException or NullReferenceException or FormatException)
-        { throw new InputException($"{name}: not a shard manifest (expected the {FileName} a --shard run writes)"); }
+        { throw new InputException($"{name}: not a shard manifest (expected the {FileName} a sharded run writes)"); }
     }
 
     /// <summary>

@@ -104,14 +104,14 @@ public sealed record ToleranceDistribution(DistributionKind Kind, Dimension Dime
     /// </summary>
     /// <param name="nominal">The scenario's value.</param>
     /// <param name="dimension">The dimension the key takes the value in.</param>
-    /// <param name="positiveOnly">The key must be greater than zero: a uniform tolerance of 100 % or more is refused.</param>
+    /// <param name="sign">The key's sign rule: a uniform tolerance of 100 % or more is refused on a positive key, over 100 % on a non-negative one.</param>
     /// <param name="name">The key, for messages.</param>
-    /// <exception cref="InputException">A tolerance that reaches zero or below on a positive-only key.</exception>
-    public ToleranceDistribution Resolve(double nominal, Dimension dimension, bool positiveOnly, string name)
+    /// <exception cref="InputException">A tolerance whose range crosses the key's sign rule.</exception>
+    public ToleranceDistribution Resolve(double nominal, Dimension dimension, KeySign sign, string name)
     {
         if (ToleranceFraction is not { } t) return this;
-        if (positiveOnly && Kind == DistributionKind.Uniform && t >= 1)
-            throw new InputException($"{name}: a tolerance of {Show(t, Dimension.Percent)} reaches zero or below, but the value must be greater than zero") { Parameter = "keys" };
+        if (Kind == DistributionKind.Uniform && nominal > 0 && ((sign == KeySign.Positive && t >= 1) || (sign == KeySign.NonNegative && t > 1)))
+            throw new InputException($"{name}: a tolerance of {Show(t, Dimension.Percent)} reaches {(t > 1 ? "below zero" : "zero")}, but the value must {(sign == KeySign.Positive ? "be greater than zero" : "not be negative")}") { Parameter = "keys" };
         return Kind == DistributionKind.Uniform
             ? new ToleranceDistribution(Kind, dimension, [Math.Min(nominal * (1 - t), nominal * (1 + t)), Math.Max(nominal * (1 - t), nominal * (1 + t))])
             : new ToleranceDistribution(Kind, dimension, [nominal, Math.Abs(nominal) * t / SigmasPerTolerance]);
@@ -123,6 +123,14 @@ public sealed record ToleranceDistribution(DistributionKind Kind, Dimension Dime
         DistributionKind.Normal => Parameters[0] + Parameters[1] * rng.NextNormal(),
         DistributionKind.Uniform => Parameters[0] + (Parameters[1] - Parameters[0]) * rng.NextUnit(),
         _ => Parameters[Math.Min((int)(rng.NextUnit() * Parameters.Count), Parameters.Count - 1)],
+    };
+
+    /// <summary>The middle of the distribution: a normal's mean, a uniform's midpoint, a choice's first value (the nominal of a key the scenario leaves unset).</summary>
+    public double Centre => Kind switch
+    {
+        DistributionKind.Normal => Parameters[0],
+        DistributionKind.Uniform => (Parameters[0] + Parameters[1]) / 2,
+        _ => Parameters[0],
     };
 
     /// <summary>The corner values: min and max of a uniform, mean ± 3σ of a normal, every value of a choice.</summary>

@@ -31,7 +31,7 @@ public sealed class ToleranceSet
 
     /// <summary>The varied keys with tolerances resolved against the scenario.</summary>
     public IReadOnlyList<ToleranceKey> Keys { get; }
-    /// <summary>The scenario's own (nominal) value of each key, SI.</summary>
+    /// <summary>The scenario's own (nominal) value of each key, SI (the distribution's centre where the scenario has none).</summary>
     public IReadOnlyList<double> Nominal { get; }
     /// <summary>Samples (or corners) of the whole run.</summary>
     public int Total { get; }
@@ -63,11 +63,14 @@ public sealed class ToleranceSet
             {
                 var key = ScenarioValues.KeyAt(scenario, k.KeyPath);
                 var dim = k.Distribution.ToleranceFraction is null ? k.Distribution.Dimension : key.Preferred;
-                double value = ScenarioValues.Read(scenario, k.KeyPath, key.Dimensions.Contains(dim) ? dim : null)
-                    ?? throw new InputException($"{k.KeyPath}: the scenario has no value there to vary");
-                var d = k.Distribution.Resolve(value, dim, key.Sign == KeySign.Positive, k.KeyPath);
+                // A key the scenario leaves unset (a load's c) has the distribution's centre as nominal; a tolerance needs a value.
+                double? read = ScenarioValues.Read(scenario, k.KeyPath, key.Dimensions.Contains(dim) ? dim : null);
+                if (read is null && k.Distribution.ToleranceFraction is not null)
+                    throw new InputException($"{k.KeyPath}: the scenario has no value there for a tolerance to apply to; give the value in the scenario or a distribution such as uniform(MIN..MAX)");
+                var d = k.Distribution.Resolve(read ?? 0, dim, key.Sign, k.KeyPath);
+                double value = read ?? d.Centre;
                 // A value of the wrong unit is reported against the key, before any sample is drawn.
-                ScenarioValues.With(scenario, k.KeyPath, d.Ends()[0], d.Dimension);
+                ScenarioValues.With(scenario, k.KeyPath, d.Centre, d.Dimension);
                 resolved[i] = k with { Distribution = d };
                 nominal[i] = value;
             }
