@@ -32,7 +32,7 @@ public partial class DocumentedOptionsTests
 
     /// <summary>Options of other programs shown in the docs' command lines (dotnet, the shell), not of wavesim.</summary>
     static readonly HashSet<string> OtherPrograms = ["--project", "--filter", "--job", "--no-build", "--configuration",
-        "--tool-path", "--add-source", "--global", "--iterationTime", "--array", "--dependency", "--parsable", "--export", "--chdir", "--wrap"];
+        "--tool-path", "--add-source", "--global", "--iterationTime", "--array", "--dependency", "--parsable", "--export", "--chdir", "--wrap", "--rm"];
 
     static string Text(string page) => File.ReadAllText(Path.Combine(Repository.Root, page));
 
