@@ -15,6 +15,8 @@ public static class Program
             RunCommand.Create(),
             CheckCommand.Create(),
             SweepCommand.Create(),
+            MonteCarloCommand.Create(),
+            MergeCommand.Create(),
             TerminationsCommand.Create(),
             CompareCommand.Create(),
             FitCommand.Create(),

@@ -31,8 +31,9 @@ public static class SweepCommand
         var json = CommonOptions.Json();
         var force = CommonOptions.Force();
         var html = new Option<bool>("--html") { Description = "Also write sweep.html: a chart per figure, the best point and limits marked; a click shows a point's waveforms" };
+        var shard = ShardOption.Create();
         var cmd = new Command("sweep", "Run a grid of scenario variants and tabulate the signal figures")
-        { scenario, vary, figure, goal, limit, serial, settle, outDir, json, force, html };
+        { scenario, vary, figure, goal, limit, serial, settle, outDir, json, force, html, shard };
         cmd.SetAction((pr, ct) => CommandGuard.RunAsync(pr.InvocationConfiguration.Error, () =>
         {
             string path = pr.GetValue(scenario)!;
@@ -46,8 +47,18 @@ public static class SweepCommand
             var limits = (pr.GetValue(limit) ?? []).Select(l => LibraryErrors.Naming(() => SweepLimit.Parse(l, probes), ("text", "--limit"))).ToArray();
             if (limits.Length > 0 && g is null) throw new InputException("--limit: give --goal too (the limits choose among points for the goal)");
             var grid = LibraryErrors.Naming(() => SweepGrid.Build(s, axes, pr.GetValue(force)), ("axes", "--vary"));
-            string dir = CommonOptions.OutputDir(pr.GetValue(outDir), path);
+            var part = pr.GetValue(shard);
+            if (part is not null && pr.GetValue(html))
+                throw new InputException("--html: not with --shard (a shard keeps no waveforms; run the sweep whole for its page)");
+            string dir = MonteCarloCommand.ShardFolder(CommonOptions.OutputDir(pr.GetValue(outDir), path), part);
             using var output = new OutputFolder(dir, "sweep"); // held from before the work starts, so a second run into it is refused at once
+            if (part is not null)
+            {
+                var runOptions = new SweepRunOptions { Serial = pr.GetValue(serial), SettleBand = band, Force = pr.GetValue(force) };
+                SweepShards.RunPartial(output, grid, part, path, Settings(figures, pr.GetValue(goal), pr.GetValue(limit) ?? [], axes, band, pr.GetValue(force)), runOptions, ct);
+                pr.InvocationConfiguration.Output.WriteLine($"shard {part}: {grid.Points.Count(p => part.Contains(p.Index))} of {grid.Points.Count} points; wrote {dir} (combine the shards with wavesim merge)");
+                return ExitCodes.Ok;
+            }
 
             SweepResult result;
             using (var bar = new ProgressBar(pr.InvocationConfiguration.Error, $"sweep of {grid.Points.Count} points"))
@@ -57,20 +68,7 @@ public static class SweepCommand
                     WaveformColumns = pr.GetValue(html) ? StudyPages.ColumnsFor(grid.Points.Count, grid.Probes.Count) : 0,
                 }, ct);
 
-            var best = g is null ? null : result.Best(g, limits);
-            var charted = new List<string>();
-            var leftOut = new List<string>();   // panels (or whole charts) with no data, and why
-            output.WriteText("sweep.csv", w => SweepCsv.Write(result, w));
-            foreach (string f in figures)
-            {
-                var chart = SweepPictures.Chart(result, f, best, g);
-                string file = $"sweep_{FigureSelector.Stem(f)}.png";
-                leftOut.AddRange(SweepPanelGaps.LeftOut(result, f).Select(l => $"{file}: {l}" + (chart.Panels.Count == 0 ? "; no chart written" : "")));
-                if (chart.Panels.Count == 0) continue;
-                var size = PictureSizes.Sweep(chart.Panels.Count);
-                output.Write(file, XyChart.RenderPng(chart, size.Width, size.Height));
-                charted.Add(file);
-            }
+            var (charted, leftOut) = WriteFiles(output, result, figures, g, limits);
             if (pr.GetValue(html))
             {
                 output.WriteText("sweep.html", VariantPage.Html(StudyPages.Sweep($"{s.Title}: sweep", result, figures, g, limits)));
@@ -89,6 +87,38 @@ public static class SweepCommand
         }));
         return cmd;
     }
+
+    /// <summary>Writes sweep.csv and the charts (not committed); returns the charts written and the panels left out. A merge of shards writes through here too.</summary>
+    internal static (List<string> Charted, List<string> LeftOut) WriteFiles(OutputFolder output, SweepResult result, IReadOnlyList<string> figures, SweepGoal? g, IReadOnlyList<SweepLimit> limits)
+    {
+        var best = g is null ? null : result.Best(g, limits);
+        var charted = new List<string>();
+        var leftOut = new List<string>();   // panels (or whole charts) with no data, and why
+        output.WriteText("sweep.csv", w => SweepCsv.Write(result, w));
+        foreach (string f in figures)
+        {
+            var chart = SweepPictures.Chart(result, f, best, g);
+            string file = $"sweep_{FigureSelector.Stem(f)}.png";
+            leftOut.AddRange(SweepPanelGaps.LeftOut(result, f).Select(l => $"{file}: {l}" + (chart.Panels.Count == 0 ? "; no chart written" : "")));
+            if (chart.Panels.Count == 0) continue;
+            var size = PictureSizes.Sweep(chart.Panels.Count);
+            output.Write(file, XyChart.RenderPng(chart, size.Width, size.Height));
+            charted.Add(file);
+        }
+        return (charted, leftOut);
+    }
+
+    /// <summary>The settings a sweep shard's manifest records (everything that shapes the merged files).</summary>
+    static KeyValuePair<string, string>[] Settings(string[] figures, string? goal, string[] limits, IReadOnlyList<SweepAxis> axes, double band, bool force) =>
+    [
+        new("vary", string.Join("\n", axes.Select(a => a.KeyPath + "=" + string.Join(",", a.Values.Select((_, i) => a.Text(i)))))),
+        new("spacing", string.Join(",", axes.Select(a => a.Spacing.ToString()))),
+        new("figure", string.Join(",", figures)),
+        new("goal", goal ?? ""),
+        new("limits", string.Join("\n", limits)),
+        new("settle_band", band.ToString("R", CultureInfo.InvariantCulture)),
+        new("force", force ? "yes" : "no"),
+    ];
 
     /// <summary>Reads "overshoot,settling" into the figures' own names, each once.</summary>
     static string[] Figures(string text)

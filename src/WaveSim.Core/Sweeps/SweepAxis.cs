@@ -18,7 +18,7 @@ public sealed partial record SweepAxis(string KeyPath, Dimension Dimension, IRea
     /// <summary>Largest number of values one axis may hold.</summary>
     public const int MaxCount = 10_000;
 
-    static readonly Dimension[] AllDimensions =
+    internal static readonly Dimension[] AllDimensions =
     [
         Dimension.Number, Dimension.Voltage, Dimension.Current, Dimension.Time, Dimension.Frequency, Dimension.Resistance,
         Dimension.Conductance, Dimension.Capacitance, Dimension.Inductance, Dimension.Length, Dimension.Power,
@@ -112,7 +112,7 @@ public sealed partial record SweepAxis(string KeyPath, Dimension Dimension, IRea
     }
 
     /// <summary>Reads number-with-unit texts; those without a unit take the unit of the last one.</summary>
-    static (double[] Values, Dimension Dim) ReadValues(string text, IReadOnlyList<string> items)
+    internal static (double[] Values, Dimension Dim) ReadValues(string text, IReadOnlyList<string> items)
     {
         var split = new (string Number, string Unit)[items.Count];
         for (int i = 0; i < items.Count; i++)

@@ -29,17 +29,32 @@ public static class SweepRunner
     /// <remarks>Each point is an independent run whose result is stored at its own index, so the order and values do not depend on scheduling.</remarks>
     /// <exception cref="OperationCanceledException">The token was cancelled.</exception>
     /// <exception cref="NumericalException">A point's solution broke down.</exception>
-    public static SweepResult Run(SweepGrid grid, SweepRunOptions? options = null, CancellationToken ct = default)
+    public static SweepResult Run(SweepGrid grid, SweepRunOptions? options = null, CancellationToken ct = default) =>
+        new(grid.Axes, grid.Probes, RunPoints(grid.Points, options, null, ct));
+
+    /// <summary>
+    /// Runs any list of variants (a grid's, a tolerance run's) through <see cref="Simulate.Run"/> with the figures-only
+    /// analysis, in parallel unless <see cref="SweepRunOptions.Serial"/>; result i belongs to point i whatever the scheduling.
+    /// </summary>
+    /// <param name="points">The variants.</param>
+    /// <param name="options">Settings; null for the defaults.</param>
+    /// <param name="completed">Called (one call at a time) with each point's result as it finishes; null for none.</param>
+    /// <param name="ct">Cancels the run.</param>
+    /// <exception cref="OperationCanceledException">The token was cancelled.</exception>
+    /// <exception cref="NumericalException">A point's solution broke down.</exception>
+    public static SweepPointResult[] RunPoints(IReadOnlyList<SweepPoint> points, SweepRunOptions? options = null,
+        Action<SweepPointResult>? completed = null, CancellationToken ct = default)
     {
+        ArgumentNullException.ThrowIfNull(points);
         options ??= new SweepRunOptions();
-        var results = new SweepPointResult[grid.Points.Count];
+        var results = new SweepPointResult[points.Count];
         // A point keeps only its figures: no eyes, verdicts or snapshots.
         var run = new RunOptions { Force = options.Force, Analysis = AnalysisOptions.FiguresOnly(options.SettleBand) };
         int done = 0;
         var gate = new object();
-        ParallelFor(grid.Points.Count, options.Serial, ct, i =>
+        ParallelFor(points.Count, options.Serial, ct, i =>
         {
-            var p = grid.Points[i];
+            var p = points[i];
             var outcome = Simulate.Run(p.Scenario, run with { Plan = p.Plan }, ct);
             var figures = outcome.Figures.Select(f => f.Figures).ToArray();
             SweepWaveforms? waves = null;
@@ -50,9 +65,13 @@ public static class SweepRunner
             }
             results[i] = new SweepPointResult(p.Index, p.Values, figures) { Waveforms = waves };
             int n = Interlocked.Increment(ref done);
-            if (options.Progress is { } progress) lock (gate) progress.Report((double)n / results.Length);
+            lock (gate)
+            {
+                completed?.Invoke(results[i]);
+                options.Progress?.Report((double)n / results.Length);
+            }
         });
-        return new SweepResult(grid.Axes, grid.Probes, results);
+        return results;
     }
 
     /// <summary>Parallel.For over [0, count) on all cores (or one), rethrowing a body's own exception rather than an AggregateException.</summary>

@@ -16,7 +16,9 @@ public partial class DocumentedOptionsTests
     {
         ["run"] = ["docs/run.md"],
         ["check"] = ["docs/run.md"],
-        ["sweep"] = ["docs/sweep.md"],
+        ["sweep"] = ["docs/sweep.md", "docs/montecarlo.md"],
+        ["montecarlo"] = ["docs/montecarlo.md"],
+        ["merge"] = ["docs/montecarlo.md"],
         ["terminations"] = ["docs/terminations.md"],
         ["compare"] = ["docs/measurements.md"],
         ["fit"] = ["docs/measurements.md"],
@@ -31,7 +33,7 @@ public partial class DocumentedOptionsTests
 
     /// <summary>Options of other programs shown in the docs' command lines (dotnet, the shell), not of wavesim.</summary>
     static readonly HashSet<string> OtherPrograms = ["--project", "--filter", "--job", "--no-build", "--configuration",
-        "--tool-path", "--add-source", "--global", "--iterationTime"];
+        "--tool-path", "--add-source", "--global", "--iterationTime", "--array", "--dependency", "--parsable", "--export", "--chdir", "--wrap", "--rm"];
 
     static string Text(string page) => File.ReadAllText(Path.Combine(Repository.Root, page));
 
