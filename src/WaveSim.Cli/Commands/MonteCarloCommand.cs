@@ -93,7 +93,7 @@ public static class MonteCarloCommand
     internal static void Print(TextWriter o, ToleranceResult r, IReadOnlyList<SweepLimit> limits, string dir, IReadOnlyList<string> pictures)
     {
         string what = r.Corners ? "corners (nominal first)" : "samples";
-        o.WriteLine($"{r.Points.Count} {what} over {string.Join(", ", r.Keys.Select(k => k.ToString()))}");
+        o.WriteLine($"{r.Points.Count} {what} over {string.Join(", ", r.Keys.Select(k => k.KeyPath + "=" + k.Distribution.Describe()))}");
         if (limits.Count > 0)
         {
             int passes = r.Points.Count(p => r.Passes(p, limits));

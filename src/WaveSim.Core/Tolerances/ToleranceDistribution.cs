@@ -154,6 +154,19 @@ public sealed record ToleranceDistribution(DistributionKind Kind, Dimension Dime
         };
     }
 
+    /// <summary>The distribution for a person to read: values to 4 significant digits with prefixes ("normal(55 Ω, 1.833 Ω)").</summary>
+    public string Describe()
+    {
+        if (ToleranceFraction is not null) return ToString();
+        string Read(double v) => Dimension == Dimension.Percent ? ScenarioKeys.Format(v, Dimension) : Quantity.Format(v, Dimension.SiUnit.Replace("ohm", "Ω", StringComparison.Ordinal)).TrimEnd();
+        return Kind switch
+        {
+            DistributionKind.Normal => $"normal({Read(Parameters[0])}, {Read(Parameters[1])})",
+            DistributionKind.Uniform => $"uniform({Read(Parameters[0])}..{Read(Parameters[1])})",
+            _ => string.Join(",", Parameters.Select(Read)),
+        };
+    }
+
     static string Show(double v, Dimension d) => ScenarioKeys.Format(v, d);
 
     static InputException Bad(string whole, string why) => new($"'{whole}': {why}") { Parameter = "text" };
