@@ -23,8 +23,10 @@ public static class TolerancePictures
         string unit = FigureSelector.Unit(limit.Target.Figure);
         double bound = limit.Bound;
         var si = values.Select(v => v).ToArray();
-        double lo = Math.Min(si.Min(), bound), hi = Math.Max(si.Max(), bound);
+        // The bins span the samples only; the axis adds the limit and a margin so neither sits on the frame.
+        double lo = si.Min(), hi = si.Max();
         if (!(hi > lo)) { double pad = lo == 0 ? 1e-12 : Math.Abs(lo) * 0.01; lo -= pad; hi += pad; }
+        double shownLo = Math.Min(lo, bound), shownHi = Math.Max(hi, bound), margin = 0.04 * (shownHi - shownLo);
         int bins = Bins(si.Length);
         var counts = new double[bins];
         foreach (double v in si) counts[Math.Min((int)((v - lo) / (hi - lo) * bins), bins - 1)]++;
@@ -40,7 +42,7 @@ public static class TolerancePictures
         var samples = new PlotSeries($"{name} ({si.Length} samples)", [.. x], [.. y]);
         var line = new PlotSeries($"limit {limit}", [bound, bound], [0, counts.Max()]) { Look = TraceLook.Dashed };
         return new ChartSpec($"{name}: distribution over {si.Length} samples", name, unit,
-            [new ChartPanel("Samples", "", [samples, line])]);
+            [new ChartPanel("Samples", "", [samples, line])]) { XRange = new AxisRange(shownLo - margin, shownHi + margin) };
     }
 
     /// <summary>The limit's figure against <paramref name="keyIndex"/>'s values, one ring per sample, the limit as a horizontal line; null when no sample has a value.</summary>
