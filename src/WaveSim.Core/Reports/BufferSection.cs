@@ -11,9 +11,9 @@ internal static class BufferSection
         var buffers = BufferSpec.Of(s).ToList();
         if (buffers.Count == 0) return;
         w.El("h2", "Buffer models");
-        w.Raw("<table id=\"buffers\">\n").HeaderRow(["at", "model", "corner", "file", "summary"]);
+        w.Raw("<div class=\"table-box\">\n<table id=\"buffers\" class=\"wrap\">\n").HeaderRow(["at", "model", "corner", "file", "summary"]);
         foreach (var (at, b, driver) in buffers)
             w.Row([(at, null), (b.Model.Name, null), (b.CornerName, null), (b.File, null), (string.Join("; ", b.Summary(driver).Skip(1)), null)]);
-        w.Raw("</table>\n");
+        w.Raw("</table>\n</div>\n");
     }
 }

@@ -29,6 +29,9 @@ public class ReportNumbersTests
     [InlineData(1.66667, "1.67 V")]
     [InlineData(7.2e-7, "720 nV")]
     [InlineData(0.0, "0 V")]
+    [InlineData(2.18e-13, "0 V")]       // a settled residue, below 1 nV (common practice, no source)
+    [InlineData(-3e-10, "0 V")]
+    [InlineData(1.5e-9, "1.5 nV")]
     public void Voltages_print_with_a_prefix_and_three_digits(double volts, string expected) => Assert.Equal(expected, ReportNumbers.V(volts));
 
     [Theory]
