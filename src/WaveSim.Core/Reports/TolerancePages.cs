@@ -82,5 +82,5 @@ public static class TolerancePages
         return $"{head}: {keys}{verdict}";
     }
 
-    static string DisplayUnit(ToleranceKey k) => Scenarios.ScenarioKeys.Unit(k.Distribution.Dimension) is var u && u == "ohm" ? "\u03a9" : Scenarios.ScenarioKeys.Unit(k.Distribution.Dimension);
+    static string DisplayUnit(ToleranceKey k) => k.Distribution.Dimension.SiUnit == "ohm" ? "\u03a9" : k.Distribution.Dimension.SiUnit;
 }
