@@ -4,6 +4,7 @@ using System.Globalization;
 using WaveSim.Cli.Parsing;
 using WaveSim.Core;
 using WaveSim.Core.Output;
+using WaveSim.Core.Reports;
 using WaveSim.Core.Sweeps;
 using WaveSim.Core.Tolerances;
 
@@ -26,12 +27,13 @@ public static class MonteCarloCommand
         var limit = new Option<string[]>("--limit") { Description = "A bound every sample should meet, e.g. rx.overshoot<10% (repeatable); the yield is the share meeting all", HelpName = "PROBE.FIGURE<VALUE" };
         var corners = new Option<bool>("--corners") { Description = "Instead of sampling, run nominal and every combination of each key's ends (min/max, mean +-3 sigma, every listed value)" };
         var serial = new Option<bool>("--serial") { Description = "Run the samples one at a time on one core (same results)" };
+        var html = new Option<bool>("--html") { Description = "Also write montecarlo.html: per limited figure the samples against its most influential key, the limits and yield shown; a click shows a sample's waveforms" };
         var shard = ShardOption.Create();
         var settle = CommonOptions.SettleBand();
         var outDir = CommonOptions.Out();
         var force = CommonOptions.Force();
         var cmd = new Command("montecarlo", "Run random samples or corners of tolerances: figures, statistics, yield and sensitivity")
-        { scenario, vary, samples, seed, limit, corners, serial, shard, settle, outDir, force };
+        { scenario, vary, samples, seed, limit, corners, serial, shard, settle, outDir, force, html };
         cmd.SetAction((pr, ct) => CommandGuard.RunAsync(pr.InvocationConfiguration.Error, () =>
         {
             string path = pr.GetValue(scenario)!;
@@ -39,6 +41,9 @@ public static class MonteCarloCommand
             var limitTexts = pr.GetValue(limit) ?? [];
             bool isCorners = pr.GetValue(corners);
             var part = pr.GetValue(shard);
+            bool page = pr.GetValue(html);
+            if (part is not null && page)
+                throw new InputException("--html: not with --shard (a shard keeps no waveforms; run the samples whole for their page)");
             var s = CommonOptions.Load(path, pr.InvocationConfiguration.Error);
             var probes = s.Probes.Select(p => p.Name).ToArray();
             var limits = limitTexts.Select(l => LibraryErrors.Naming(() => SweepLimit.Parse(l, probes), ("text", "--limit"))).ToArray();
@@ -53,7 +58,11 @@ public static class MonteCarloCommand
             ToleranceResult result;
             var clock = Stopwatch.StartNew();
             using (var bar = new ProgressBar(pr.InvocationConfiguration.Error, $"{(isCorners ? "corners" : "montecarlo")}: {set.Points.Count} runs"))
-                result = ToleranceRunner.Run(set, limits, new SweepRunOptions { Serial = pr.GetValue(serial), SettleBand = pr.GetValue(settle), Force = pr.GetValue(force) },
+                result = ToleranceRunner.Run(set, limits, new SweepRunOptions
+                {
+                    Serial = pr.GetValue(serial), SettleBand = pr.GetValue(settle), Force = pr.GetValue(force),
+                    WaveformColumns = page ? StudyPages.ColumnsFor(set.Points.Count, probes.Length) : 0,
+                },
                     new Progress(bar, clock, limits.Length > 0), ct);
 
             var o = pr.InvocationConfiguration.Output;
@@ -66,7 +75,12 @@ public static class MonteCarloCommand
                 o.WriteLine($"shard {part}: {result.Points.Count} of {set.Total} {(isCorners ? "corners" : "samples")}; wrote {dir} (combine the shards with wavesim merge)");
                 return ExitCodes.Ok;
             }
-            var pictures = MonteCarloFiles.Write(output, result, limits, isCorners ? null : options.Seed);
+            var pictures = MonteCarloFiles.Write(output, result, limits, isCorners ? null : options.Seed).ToList();
+            if (page)
+            {
+                output.WriteText("montecarlo.html", VariantPage.Html(TolerancePages.Set($"{s.Title}: {(isCorners ? "corners" : "Monte Carlo")}", result, limits)));
+                pictures.Add("montecarlo.html");
+            }
             output.Commit();
             Print(o, result, limits, dir, pictures);
             return ExitCodes.Ok;

@@ -18,6 +18,7 @@ public static class VariantPage
         PageShell.Head(w, $"{set.Title} - WaveSim");
         w.El("h1", set.Title);
         if (set.Note is { } note) w.El("p", note, ("class", "note"));
+        if (set.Outcome is { } outcome) w.El("p", outcome, ("id", "outcome"));
         if (set.Best is { } b) w.El("p", $"Best: {set.Variants[b].Label}" + (set.BestNote is { } why ? $" ({why})" : "") + ", marked on every chart.", ("id", "best"));
         w.El("p", "Click a point on any chart to show that variant's waveforms below.", ("class", "note"));
         w.Raw("<div id=\"figure-charts\"></div>\n");
@@ -47,7 +48,12 @@ public static class VariantPage
             if (f > 0) sb.Append(',');
             sb.Append("{\"name\":").Append(JsonSerializer.Serialize(fig.Name, o)).Append(",\"unit\":").Append(JsonSerializer.Serialize(fig.Unit, o))
               .Append(",\"values\":[").AppendJoin(',', fig.Values.Select(v => "[" + string.Join(',', v.Select(x => x is { } y ? G(y) : "null")) + "]")).Append(']')
-              .Append(",\"limits\":[").AppendJoin(',', fig.Limits.Select(l => $"{{\"label\":{JsonSerializer.Serialize(l.Label, o)},\"value\":{G(l.Value)}}}")).Append("]}");
+              .Append(",\"pointsOnly\":").Append(fig.PointsOnly ? "true" : "false")
+              .Append(",\"note\":").Append(JsonSerializer.Serialize(fig.Note, o));
+            if (fig.Axis is { } axis)
+                sb.Append(",\"axis\":{\"label\":").Append(JsonSerializer.Serialize(axis.Label, o)).Append(",\"unit\":").Append(JsonSerializer.Serialize(axis.Unit, o))
+                  .Append(",\"values\":[").AppendJoin(',', axis.Values.Select(x => G(x, "G9"))).Append("]}");
+            sb.Append(",\"limits\":[").AppendJoin(',', fig.Limits.Select(l => $"{{\"label\":{JsonSerializer.Serialize(l.Label, o)},\"value\":{G(l.Value)}}}")).Append("]}");
         }
         sb.Append("],\"waves\":[");
         for (int i = 0; i < set.Variants.Count; i++)

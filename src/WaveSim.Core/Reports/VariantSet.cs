@@ -12,11 +12,30 @@ public sealed record Variant(string Label, double X, double[]? Time, double[][]?
 /// <param name="Unit">Its unit symbol (V, s, %, W or "").</param>
 /// <param name="Values">Per probe, one value per variant (null where the figure does not apply).</param>
 /// <param name="Limits">Bounds drawn across the chart, each with its label.</param>
-public sealed record VariantFigure(string Name, string Unit, IReadOnlyList<double?[]> Values, IReadOnlyList<(string Label, double Value)> Limits);
+public sealed record VariantFigure(string Name, string Unit, IReadOnlyList<double?[]> Values, IReadOnlyList<(string Label, double Value)> Limits)
+{
+    /// <summary>Its own horizontal axis (one value per variant) instead of the set's <see cref="Variant.X"/>; null for the set's.</summary>
+    public FigureAxis? Axis { get; init; }
+
+    /// <summary>True to draw the values as unjoined points (a scatter of samples), false to join them in variant order.</summary>
+    public bool PointsOnly { get; init; }
+
+    /// <summary>A line under the chart's heading (its statistics, say); null for none.</summary>
+    public string? Note { get; init; }
+
+    /// <summary>The study's outcome in one line, shown under the heading (a Monte Carlo run's yield, say); null for none.</summary>
+    public string? Outcome { get; init; }
+}
+
+/// <summary>A horizontal axis of one figure's chart.</summary>
+/// <param name="Label">The axis's name, e.g. a key path.</param>
+/// <param name="Unit">Its unit symbol.</param>
+/// <param name="Values">One value per variant, in variant order.</param>
+public sealed record FigureAxis(string Label, string Unit, IReadOnlyList<double> Values);
 
 /// <summary>
 /// A study of variants for its page: a chart per figure, the best point or the limits marked, each variant's waveforms a
-/// click away. Sweeps and termination studies fill it; another study (a Monte Carlo run, say) can fill it the same way.
+/// click away. Sweeps and termination studies fill it; a Monte Carlo run fills it with a chart per limited figure against its own key (<see cref="VariantFigure.Axis"/>).
 /// </summary>
 /// <param name="Title">The page's heading.</param>
 /// <param name="XLabel">The horizontal axis's name.</param>
@@ -36,4 +55,7 @@ public sealed record VariantSet(string Title, string XLabel, string XUnit, bool 
 
     /// <summary>A note under the heading (what was varied, what the verdicts were held to).</summary>
     public string? Note { get; init; }
+
+    /// <summary>The study's outcome in one line, shown under the heading (a Monte Carlo run's yield, say); null for none.</summary>
+    public string? Outcome { get; init; }
 }

@@ -1,4 +1,4 @@
-// WaveSim's page of a study of variants (a sweep, a termination comparison): a chart per figure over the variants with the
+// WaveSim's page of a study of variants (a sweep, a termination comparison, Monte Carlo samples): a chart per figure over the variants with the
 // best point and the limits marked; a click on a point shows that variant's waveforms. Reachable as window.wavesimPage.
 (function () {
   "use strict";
@@ -28,6 +28,19 @@
     return eng(x, data.xUnit, 3);
   }
 
+  // A figure may carry its own horizontal axis (a Monte Carlo figure against its key); the chart needs it ascending, so
+  // its variants are drawn in that order and fig.order maps a drawn index back to the variant.
+  function xOf(fig, k) { return fig.axis ? fig.axis.values[k] : data.xs[k]; }
+  function arrange(fig) {
+    var n = data.xs.length, order = [];
+    for (var k = 0; k < n; k++) order.push(k);
+    if (fig.axis) order.sort(function (a, b) { return (fig.axis.values[a] - fig.axis.values[b]) || (a - b); });
+    fig.order = order;
+    fig.shown = [];
+    data.probes.forEach(function (p, i) { if (fig.values[i].some(function (v) { return v !== null; })) fig.shown.push(i); });
+    return [order.map(function (k) { return xOf(fig, k); })].concat(fig.shown.map(function (i) { return order.map(function (k) { return fig.values[i][k]; }); }));
+  }
+
   function marks(fig) {
     return function (u) {
       var ctx = u.ctx, b = u.bbox, d = devicePixelRatio;
@@ -42,7 +55,7 @@
       });
       [[data.best, "#2a7d2e", "best"], [page.selected, "#222222", "shown"]].forEach(function (m) {
         if (m[0] === null || m[0] === undefined) return;
-        var x = Math.round(u.valToPos(data.xs[m[0]], "x", true)) + 0.5;
+        var x = Math.round(u.valToPos(xOf(fig, m[0]), "x", true)) + 0.5;
         ctx.strokeStyle = m[1]; ctx.lineWidth = 1.5 * d; ctx.setLineDash(m[2] === "best" ? [] : [3 * d, 3 * d]);
         ctx.beginPath(); ctx.moveTo(x, b.top); ctx.lineTo(x, b.top + b.height); ctx.stroke();
         ctx.setLineDash([]); ctx.fillStyle = m[1]; ctx.textBaseline = "top";
@@ -56,30 +69,36 @@
     var head = document.createElement("h2");
     head.textContent = fig.name;
     box.appendChild(head);
+    if (fig.note) { var p = document.createElement("p"); p.className = "note"; p.textContent = fig.note; box.appendChild(p); }
     var el = document.createElement("div");
     el.className = "chart"; el.setAttribute("data-figure", fig.name);
     box.appendChild(el);
     var width = Math.max(300, el.clientWidth || 1000);
+    var xLabel = fig.axis ? fig.axis.label : data.xLabel;
+    var xFmt = fig.axis ? function (v) { return eng(v, fig.axis.unit, 4); } : xText;
+    var rows = arrange(fig);
     var u = new uPlot({
       width: width, height: 280,
       scales: { x: { time: false } },
       legend: { show: true, live: true },
       axes: [
-        { label: data.xLabel, values: function (u, vals) { return vals.map(xText); }, size: 44,
-          splits: data.categorical ? function () { return data.xs.slice(); } : undefined },
+        { label: xLabel, values: function (u, vals) { return vals.map(xFmt); }, size: 44,
+          splits: data.categorical && !fig.axis ? function () { return data.xs.slice(); } : undefined },
         { label: fig.name, values: function (u, vals) { return vals.map(function (v) { return eng(v, fig.unit, 3); }); }, size: 74 },
       ],
-      series: [{ label: data.xLabel, value: function (u, v) { return v === null ? "-" : xText(v); } }].concat(data.probes.map(function (p, i) {
-        return { label: p, stroke: colour(i), width: 1.5, points: { show: true, size: 7, fill: colour(i) },
+      series: [{ label: xLabel, value: function (u, v) { return v === null ? "-" : xFmt(v); } }].concat(fig.shown.map(function (i) {
+        var s = { label: data.probes[i], stroke: colour(i), width: 1.5, points: { show: true, size: 7, fill: colour(i) },
           value: function (u, v) { return eng(v, fig.unit, 4); } };
+        if (fig.pointsOnly) s.paths = function () { return null; };
+        return s;
       })),
       cursor: { drag: { x: false, y: false } },
       hooks: { draw: [marks(fig)] },
-    }, [data.xs].concat(fig.values), el);
+    }, rows, el);
     var down = null;
     u.over.addEventListener("mousedown", function (e) { down = [e.clientX, e.clientY]; });
     u.over.addEventListener("mouseup", function (e) {
-      if (down && Math.abs(e.clientX - down[0]) < 3 && Math.abs(e.clientY - down[1]) < 3 && u.cursor.idx !== null) select(u.cursor.idx);
+      if (down && Math.abs(e.clientX - down[0]) < 3 && Math.abs(e.clientY - down[1]) < 3 && u.cursor.idx !== null) select(fig.order[u.cursor.idx]);
       down = null;
     });
     page.charts.push(u);
