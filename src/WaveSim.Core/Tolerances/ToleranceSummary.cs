@@ -29,7 +29,7 @@ public static class ToleranceSummary
                 ["key"] = k.KeyPath,
                 ["distribution"] = k.Distribution.ToString(),
                 ["unit"] = ScenarioKeys.Unit(k.Distribution.Dimension),
-                ["nominal"] = r.Nominal[j],
+                ["nominal"] = k.Distribution.Name(r.Nominal[j]) is { } name ? (JsonNode?)name : r.Nominal[j],
             }).ToArray()),
             ["limits"] = new JsonArray(limits.Select(l => (JsonNode)JsonValue.Create(l.ToString())).ToArray()),
         };
