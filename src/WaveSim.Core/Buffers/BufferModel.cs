@@ -25,6 +25,9 @@ public sealed record BufferModel
     /// <summary>Polarity (Non-Inverting or Inverting), as written; null when not given.</summary>
     public string? Polarity { get; init; }
 
+    /// <summary>True when <see cref="Polarity"/> is Inverting: the pin goes low where the input goes high.</summary>
+    public bool Inverts => string.Equals(Polarity?.Trim(), "Inverting", StringComparison.OrdinalIgnoreCase);
+
     /// <summary>Enable (Active-High or Active-Low), as written; null when not given.</summary>
     public string? Enable { get; init; }
 

@@ -7,7 +7,7 @@ using WaveSim.Core.Tolerances;
 namespace WaveSim.Core.Output;
 
 /// <summary>
-/// Writes and reads montecarlo.csv: one row per sample (or corner) in index order: <c>index</c>, each varied key (SI),
+/// Writes and reads montecarlo.csv: one row per sample (or corner) in index order: <c>index</c>, each varied key (SI; a buffer's corner by its name),
 /// <c>&lt;probe&gt;.&lt;figure&gt;</c> for every probe and figure, then <c>pass:&lt;limit&gt;</c> (1 or 0) per limit and
 /// <c>pass</c> (every limit met). Invariant culture, round-trip doubles, an empty cell where a figure does not apply; a
 /// shard writes the same columns for its own rows, and the rows read back give the very same doubles.
@@ -35,7 +35,7 @@ public static class MonteCarloCsv
         foreach (var p in r.Points)
         {
             csv.WriteField(p.Index.ToString(CultureInfo.InvariantCulture));
-            foreach (double v in p.Values) csv.WriteField(CsvNumber.Format(v));
+            for (int j = 0; j < p.Values.Count; j++) csv.WriteField(r.Keys[j].Distribution.Name(p.Values[j]) ?? CsvNumber.Format(p.Values[j]));
             foreach (var f in p.Figures)
                 foreach (string name in SignalFigures.FigureNames)
                     csv.WriteField(f.GetNumber(name) is { } x ? CsvNumber.Format(x) : "");
@@ -73,7 +73,10 @@ public static class MonteCarloCsv
                 : throw new InputException($"{name}: line {line}: column '{expected[i]}': '{rec[i]}' is not a number");
             if (!int.TryParse(rec[0], NumberStyles.None, CultureInfo.InvariantCulture, out int index))
                 throw new InputException($"{name}: line {line}: column 'index': '{rec[0]}' is not a sample index");
-            var values = Enumerable.Range(1, nk).Select(i => Cell(i) ?? throw new InputException($"{name}: line {line}: column '{expected[i]}' is empty")).ToArray();
+            double Key(int i) => template.Keys[i - 1].Distribution.Choices is { } names
+                ? names.ToList().IndexOf(rec[i]) is var c and >= 0 ? c : throw new InputException($"{name}: line {line}: column '{expected[i]}': '{rec[i]}' is not one of {string.Join(", ", names)}")
+                : Cell(i) ?? throw new InputException($"{name}: line {line}: column '{expected[i]}' is empty");
+            var values = Enumerable.Range(1, nk).Select(Key).ToArray();
             var figures = template.Probes.Select((_, p) => FigureNumbers.ToFigures(Enumerable.Range(1 + nk + p * nf, nf).Select(Cell).ToArray())).ToArray();
             rows.Add(new SweepPointResult(index, values, figures));
         }

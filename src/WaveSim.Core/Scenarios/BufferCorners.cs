@@ -39,6 +39,26 @@ public static class BufferCorners
             : s with { Line = LineWith(s.Line, path, 0, keyPath, corner) };
     }
 
+    /// <summary>The corner index (0 typ, 1 min, 2 max) of the buffer at <paramref name="keyPath"/> in <paramref name="s"/>.</summary>
+    /// <exception cref="InputException">No buffer there, or a path that names none.</exception>
+    public static int Read(Scenario s, string keyPath)
+    {
+        ArgumentNullException.ThrowIfNull(s);
+        var path = KeyPath.Parse(keyPath);
+        if (path.Parts[0].Name == "source")
+            return (int)(s.Source.Buffer ?? throw new InputException($"{keyPath}: the source has no buffer")).Corner;
+        var load = path.Parts.Length == 3 ? s.Load : LoadAt(s.Line, path, 0, keyPath);
+        return (int)(load.Buffer ?? throw new InputException($"{keyPath}: that load has no buffer")).Corner;
+    }
+
+    static LoadSpec LoadAt(IReadOnlyList<LineElement> line, KeyPath path, int at, string keyPath)
+    {
+        var p = path.Parts;
+        if (at + 2 >= p.Length || p[at] is not { Name: "line", Index: { } i } || i >= line.Count || line[i] is not Branch br || p[at + 1].Name != "branch")
+            throw new InputException($"{keyPath}: expected source.buffer.corner, load.buffer.corner or line[i].branch.load.buffer.corner naming a branch");
+        return p[at + 2].Name == "load" ? br.Load : LoadAt(br.Line, path, at + 2, keyPath);
+    }
+
     static BufferSpec Corner_(BufferSpec b, Corner corner, string keyPath)
     {
         try { b.Model.RequireCorner(corner); }

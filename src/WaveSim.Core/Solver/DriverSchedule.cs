@@ -6,7 +6,7 @@ namespace WaveSim.Core.Solver;
 /// <summary>
 /// When a buffer driver switches and how: its edges start where the scenario's waveform would start its ramps (a step at
 /// <c>delay</c>; a pulse or trapezoid at each ramp's start; bits at each boundary where the level changes); before the first
-/// edge it holds the first state. Each edge follows its switching table (<see cref="SwitchingCoefficients"/>), and an edge
+/// edge it holds the first state; an Inverting model drives each state the other way. Each edge follows its switching table (<see cref="SwitchingCoefficients"/>), and an edge
 /// that starts before the previous one has finished carries on from where that one stands: the table is mapped linearly
 /// so that it starts at the present Ku, Kd and ends at its own end values.
 /// </summary>
@@ -28,6 +28,12 @@ internal sealed class DriverSchedule
         _rise = SwitchingCoefficients.For(buffer.Model, buffer.Corner, rising: true);
         _fall = SwitchingCoefficients.For(buffer.Model, buffer.Corner, rising: false);
         var edges = Edges(source, duration, out _firstHigh);
+        // An inverting model drives the opposite state of the waveform's: every edge and the first state flip.
+        if (buffer.Model.Inverts)
+        {
+            _firstHigh = !_firstHigh;
+            edges = [.. edges.Select(e => (e.T, !e.Rising))];
+        }
         _start = edges.Select(e => e.T).ToArray();
         _rising = edges.Select(e => e.Rising).ToArray();
         _from = new (double, double)[edges.Count];

@@ -29,6 +29,12 @@ public sealed record ToleranceDistribution(DistributionKind Kind, Dimension Dime
     /// <summary>A tolerance still to be applied to the scenario's value (<see cref="Resolve"/>); null once resolved.</summary>
     public double? ToleranceFraction { get; init; }
 
+    /// <summary>
+    /// The names of a named choice's values (a buffer's corner: typ, min, max), indexed by the value's code; null for numbers.
+    /// <see cref="Parameters"/> then holds the codes of the listed names in the listed order.
+    /// </summary>
+    public IReadOnlyList<string>? Choices { get; init; }
+
     /// <summary>Largest number of values in a discrete choice.</summary>
     public const int MaxChoices = 1000;
 
@@ -64,6 +70,43 @@ public sealed record ToleranceDistribution(DistributionKind Kind, Dimension Dime
         var (values, dim) = Sweeps.SweepAxis.ReadValues(whole, items);
         return new ToleranceDistribution(DistributionKind.Choice, dim, values);
     }
+
+    /// <summary>
+    /// Reads a list of names (<c>typ,min,max</c>) as a choice whose values are the names' codes, their index in
+    /// <paramref name="names"/>; an error names the <c>text</c> parameter.
+    /// </summary>
+    /// <param name="text">The list as written.</param>
+    /// <param name="whole">The whole KEY=DIST text, for messages.</param>
+    /// <param name="names">Every name the key takes, in code order.</param>
+    /// <param name="what">What one name is, for messages (e.g. "corner").</param>
+    /// <exception cref="InputException">A distribution other than a list, fewer than two names, or a name not in <paramref name="names"/>.</exception>
+    public static ToleranceDistribution ParseNames(string text, string whole, IReadOnlyList<string> names, string what)
+    {
+        ArgumentNullException.ThrowIfNull(text);
+        ArgumentNullException.ThrowIfNull(names);
+        string expected = string.Join(",", names);
+        if (text.Contains('(')) throw Bad(whole, $"a {what} is a name, so the key takes a list such as {expected}, not a distribution");
+        var items = text.Split(',', StringSplitOptions.TrimEntries);
+        if (items.Length < 2) throw Bad(whole, $"expected a list of two or more names, e.g. {expected}");
+        if (items.Length > MaxChoices) throw Bad(whole, $"more than {MaxChoices} values");
+        var codes = new double[items.Length];
+        for (int i = 0; i < items.Length; i++)
+        {
+            int code = names.ToList().FindIndex(n => n.Equals(items[i], StringComparison.OrdinalIgnoreCase));
+            if (code < 0) throw Bad(whole, $"'{items[i]}' is not a {what}; expected {string.Join(", ", names)}");
+            codes[i] = code;
+        }
+        return new ToleranceDistribution(DistributionKind.Choice, Dimension.Number, codes) { Choices = names };
+    }
+
+    /// <summary>A value as montecarlo.csv and summary.json write it: a named choice's name; null for a number.</summary>
+    public string? Name(double value) => Choices is { } c && value >= 0 && value < c.Count && value == Math.Floor(value) ? c[(int)value] : null;
+
+    /// <summary>
+    /// The number a value ranks by in the sensitivity (Spearman) and the scatter: a named choice's position in the listed
+    /// order (0 for the first name listed), −1 for a name not listed (only a corner run's nominal can be one); the value itself for numbers.
+    /// </summary>
+    public double RankValue(double value) => Choices is null ? value : Parameters.ToList().IndexOf(value);
 
     static ToleranceDistribution Normal(string inner, string whole)
     {
@@ -150,7 +193,7 @@ public sealed record ToleranceDistribution(DistributionKind Kind, Dimension Dime
         {
             DistributionKind.Normal => $"normal({Show(Parameters[0], Dimension)}, {Show(Parameters[1], Dimension)})",
             DistributionKind.Uniform => $"uniform({Show(Parameters[0], Dimension)}..{Show(Parameters[1], Dimension)})",
-            _ => string.Join(",", Parameters.Select(p => Show(p, Dimension))),
+            _ => string.Join(",", Parameters.Select(p => Name(p) ?? Show(p, Dimension))),
         };
     }
 

@@ -13,7 +13,11 @@ public sealed record ToleranceKey(string KeyPath, ToleranceDistribution Distribu
         int eq = text.IndexOf('=');
         if (eq <= 0 || eq == text.Length - 1)
             throw new InputException($"'{text}': expected KEY=DIST, e.g. load.r=tol(5%), line[0].segment.z0=normal(50ohm, 2ohm) or load.c=uniform(1..3 pF)") { Parameter = "text" };
-        return new ToleranceKey(text[..eq].Trim(), ToleranceDistribution.Parse(text[(eq + 1)..], text));
+        string key = text[..eq].Trim();
+        // A buffer's corner is a name: its values are a list of corners, drawn (or taken as corners) like a numeric choice.
+        return new ToleranceKey(key, Scenarios.BufferCorners.IsCornerKey(key)
+            ? ToleranceDistribution.ParseNames(text[(eq + 1)..], text, Scenarios.BufferCorners.Names, "corner")
+            : ToleranceDistribution.Parse(text[(eq + 1)..], text));
     }
 
     /// <summary>The key as written back, KEY=DIST with SI values.</summary>

@@ -52,7 +52,7 @@ public static class TolerancePictures
         ArgumentNullException.ThrowIfNull(limit);
         string unit = FigureSelector.Unit(limit.Target.Figure);
         var pts = r.Points.Where(p => r.Value(p, limit.Target) is not null)
-            .Select(p => (X: p.Values[keyIndex], Y: r.Value(p, limit.Target)!.Value)).OrderBy(p => p.X).ToArray();
+            .Select(p => (X: r.Keys[keyIndex].Distribution.RankValue(p.Values[keyIndex]), Y: r.Value(p, limit.Target)!.Value)).OrderBy(p => p.X).ToArray();
         if (pts.Length == 0) return null;
         var key = r.Keys[keyIndex];
         string keyUnit = Scenarios.ScenarioKeys.Unit(key.Distribution.Dimension) is var u && u == "ohm" ? "\u03a9" : Scenarios.ScenarioKeys.Unit(key.Distribution.Dimension);

@@ -61,6 +61,13 @@ public sealed class ToleranceSet
             var k = keys[i];
             try
             {
+                if (k.Distribution.Choices is not null)
+                {
+                    // A named key (a buffer's corner): its nominal is the scenario's own corner; a path without a buffer is refused here.
+                    nominal[i] = BufferCorners.Read(scenario, k.KeyPath);
+                    resolved[i] = k;
+                    continue;
+                }
                 var key = ScenarioValues.KeyAt(scenario, k.KeyPath);
                 var dim = k.Distribution.ToleranceFraction is null ? k.Distribution.Dimension : key.Preferred;
                 // A key the scenario leaves unset (a load's c) has the distribution's centre as nominal; a tolerance needs a value.
@@ -107,7 +114,7 @@ public sealed class ToleranceSet
             Scenario v;
             try { v = ScenarioValues.With(scenario, changes); }
             catch (InputException ex)
-            { throw new InputException($"{what} {i} ({string.Join(", ", changes.Select(c => c.KeyPath + "=" + ScenarioKeys.Format(c.Value, c.Dimension)))}): {ex.Message} (draws are refused, not drawn again: narrow the distribution)"); }
+            { throw new InputException($"{what} {i} ({string.Join(", ", changes.Select((c, j) => c.KeyPath + "=" + (resolved[j].Distribution.Name(c.Value) ?? ScenarioKeys.Format(c.Value, c.Dimension))))}): {ex.Message} (draws are refused, not drawn again: narrow the distribution)"); }
             Solver.GridPlan? plan = null;
             if (!options.Force)
             {

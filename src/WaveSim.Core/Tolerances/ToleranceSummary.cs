@@ -29,7 +29,7 @@ public static class ToleranceSummary
                 ["key"] = k.KeyPath,
                 ["distribution"] = k.Distribution.ToString(),
                 ["unit"] = ScenarioKeys.Unit(k.Distribution.Dimension),
-                ["nominal"] = r.Nominal[j],
+                ["nominal"] = k.Distribution.Name(r.Nominal[j]) is { } name ? (JsonNode?)name : r.Nominal[j],
             }).ToArray()),
             ["limits"] = new JsonArray(limits.Select(l => (JsonNode)JsonValue.Create(l.ToString())).ToArray()),
         };
@@ -81,7 +81,7 @@ public static class ToleranceSummary
             {
                 [r.Corners ? "corner" : "sample"] = worst.Index,
                 ["value"] = upper ? st.Max : st.Min,
-                ["values"] = new JsonObject(r.Keys.Select((k, j) => KeyValuePair.Create(k.KeyPath, (JsonNode?)worst.Values[j]))),
+                ["values"] = new JsonObject(r.Keys.Select((k, j) => KeyValuePair.Create(k.KeyPath, k.Distribution.Name(worst.Values[j]) is { } n ? (JsonNode?)n : worst.Values[j]))),
             };
         }
         return o;
@@ -95,7 +95,7 @@ public static class ToleranceSummary
         var y = held.Select(p => r.Value(p, f)!.Value).ToArray();
         var list = new List<(string, double, int)>();
         for (int j = 0; j < r.Keys.Count; j++)
-            if (ToleranceStatistics.Spearman(held.Select(p => p.Values[j]).ToArray(), y) is { } rho) list.Add((r.Keys[j].KeyPath, rho, j));
+            if (ToleranceStatistics.Spearman(held.Select(p => r.Keys[j].Distribution.RankValue(p.Values[j])).ToArray(), y) is { } rho) list.Add((r.Keys[j].KeyPath, rho, j));
         return list.OrderByDescending(t => Math.Abs(t.Item2)).ThenBy(t => t.Item3).Select(t => (t.Item1, t.Item2)).ToArray();
     }
 }

@@ -107,6 +107,31 @@ simulation: { duration: 60 ns }
     }
 
     [Fact]
+    public void An_inverting_model_drives_high_before_the_step_and_low_after_it()
+    {
+        // Polarity Inverting: the pin takes the opposite state of the waveform's. Into R to ground the pin starts at the pullup's
+        // load-line level (V/R = −I_pu(3.3 − V), by bisection here) and ends at the pulldown's, which is 0 V with nothing to
+        // pull against (Ohm's law); the same file without the line does the opposite.
+        using var files = new ReceiverFiles();
+        var pu = IvCurve.Create(Pullup, "pu");
+        const double r = 100;
+        double high = Bisect(v => v / r + pu.Current(3.3 - v), 0, 3.3);
+        File.WriteAllText(Path.Combine(files.Folder, "drv.ibs"), DriverFile().Replace("Model_type Output\n", "Model_type Output\nPolarity Inverting\n", StringComparison.Ordinal));
+        File.WriteAllText(files.Scenario, """
+source: { buffer: { file: drv.ibs, model: drv }, waveform: step, delay: 5 ns }
+line: [ { segment: { length: 0.1 m, z0: 50 ohm, delay: 0.5 ns } } ]
+load: { r: 100 ohm }
+probes: [ { name: rx, at: load } ]
+simulation: { duration: 60 ns }
+""");
+        var s = ScenarioLoader.Load(files.Scenario);
+        Assert.True(s.Source.Buffer!.Model.Inverts);
+        var run = Simulate.Solve(s);
+        Assert.True(Math.Abs(run.Probe("rx").Volts[0] - high) <= 1e-3 * high, $"start {run.Probe("rx").Volts[0]:F5} V vs {high:F5} V");
+        Assert.True(Math.Abs(run.Probe("rx").Volts[^1]) <= 1e-3, $"end {run.Probe("rx").Volts[^1]:F5} V vs 0 V");
+    }
+
+    [Fact]
     public void A_lossless_line_between_a_buffer_driver_and_a_clamped_receiver_follows_the_graphical_solution()
     {
         // Bergeron's method (from memory; in most signal-integrity texts), with I counted from the driver end A to the receiver
