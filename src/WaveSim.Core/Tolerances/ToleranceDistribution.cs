@@ -206,7 +206,7 @@ public sealed record ToleranceDistribution(DistributionKind Kind, Dimension Dime
         {
             DistributionKind.Normal => $"normal({Read(Parameters[0])}, {Read(Parameters[1])})",
             DistributionKind.Uniform => $"uniform({Read(Parameters[0])}..{Read(Parameters[1])})",
-            _ => string.Join(",", Parameters.Select(Read)),
+            _ => string.Join(",", Parameters.Select(p => Name(p) ?? Read(p))),
         };
     }
 
