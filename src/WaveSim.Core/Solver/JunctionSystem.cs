@@ -21,6 +21,9 @@ internal sealed class JunctionSystem
     // voltages per unit part current, and the parts' voltages and start-of-step currents.
     readonly int _k;
     readonly double[][] _w = [];
+    // The nonzero entries of each response column (a part at one end of a line moves only that end's unknowns).
+    readonly int[][] _wAt = [];
+    readonly double[][] _wVal = [];
     readonly PartEquations? _parts;
     readonly double[] _v0 = [], _vPart = [], _iNow = [];
 
@@ -70,6 +73,13 @@ internal sealed class JunctionSystem
             }
             // The step carries the trapezoidal mean of the part's current: ½ of it is the unknown end-of-step current.
             _parts = new PartEquations(net.Nonlinear, m, 0.5);
+            _wAt = new int[_k][]; _wVal = new double[_k][];
+            for (int q = 0; q < _k; q++)
+            {
+                var w = _w[q];
+                _wAt[q] = Enumerable.Range(0, _n).Where(r => w[r] != 0).ToArray();
+                _wVal[q] = _wAt[q].Select(r => w[r]).ToArray();
+            }
             _v0 = new double[_k]; _vPart = new double[_k]; _iNow = new double[_k];
         }
     }
@@ -157,8 +167,9 @@ internal sealed class JunctionSystem
             parts[q].Average = 0.5 * (_iNow[q] + iNext);
             _iNow[q] = iNext;
             double s = 0.5 * iNext;
-            var w = _w[q];
-            for (int r = 0; r < _n; r++) _x[r] += s * w[r];
+            int[] at = _wAt[q];
+            double[] w = _wVal[q];
+            for (int e = 0; e < at.Length; e++) _x[at[e]] += s * w[e];
         }
     }
 

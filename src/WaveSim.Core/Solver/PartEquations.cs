@@ -131,15 +131,20 @@ internal sealed class PartEquations
         double G(double y) { last = law.Current(y, out slope); return y - rest - m * _c * last; }
         bool Found(double y, out double at, out double i) { at = y; G(y); i = last; return true; }
         x = double.IsFinite(guess) ? guess : rest;
-        double gx = G(x);
+        double at = x, lo0, hi0;
+        last = law.Piece(x, out slope, out lo0, out hi0);
+        double gx = x - rest - m * _c * last;
         current = last;
         double tol = 1e-13 * Math.Max(1, Math.Abs(rest));
         if (Math.Abs(gx) <= tol) return true;
-        // One Newton step first: on the law's segment holding the root it lands on the root (to rounding).
+        // One Newton step first: on the law's piece holding the root it lands on the root (to rounding); when it lands
+        // inside the piece the guess was on, that piece's line gives the current there without another evaluation.
         double d = 1 - m * _c * slope;
         if (d > 0)
         {
-            double y = x - gx / d, gy = G(y);
+            double y = x - gx / d;
+            if (y >= lo0 && y < hi0) { current = last + slope * (y - at); x = y; return true; }
+            double gy = G(y);
             if (Math.Abs(gy) <= tol) { x = y; current = last; return true; }
         }
         // A bracket: with slope ≥ 1 the root is within |g(x)| of x; wider if the law falls somewhere.

@@ -12,10 +12,13 @@ internal sealed class PartLaw : IPartLaw
     readonly double[] _v, _i, _s;
     int _hint;
 
-    public PartLaw(IvCurve curve)
+    public PartLaw(IvCurve curve) : this([.. curve.Voltages], [.. curve.Currents]) { }
+
+    /// <summary>A law through the points (<paramref name="v"/>[k], <paramref name="i"/>[k]), v increasing, extrapolated with the end slopes.</summary>
+    public PartLaw(double[] v, double[] i)
     {
-        _v = [.. curve.Voltages];
-        _i = [.. curve.Currents];
+        _v = v;
+        _i = i;
         _s = new double[_v.Length - 1];
         for (int k = 0; k < _s.Length; k++) _s[k] = (_i[k + 1] - _i[k]) / (_v[k + 1] - _v[k]);
     }
@@ -37,4 +40,16 @@ internal sealed class PartLaw : IPartLaw
         double s = slope = _s[k];
         return v - _v[k] <= _v[k + 1] - v ? _i[k] + s * (v - _v[k]) : _i[k + 1] + s * (v - _v[k + 1]);
     }
+
+    public double Piece(double v, out double slope, out double lo, out double hi)
+    {
+        int k = Segment(v);
+        lo = k == 0 ? double.NegativeInfinity : _v[k];
+        hi = k == _s.Length - 1 ? double.PositiveInfinity : _v[k + 1];
+        double s = slope = _s[k];
+        return v - _v[k] <= _v[k + 1] - v ? _i[k] + s * (v - _v[k]) : _i[k + 1] + s * (v - _v[k + 1]);
+    }
+
+    /// <summary>The table's voltages (V), increasing.</summary>
+    public ReadOnlySpan<double> Voltages => _v;
 }
