@@ -44,6 +44,11 @@ public static class CommandGuard
             error.WriteLine("error: " + OneLine(ex.Message) + " " + ForceHint);
             return ExitCodes.BadInput;
         }
+        catch (Core.Scenarios.CoupledFormRefused ex) when (CurrentCommand.Value is { } command)
+        {
+            error.WriteLine("error: " + ex.ForCommand(command));
+            return ExitCodes.BadInput;
+        }
         catch (Exception ex) when (ex is InputException or UnitException or IOException or UnauthorizedAccessException)
         {
             error.WriteLine("error: " + OneLine(ex.Message));

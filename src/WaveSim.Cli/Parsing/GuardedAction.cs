@@ -14,8 +14,11 @@ public sealed class GuardedAction(AsynchronousCommandLineAction inner) : Asynchr
     public override bool ClearsParseErrors => true;
 
     /// <inheritdoc/>
-    public override Task<int> InvokeAsync(ParseResult parseResult, CancellationToken cancellationToken = default) =>
-        ParseErrorReport.Write(parseResult) is int code ? Task.FromResult(code) : inner.InvokeAsync(parseResult, cancellationToken);
+    public override Task<int> InvokeAsync(ParseResult parseResult, CancellationToken cancellationToken = default)
+    {
+        CurrentCommand.Set(parseResult.CommandResult.Command.Name);
+        return ParseErrorReport.Write(parseResult) is int code ? Task.FromResult(code) : inner.InvokeAsync(parseResult, cancellationToken);
+    }
 
     /// <summary>
     /// Guards every subcommand's action and replaces help with <see cref="HelpWithDefaults"/>, which shows each option's default
@@ -45,5 +48,9 @@ public sealed class GuardedSyncAction(SynchronousCommandLineAction inner) : Sync
     public override bool ClearsParseErrors => true;
 
     /// <inheritdoc/>
-    public override int Invoke(ParseResult parseResult) => ParseErrorReport.Write(parseResult) ?? inner.Invoke(parseResult);
+    public override int Invoke(ParseResult parseResult)
+    {
+        CurrentCommand.Set(parseResult.CommandResult.Command.Name);
+        return ParseErrorReport.Write(parseResult) ?? inner.Invoke(parseResult);
+    }
 }

@@ -51,10 +51,10 @@ public static class CoupledLoader
     internal static bool IsCoupled(YamlMappingNode root) => root.Children.ContainsKey(ConductorsKey);
 
     /// <summary>The error of a single-line reader handed a coupled scenario.</summary>
-    internal static ScenarioException NotHere(YamlMappingNode root, string file)
+    internal static CoupledFormRefused NotHere(YamlMappingNode root, string file)
     {
         var key = root.Children.Keys.First(k => k.Equals(ConductorsKey));
-        return new ScenarioException($"{file}:{key.Start.Line}:{key.Start.Column}: conductors: a coupled scenario (several conductors); this command takes single-line scenarios (line:) only so far; 'run' and 'check' take coupled ones");
+        return new CoupledFormRefused($"{file}:{key.Start.Line}:{key.Start.Column}");
     }
 
     /// <summary>Reads and validates the coupled scenario file at <paramref name="path"/>.</summary>

@@ -49,6 +49,7 @@ public class CoupledCommandTests
             : CliRunner.Run(command, Demo, "--out", cli.PathOf("o"));
         Assert.Equal(2, code);
         Assert.Contains("conductors: a coupled scenario", err);
+        Assert.Contains($"; {command}: this command takes single-line scenarios (line:) only so far", err);
         Assert.Single(err.Trim().Split('\n'));
         Assert.False(Directory.Exists(cli.PathOf("o")));
     }

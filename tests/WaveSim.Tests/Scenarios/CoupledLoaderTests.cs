@@ -93,7 +93,7 @@ simulation:
     public void Line_together_with_conductors_is_refused_and_single_line_readers_refuse_a_coupled_file()
     {
         Assert.Contains("either 'line:'", Error(Good + "\nline:\n  - segment: { length: 1 m, z0: 50 ohm, delay: 5 ns }\n"));
-        var ex = Assert.Throws<ScenarioException>(() => ScenarioLoader.Parse(Good, "pair.yaml"));
+        var ex = Assert.Throws<CoupledFormRefused>(() => ScenarioLoader.Parse(Good, "pair.yaml"));
         Assert.StartsWith("pair.yaml:1:1: conductors:", ex.Message);
     }
 

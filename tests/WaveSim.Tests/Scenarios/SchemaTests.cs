@@ -55,6 +55,53 @@ public class SchemaTests
         ScenarioLoader.Load(path);
     }
 
+    public static IEnumerable<object[]> CoupledExamples() =>
+        Directory.GetFiles(Repository.PathOf("scenarios", "coupled"), "*.yaml").Select(f => new object[] { Path.GetFileName(f) });
+
+    [Theory]
+    [MemberData(nameof(CoupledExamples))]
+    public void Every_coupled_example_validates_against_the_schema_and_loads(string name)
+    {
+        string path = Path.Combine(Root, "scenarios", "coupled", name);
+        var result = Schema().Evaluate(Element(YamlFile(path)), new EvaluationOptions { OutputFormat = OutputFormat.List });
+        Assert.True(result.IsValid, string.Join("; ", (result.Details ?? []).Where(d => d.Errors is not null).SelectMany(d => d.Errors!.Select(e => $"{d.InstanceLocation}: {e.Value}"))));
+        Assert.StartsWith("# yaml-language-server: $schema=../scenario.schema.json", File.ReadAllText(path));
+        CoupledLoader.Load(path);
+    }
+
+    [Fact]
+    public void The_schema_keeps_the_two_forms_apart_and_catches_coupled_mistakes()
+    {
+        string pair = Path.Combine(Root, "scenarios", "coupled", "crosstalk-pair.yaml");
+        var mixed = YamlFile(pair);
+        mixed["line"] = new JsonArray();
+        Assert.False(Schema().Evaluate(Element(mixed)).IsValid);
+        var typo = YamlFile(pair);
+        typo["coupled"]![0]!["section"]!["lenght"] = "1 in";
+        Assert.False(Schema().Evaluate(Element(typo)).IsValid);
+        var unit = YamlFile(pair);
+        unit["coupled"]![0]!["section"]!["l"]![0]![1] = "1.5 pF/in";
+        Assert.False(Schema().Evaluate(Element(unit)).IsValid);
+        var both = YamlFile(pair);
+        both["near"]![0]!["r"] = "10 ohm";   // a source item has only 'at' and 'source'
+        Assert.False(Schema().Evaluate(Element(both)).IsValid);
+        var noMatrices = YamlFile(pair);
+        noMatrices["coupled"]![0]!["section"]!.AsObject().Remove("c");
+        Assert.False(Schema().Evaluate(Element(noMatrices)).IsValid);
+    }
+
+    [Fact]
+    public void Schema_and_coupled_loader_accept_the_same_keys()
+    {
+        var defs = SchemaNode()["$defs"]!;
+        var form = defs["coupledForm"]!;
+        Assert.Equal(CoupledLoader.TopKeys.Order(), Keys(form));
+        Assert.Equal(CoupledLoader.SectionKeys.Order(), Keys(defs["coupledSection"]));
+        Assert.Equal(CoupledLoader.BranchKeys.Order(), Keys(defs["coupledBranch"]));
+        Assert.Equal(CoupledLoader.ProbeKeys.Order(), Keys(form["properties"]!["probes"]!["items"]));
+        Assert.Equal(ScenarioLoader.SourceKeys.Append("invert").Order(), Keys(defs["coupledSource"]));
+    }
+
     [Fact]
     public void A_typo_in_a_key_fails_the_schema()
     {
@@ -71,8 +118,8 @@ public class SchemaTests
     [Fact]
     public void Schema_and_loader_accept_the_same_keys_everywhere()
     {
-        var s = SchemaNode();
-        var defs = s["$defs"]!;
+        var defs = SchemaNode()["$defs"]!;
+        var s = defs["singleLine"]!;
         var item = defs["line"]!["items"]!["properties"]!;
         Assert.Equal(ScenarioLoader.TopKeys.Order(), Keys(s));
         Assert.Equal(ScenarioLoader.SourceKeys.Order(), Keys(s["properties"]!["source"]));
