@@ -92,16 +92,7 @@ public static class CoupledRunFiles
         var probes = new JsonObject();
         foreach (var (p, f) in outcome.Figures)
         {
-            var o = new JsonObject
-            {
-                ["at"] = p.Location,
-                ["position_m"] = p.Position,
-                ["final_V"] = p.Volts[^1],
-                ["max_V"] = p.FigureVolts.Max(),
-                ["min_V"] = p.FigureVolts.Min(),
-                ["final_A"] = p.Amps[^1],
-            };
-            foreach (var kv in f.ToJsonObject()) o[kv.Key] = kv.Value?.DeepClone();
+            var o = RunSummary.ProbeJson(p, f);
             if (outcome.Crosstalk.FirstOrDefault(x => x.Probe == p.Name) is { } xt)
             {
                 o["crosstalk_peak_V"] = xt.PeakV; o["crosstalk_pct"] = xt.Percent; o["crosstalk_time_s"] = xt.TimeS;

@@ -29,6 +29,22 @@ public static class RunSummary
         }).ToArray()),
     };
 
+    /// <summary>A probe's entry in summary.json: where it sits, its levels and its signal figures (single-line and coupled runs alike).</summary>
+    internal static JsonObject ProbeJson(ProbeTrace p, SignalFigures f)
+    {
+        var o = new JsonObject
+        {
+            ["at"] = p.Location,
+            ["position_m"] = p.Position,
+            ["final_V"] = p.Volts[^1],
+            ["max_V"] = p.FigureVolts.Max(),
+            ["min_V"] = p.FigureVolts.Min(),
+            ["final_A"] = p.Amps[^1],
+        };
+        foreach (var kv in f.ToJsonObject()) o[kv.Key] = kv.Value?.DeepClone();
+        return o;
+    }
+
     /// <summary>
     /// The whole summary.json object of a run: the plan, every probe's levels and figures (and its eye when the source is a bit
     /// pattern), and the frequency-domain check when the outcome holds one.
@@ -40,16 +56,7 @@ public static class RunSummary
         var probes = new JsonObject();
         foreach (var (p, f) in outcome.Figures)
         {
-            var o = new JsonObject
-            {
-                ["at"] = p.Location,
-                ["position_m"] = p.Position,
-                ["final_V"] = p.Volts[^1],
-                ["max_V"] = p.FigureVolts.Max(),
-                ["min_V"] = p.FigureVolts.Min(),
-                ["final_A"] = p.Amps[^1],
-            };
-            foreach (var kv in f.ToJsonObject()) o[kv.Key] = kv.Value?.DeepClone();
+            var o = ProbeJson(p, f);
             if (outcome.Eyes.FirstOrDefault(e => e.Probe.Name == p.Name) is { } eye) o["eye"] = eye.ToJsonObject();
             probes[p.Name] = o;
         }
