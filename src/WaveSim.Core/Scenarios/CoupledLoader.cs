@@ -180,16 +180,7 @@ public static class CoupledLoader
     /// </summary>
     static (ConductorMatrix, ConductorMatrix, ConductorMatrix) FromGeometry(YamlMap m)
     {
-        var node = m.Node("geometry")!;
-        if (node is not YamlMappingNode map) throw m.Error(node, m.Join("geometry"), "expected a mapping such as { kind: coupled-microstrip, width: 6 mil, gap: 6 mil, height: 4 mil, er: 4.2 }");
-        var raw = new Dictionary<string, string>();
-        foreach (var (k, v) in map.Children)
-        {
-            string key = ((YamlScalarNode)k).Value ?? "";
-            if (v is not YamlScalarNode sv) throw m.Error(v, m.Join("geometry." + key), "expected a single value");
-            raw[key] = sv.Value ?? "";
-        }
-        string context = $"{m.File}:{node.Start.Line}:{node.Start.Column}: {m.Join("geometry")}";
+        var (raw, context) = SegmentGeometry.Raw(m, "{ kind: coupled-microstrip, width: 6 mil, gap: 6 mil, height: 4 mil, er: 4.2 }");
         CoupledLineParameters pair;
         try { pair = CrossSection.ComputePair(CrossSection.FromDictionary(raw, context)); }
         catch (InputException ex) when (ex is not ScenarioException) { throw new ScenarioException(ex.Message.StartsWith(context, StringComparison.Ordinal) ? ex.Message : context + ": " + ex.Message); }

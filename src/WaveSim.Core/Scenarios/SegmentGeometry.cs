@@ -23,12 +23,14 @@ namespace WaveSim.Core.Scenarios;
 /// </remarks>
 internal static class SegmentGeometry
 {
-    public static Segment Read(YamlMap m, double length, double? r, double? g)
+    /// <summary>
+    /// The <c>geometry</c> mapping of <paramref name="m"/> as key → text, and the "file:line:column: key" prefix its errors
+    /// carry; <paramref name="example"/> is shown when it is not a mapping of single values.
+    /// </summary>
+    public static (Dictionary<string, string> Raw, string Context) Raw(YamlMap m, string example)
     {
-        foreach (string k in new[] { "z0", "delay", "velocity", "eps_eff", "l", "c" })
-            if (m.Has(k)) throw m.Error(m.Node(k)!, m.Join(k), "a segment given by geometry takes its impedance and delay from it: remove this key");
         var node = m.Node("geometry")!;
-        if (node is not YamlMappingNode map) throw m.Error(node, m.Join("geometry"), "expected a mapping such as { kind: microstrip, width: 8 mil, height: 5 mil, er: 4.2 }");
+        if (node is not YamlMappingNode map) throw m.Error(node, m.Join("geometry"), "expected a mapping such as " + example);
         var raw = new Dictionary<string, string>();
         foreach (var (k, v) in map.Children)
         {
@@ -36,7 +38,14 @@ internal static class SegmentGeometry
             if (v is not YamlScalarNode sv) throw m.Error(v, m.Join("geometry." + key), "expected a single value");
             raw[key] = sv.Value ?? "";
         }
-        string context = $"{m.File}:{node.Start.Line}:{node.Start.Column}: {m.Join("geometry")}";
+        return (raw, $"{m.File}:{node.Start.Line}:{node.Start.Column}: {m.Join("geometry")}");
+    }
+
+    public static Segment Read(YamlMap m, double length, double? r, double? g)
+    {
+        foreach (string k in new[] { "z0", "delay", "velocity", "eps_eff", "l", "c" })
+            if (m.Has(k)) throw m.Error(m.Node(k)!, m.Join(k), "a segment given by geometry takes its impedance and delay from it: remove this key");
+        var (raw, context) = Raw(m, "{ kind: microstrip, width: 8 mil, height: 5 mil, er: 4.2 }");
         var spec = CrossSection.FromDictionary(raw, context);
         var pairMode = ReadPairMode(m, spec);
         bool frequency = false;
@@ -53,7 +62,7 @@ internal static class SegmentGeometry
                 throw m.Error(lossNode, m.Join("loss"), "beside a geometry, expected 'frequency' (skin effect and wideband dielectric from the cross-section) or 'constant'");
         }
         return Build(length, spec, pairMode, frequency, r, g,
-            why => m.Error(node, m.Join("geometry"), why), why => m.Error(m.Node("loss")!, m.Join("loss"), why));
+            why => m.Error(m.Node("geometry")!, m.Join("geometry"), why), why => m.Error(m.Node("loss")!, m.Join("loss"), why));
     }
 
     /// <summary>
