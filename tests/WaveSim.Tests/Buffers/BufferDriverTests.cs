@@ -67,17 +67,6 @@ C_comp 0pF NA NA
         return ScenarioLoader.Load(files.Scenario);
     }
 
-    /// <summary>The root of an increasing g on [lo, hi] by bisection.</summary>
-    static double Bisect(Func<double, double> g, double lo, double hi)
-    {
-        for (int i = 0; i < 200; i++)
-        {
-            double mid = 0.5 * (lo + hi);
-            if (g(mid) > 0) hi = mid; else lo = mid;
-        }
-        return 0.5 * (lo + hi);
-    }
-
     [Theory]
     [InlineData(100.0)]
     [InlineData(33.0)]
@@ -95,11 +84,11 @@ load: { r: {{N(r)}} ohm, to: {{to}} }
 probes: [ { name: drv, at: source }, { name: rx, at: load } ]
 simulation: { duration: 60 ns }
 """;
-        double low = Bisect(v => pd.Current(v) - (3.3 - v) / r, 0, 3.3);
+        double low = Bisection.Root(v => pd.Current(v) - (3.3 - v) / r, 0, 3.3);
         var s = Load(files, Net("3.3 V"));
         var run = Simulate.Solve(s);
         Assert.True(Math.Abs(run.Probe("rx").Volts[0] - low) <= 1e-3 * low, $"low {run.Probe("rx").Volts[0]:F5} V vs {low:F5} V");
-        double high = Bisect(v => v / r + pu.Current(3.3 - v), 0, 3.3);
+        double high = Bisection.Root(v => v / r + pu.Current(3.3 - v), 0, 3.3);
         var up = Simulate.Solve(Load(files, Net("0 V")));
         Assert.True(Math.Abs(up.Probe("rx").Volts[^1] - high) <= 1e-3 * high, $"high {up.Probe("rx").Volts[^1]:F5} V vs {high:F5} V");
         Assert.True(Math.Abs(up.Probe("drv").Amps[^1] - high / r) <= 1e-3 * high / r, $"pin current {up.Probe("drv").Amps[^1]:E5} A vs {high / r:E5} A");
@@ -115,7 +104,7 @@ simulation: { duration: 60 ns }
         using var files = new ReceiverFiles();
         var pu = IvCurve.Create(Pullup, "pu");
         const double r = 100;
-        double high = Bisect(v => v / r + pu.Current(3.3 - v), 0, 3.3);
+        double high = Bisection.Root(v => v / r + pu.Current(3.3 - v), 0, 3.3);
         File.WriteAllText(Path.Combine(files.Folder, "drv.ibs"), DriverFile().Replace("Model_type Output\n", "Model_type Output\nPolarity Inverting\n", StringComparison.Ordinal));
         File.WriteAllText(files.Scenario, """
 source: { buffer: { file: drv.ibs, model: drv }, waveform: step, delay: 5 ns }
@@ -163,9 +152,9 @@ simulation: { duration: 30 ns, resolution: 40 }
             double t = k * h;
             double kb = k >= perDelay ? va[k - perDelay] + z0 * ia[k - perDelay] : 0;   // the line starts at rest (all 0 V)
             double ka = k >= perDelay ? vb[k - perDelay] - z0 * ib[k - perDelay] : 0;
-            va[k] = Bisect(v => v + z0 * Driver(v, t) - ka, -20, 20);
+            va[k] = Bisection.Root(v => v + z0 * Driver(v, t) - ka, -20, 20);
             ia[k] = -Driver(va[k], t);
-            vb[k] = Bisect(v => v + z0 * (gnd.Current(v) + power.Current(3.3 - v)) - kb, -20, 20);
+            vb[k] = Bisection.Root(v => v + z0 * (gnd.Current(v) + power.Current(3.3 - v)) - kb, -20, 20);
             ib[k] = gnd.Current(vb[k]) + power.Current(3.3 - vb[k]);
         }
         double worst = 0;

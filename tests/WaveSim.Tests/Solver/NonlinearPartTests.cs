@@ -58,17 +58,6 @@ simulation: {{ duration: 30 ns }}
     static string Table((double V, double I)[] t) =>
         "[" + string.Join(", ", t.Select(p => FormattableString.Invariant($"[{p.V} V, {p.I * 1000} mA]"))) + "]";
 
-    /// <summary>The root of an increasing g on [lo, hi] by bisection.</summary>
-    static double Bisect(Func<double, double> g, double lo, double hi)
-    {
-        for (int i = 0; i < 200; i++)
-        {
-            double mid = 0.5 * (lo + hi);
-            if (g(mid) > 0) hi = mid; else lo = mid;
-        }
-        return 0.5 * (lo + hi);
-    }
-
     [Fact]
     public void A_lossless_line_between_nonlinear_ends_follows_the_graphical_solution()
     {
@@ -98,9 +87,9 @@ simulation: {{ duration: 30 ns, resolution: 40 }}
             double kb = k >= perDelay ? va[k - perDelay] + z0 * ia[k - perDelay] : 0;   // the line starts at rest (all 0 V)
             double ka = k >= perDelay ? vb[k - perDelay] - z0 * ib[k - perDelay] : 0;
             double vsNow = Vs(t);
-            va[k] = Bisect(v => v - z0 * ((vsNow - v) / rs - drv.Current(v)) - ka, -20, 20);
+            va[k] = Bisection.Root(v => v - z0 * ((vsNow - v) / rs - drv.Current(v)) - ka, -20, 20);
             ia[k] = (vsNow - va[k]) / rs - drv.Current(va[k]);
-            vb[k] = Bisect(v => v + z0 * clamp.Current(v) - kb, -20, 20);
+            vb[k] = Bisection.Root(v => v + z0 * clamp.Current(v) - kb, -20, 20);
             ib[k] = clamp.Current(vb[k]);
         }
         double worst = 0;
@@ -132,7 +121,7 @@ probes: [ {{ name: src, at: source }}, {{ name: rx, at: load }} ]
 simulation: {{ duration: 10 ns }}
 ");
         var f = IvCurve.Create(rxTable, "rx");
-        double v = Bisect(x => x + 35 * f.Current(x) - 3.3, 0, 3.3);
+        double v = Bisection.Root(x => x + 35 * f.Current(x) - 3.3, 0, 3.3);
         Assert.InRange(v, 1.5, 2.5);   // on the curve's steep part, away from the linear start
         foreach (string p in new[] { "src", "rx" })
         {

@@ -62,17 +62,6 @@ simulation: {"{"} duration: 40 ns {"}"}
         return ScenarioLoader.Load(files.Scenario);
     }
 
-    /// <summary>The root of an increasing g on [lo, hi] by bisection.</summary>
-    static double Bisect(Func<double, double> g, double lo, double hi)
-    {
-        for (int i = 0; i < 200; i++)
-        {
-            double mid = 0.5 * (lo + hi);
-            if (g(mid) > 0) hi = mid; else lo = mid;
-        }
-        return 0.5 * (lo + hi);
-    }
-
     static readonly ProbeFigure High = new("rx", "high_V");
 
     [Fact]
@@ -88,7 +77,7 @@ simulation: {"{"} duration: 40 ns {"}"}
         {
             int c = (int)p.Values[0];
             var pu = IvCurve.Create([.. Pullup.Select(t => (t.V, Scale[c] * t.I))], "pu");
-            double expected = Bisect(v => v / R + pu.Current(Supply[c] - v), 0, Supply[c]);
+            double expected = Bisection.Root(v => v / R + pu.Current(Supply[c] - v), 0, Supply[c]);
             double got = r.Value(p, High)!.Value;
             Assert.True(Math.Abs(got - expected) <= 1e-3 * expected, $"corner {BufferCorners.Names[c]}: {got:F5} V vs {expected:F5} V");
         }
